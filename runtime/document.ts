@@ -1,0 +1,101 @@
+// The calc document as plain, serialisable data. Everything else (engine, view,
+// record export) reads this; all editing is a pure operation that returns a new one.
+
+/** Title-block fields, printed at the top of every sheet. */
+export interface DocMeta {
+  project: string;
+  job: string;
+  subject: string;
+  preparedBy: string;
+  checkedBy: string;
+  revision: string;
+  date: string;
+}
+
+export const META_KEYS: (keyof DocMeta)[] = [
+  'project', 'job', 'subject', 'preparedBy', 'checkedBy', 'revision', 'date',
+];
+
+/** Fields every cell has. `id` is stable for the life of the document. */
+export interface CellBase {
+  id: string;
+  /** Short human description shown beside the symbol. */
+  label?: string;
+  /** Code clause or published source, shown in the right margin. */
+  clause?: string;
+}
+
+export interface SectionCell extends CellBase {
+  kind: 'section';
+  title: string;
+}
+
+/** Free text with inline math ($...$) and a small Markdown subset. */
+export interface NoteCell extends CellBase {
+  kind: 'note';
+  text: string;
+}
+
+/** A typed value with a unit (e.g. "5000 psi", "1'-6\"") or one of a list of choices. */
+export interface InputCell extends CellBase {
+  kind: 'input';
+  name: string;
+  /** Exactly as typed; a bad value is kept and reported, never dropped. */
+  value: string;
+  /** Display unit; when absent the unit typed in `value` is shown. */
+  unit?: string;
+  /** Allowed range, each a quantity as typed (e.g. "2500 psi"). */
+  min?: string;
+  max?: string;
+  /** When present the input is a pick-list and `value` must be one of these. */
+  choices?: string[];
+  /** Longer explanation than the label. */
+  description?: string;
+}
+
+/** `name = expression`, shown as a hand calc. */
+export interface FormulaCell extends CellBase {
+  kind: 'formula';
+  name: string;
+  expr: string;
+  /** Display unit; also fixes the dimension the formula must have. */
+  unit?: string;
+  /** Significant figures shown (default 4). */
+  precision?: number;
+}
+
+/**
+ * A demand against a capacity (`demand <= capacity` or `capacity >= demand`),
+ * giving a ratio, or any other condition, giving pass or fail only.
+ */
+export interface CheckCell extends CellBase {
+  kind: 'check';
+  /** Optional name, so other cells and scripts can refer to the check. */
+  name?: string;
+  expr: string;
+}
+
+export type Cell = SectionCell | NoteCell | InputCell | FormulaCell | CheckCell;
+export type CellKind = Cell['kind'];
+
+export interface CalcDocument {
+  meta: DocMeta;
+  cells: Cell[];
+}
+
+export function emptyMeta(): DocMeta {
+  return { project: '', job: '', subject: '', preparedBy: '', checkedBy: '', revision: '', date: '' };
+}
+
+/** The name a cell publishes to the graph, if any. */
+export function cellName(cell: Cell): string | undefined {
+  switch (cell.kind) {
+    case 'input':
+    case 'formula':
+      return cell.name;
+    case 'check':
+      return cell.name;
+    default:
+      return undefined;
+  }
+}
