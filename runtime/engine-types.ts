@@ -2,7 +2,7 @@
 // Values are SI base units inside the engine; `display` is the value converted
 // to the cell's display unit and formatted for people.
 
-import type { CalcDocument } from './document.ts';
+import type { CalcDocument } from './document';
 
 export type CellStatus = 'pending' | 'ok' | 'fail' | 'error';
 
