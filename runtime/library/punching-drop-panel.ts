@@ -46,7 +46,7 @@ export function dropPanelCheck(
 const params: LibParam[] = [
   { name: 'Vu', type: 'N', doc: 'factored column reaction' },
   { name: 'qu', type: 'Pa', doc: 'factored uniform load on the slab' },
-  { name: "f'c", type: 'Pa', doc: 'concrete strength' },
+  { name: 'fc', type: 'Pa', doc: 'concrete strength' },
   { name: 'c1', type: 'm', doc: 'column side perpendicular to the edge' },
   { name: 'c2', type: 'm', doc: 'column side parallel to the edge' },
   { name: 'd_drop', type: 'm', doc: 'effective depth through the drop panel / shear cap' },
@@ -54,8 +54,8 @@ const params: LibParam[] = [
   { name: 'x2', type: 'm', doc: 'drop panel size parallel to the edge' },
   { name: 'd_slab', type: 'm', doc: 'effective depth of the slab outside the drop' },
   { name: 'position', type: 'text', choices: POSITIONS, doc: "'interior', 'edge' or 'corner'" },
-  { name: 'φ', type: '1', doc: 'shear strength reduction factor (default 0.75)' },
-  { name: 'λ', type: '1', doc: 'lightweight concrete factor (default 1.0)' },
+  { name: 'phi', type: '1', doc: 'shear strength reduction factor (default 0.75)' },
+  { name: 'lambda', type: '1', doc: 'lightweight concrete factor (default 1.0)' },
   { name: 'edition', type: 'text', choices: EDITIONS, doc: "'318-19' (default) or '318-14'" },
 ];
 

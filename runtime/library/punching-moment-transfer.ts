@@ -69,7 +69,7 @@ export function asMinPunch(vuv: number, bslab: number, bo: number, fy: number, p
 const props = (pick: (p: SectionProperties) => number) =>
   (c1: number, c2: number, d: number, p: string) => pick(sectionProperties(c1, c2, d, position(p)));
 
-const phiParam: LibParam = { name: 'φ', type: '1', doc: 'shear strength reduction factor (default 0.75)' };
+const phiParam: LibParam = { name: 'phi', type: '1', doc: 'shear strength reduction factor (default 0.75)' };
 const R8 = 'ACI 318-19 R8.4.4.2.3 (interior; edge and corner by the same sum over the sides)';
 
 export const functions: LibFunction[] = [
@@ -120,10 +120,10 @@ export const functions: LibFunction[] = [
     name: 'punch_min_steel_needed',
     params: [
       { name: 'vuv', type: 'Pa', doc: 'factored shear stress from Vu alone (no moment)' },
-      { name: "f'c", type: 'Pa', doc: 'concrete strength' },
+      { name: 'fc', type: 'Pa', doc: 'concrete strength' },
       { name: 'd', type: 'm', doc: 'effective depth' },
       phiParam,
-      { name: 'λ', type: '1', doc: 'lightweight concrete factor (default 1.0)' },
+      { name: 'lambda', type: '1', doc: 'lightweight concrete factor (default 1.0)' },
       { name: 'edition', type: 'text', choices: EDITIONS, doc: "'318-19' (default) or '318-14' (no such rule)" },
     ],
     optional: 3,

@@ -67,9 +67,9 @@ export function vuPunchStress(reaction: number, qu: number, c1: number, c2: numb
 }
 
 export const strengthParams: LibParam[] = [
-  { name: "f'c", type: 'Pa', doc: 'specified concrete compressive strength' },
+  { name: 'fc', type: 'Pa', doc: 'specified concrete compressive strength' },
   ...geometryParams,
-  { name: 'λ', type: '1', doc: 'lightweight concrete factor (default 1.0)' },
+  { name: 'lambda', type: '1', doc: 'lightweight concrete factor (default 1.0)' },
   { name: 'edition', type: 'text', choices: EDITIONS, doc: "'318-19' (default) or '318-14'" },
 ];
 
@@ -178,7 +178,7 @@ export const functions: LibFunction[] = [
     name: 'punch_ratio',
     params: [
       loadParams[0], loadParams[1], strengthParams[0], ...geometryParams,
-      { name: 'φ', type: '1', doc: 'strength reduction factor for shear (default 0.75)' },
+      { name: 'phi', type: '1', doc: 'strength reduction factor for shear (default 0.75)' },
       strengthParams[5], strengthParams[6],
     ],
     optional: 3,

@@ -1,0 +1,90 @@
+// Bearing at the column–footing interface (ACI 318-19 §22.8) and the minimum dowels
+// across it (§16.3.4.1). Table 22.8.3.2 and the clause numbers are from memory;
+// the form Bn = 0.85 f'c A1 √(A2/A1), √(A2/A1) ≤ 2, φ = 0.65 is the textbook one.
+
+import { LibraryError, defineFunction, type LibFunction } from './types';
+import { optional, positive } from './support-args';
+
+/**
+ * A2: base of the largest frustum with 1 vertical : 2 horizontal sides wholly inside the
+ * footing, top = the column area A1, column centred (ACI 318-19 §22.8.3.2 / R22.8.3.2).
+ */
+export function a2Frustum(c1: number, c2: number, l: number, b: number, h: number): number {
+  positive('c1', c1);
+  positive('c2', c2);
+  positive('h', h);
+  if (positive('L', l) < c1 || positive('B', b) < c2) {
+    throw new LibraryError('the column is larger than the footing');
+  }
+  // The slope spreads 2h each way at the bottom; the nearest footing edge may stop it sooner.
+  const x = Math.min(2 * h, (l - c1) / 2, (b - c2) / 2);
+  return (c1 + 2 * x) * (c2 + 2 * x);
+}
+
+/** Bn = 0.85 f'c A1 √(A2/A1), √(A2/A1) ≤ 2 (ACI 318-19 Table 22.8.3.2); A2 left out → 0.85 f'c A1. */
+export function bnBearing(fc: number, a1: number, a2?: number): number {
+  positive('fc', fc);
+  positive('A1', a1);
+  const area2 = a2 === undefined ? a1 : positive('A2', a2);
+  if (area2 < a1) throw new LibraryError(`A2 (${area2}) must not be smaller than A1 (${a1})`);
+  return 0.85 * fc * a1 * Math.min(Math.sqrt(area2 / a1), 2);
+}
+
+/** φBn with φ = 0.65 for bearing (ACI 318-19 Table 21.2.1). */
+export function phiBnBearing(fc: number, a1: number, a2?: number): number {
+  return 0.65 * bnBearing(fc, a1, a2);
+}
+
+/** As,min of dowels = 0.005 Ag of the supported column (ACI 318-19 §16.3.4.1). */
+export function asDowelMin(ag: number): number {
+  return 0.005 * positive('Ag', ag);
+}
+
+const bearingParams = [
+  { name: 'fc', type: 'Pa', doc: 'concrete strength of the bearing member' },
+  { name: 'A1', type: 'm^2', doc: 'loaded area' },
+  { name: 'A2', type: 'm^2', doc: 'frustum base area in the support (left out: no confinement increase)' },
+];
+
+export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'a2_frustum',
+    params: [
+      { name: 'c1', type: 'm', doc: 'column side along L' },
+      { name: 'c2', type: 'm', doc: 'column side along B' },
+      { name: 'L', type: 'm', doc: 'footing length' },
+      { name: 'B', type: 'm', doc: 'footing width' },
+      { name: 'h', type: 'm', doc: 'footing thickness' },
+    ],
+    returns: 'm^2',
+    clause: 'ACI 318-19 §22.8.3.2: A2 = base of the 1:2 frustum wholly within the support [from memory]',
+    doc: 'Area A2 for the bearing increase, from a 1 : 2 frustum inside a spread footing',
+    fn: a2Frustum,
+  }),
+  defineFunction({
+    name: 'bn_bearing',
+    params: bearingParams,
+    optional: 1,
+    returns: 'N',
+    clause: "ACI 318-19 Table 22.8.3.2: Bn = 0.85f'c·A1·√(A2/A1), √(A2/A1) ≤ 2",
+    doc: 'Nominal bearing strength of concrete',
+    fn: (fc: number, a1: number, a2?: number) => bnBearing(fc, a1, optional(a2, undefined, (v) => positive('A2', v))),
+  }),
+  defineFunction({
+    name: 'phi_bn_bearing',
+    params: bearingParams,
+    optional: 1,
+    returns: 'N',
+    clause: "ACI 318-19 §22.8.3.2 with φ = 0.65 (Table 21.2.1)",
+    doc: 'Design bearing strength φBn of concrete',
+    fn: (fc: number, a1: number, a2?: number) => phiBnBearing(fc, a1, optional(a2, undefined, (v) => positive('A2', v))),
+  }),
+  defineFunction({
+    name: 'as_dowel_min',
+    params: [{ name: 'Ag', type: 'm^2', doc: 'gross area of the supported column' }],
+    returns: 'm^2',
+    clause: 'ACI 318-19 §16.3.4.1: dowels across the column–footing interface ≥ 0.005Ag',
+    doc: 'Minimum area of dowels between a column and its footing',
+    fn: asDowelMin,
+  }),
+];

@@ -1,0 +1,123 @@
+// Flexure of a spread footing: cantilever moment of the net factored pressure at the
+// column face (ACI 318-19 §13.2.7.1 [from memory]), steel by the Whitney stress block
+// (§22.2.2.4.1), the 0.0018Ag minimum, and the band rule for rectangular footings.
+
+import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
+import { optional, phiFactor, positive } from './support-args';
+import { quFooting } from './footing-area';
+
+/** Mu at the column face = qu · B · ℓ² / 2 with ℓ = (L − c)/2 (ACI 318-19 §13.2.7.1). */
+export function muFooting(pu: number, b: number, l: number, c: number): number {
+  const qu = quFooting(pu, b, l);
+  const arm = (l - positive('c', c)) / 2;
+  if (arm <= 0) throw new LibraryError(`the column (c = ${c}) is not smaller than the footing (L = ${l})`);
+  return (qu * b * arm * arm) / 2;
+}
+
+/** As from Mu ≤ φ As fy (d − a/2), a = As fy / (0.85 f'c b): the Whitney block (ACI 318-19 §22.2.2.4.1). */
+export function asReqFooting(mu: number, b: number, d: number, fc: number, fy: number, phi = 0.9): number {
+  positive('Mu', mu);
+  positive('B', b);
+  positive('d', d);
+  positive('fc', fc);
+  positive('fy', fy);
+  phiFactor(phi);
+  const k = (2 * mu) / (phi * 0.85 * fc * b * d * d);
+  if (k >= 1) throw new LibraryError('footing too shallow: Mu exceeds the capacity of the concrete stress block; increase h');
+  return ((0.85 * fc * b * d) / fy) * (1 - Math.sqrt(1 - k));
+}
+
+/** As,min = 0.0018 B h (ACI 318-19 §13.3.3.1 → §7.6.1.1 / Table 8.6.1.1, deformed bars). */
+export function asMinFooting(b: number, h: number): number {
+  return 0.0018 * positive('B', b) * positive('h', h);
+}
+
+/** The larger of the Whitney steel and the 0.0018Ag minimum. */
+export function asFooting(mu: number, b: number, d: number, h: number, fc: number, fy: number, phi = 0.9): number {
+  if (positive('h', h) <= positive('d', d)) throw new LibraryError(`h (${h}) must exceed d (${d})`);
+  return Math.max(asReqFooting(mu, b, d, fc, fy, phi), asMinFooting(b, h));
+}
+
+/** γs = 2/(β + 1), β = long side / short side (ACI 318-19 Eq. 13.3.3.3). */
+export function gammaSBand(b: number, l: number): number {
+  const beta = Math.max(positive('B', b), positive('L', l)) / Math.min(b, l);
+  return 2 / (beta + 1);
+}
+
+/** Short-direction steel placed in the central band of width equal to the short side (ACI 318-19 §13.3.3.3). */
+export function asBand(asShort: number, b: number, l: number): number {
+  return positive('As (short direction)', asShort) * gammaSBand(b, l);
+}
+
+const flexParams: LibParam[] = [
+  { name: 'Mu', type: 'N*m', doc: 'factored moment at the column face over the width B' },
+  { name: 'B', type: 'm', doc: 'width of the footing section' },
+  { name: 'd', type: 'm', doc: 'effective depth' },
+  { name: 'fc', type: 'Pa', doc: 'concrete strength' },
+  { name: 'fy', type: 'Pa', doc: 'steel yield strength' },
+  { name: 'phi', type: '1', doc: 'flexure φ (default 0.90, tension-controlled)' },
+];
+const bl: LibParam[] = [
+  { name: 'B', type: 'm', doc: 'short side of the footing' },
+  { name: 'L', type: 'm', doc: 'long side of the footing' },
+];
+
+export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'mu_footing',
+    params: [
+      { name: 'Pu', type: 'N', doc: 'factored column load' },
+      { name: 'B', type: 'm', doc: 'footing width (width of the section)' },
+      { name: 'L', type: 'm', doc: 'footing length in the direction of the cantilever' },
+      { name: 'c', type: 'm', doc: 'column side along L' },
+    ],
+    returns: 'N*m',
+    clause: 'ACI 318-19 §13.2.7.1: Mu at the column face = qu·B·((L − c)/2)²/2',
+    doc: 'Factored cantilever moment of a spread footing at the column face',
+    fn: muFooting,
+  }),
+  defineFunction({
+    name: 'as_req_footing',
+    params: flexParams,
+    optional: 1,
+    returns: 'm^2',
+    clause: "ACI 318-19 §22.2.2.4.1 (0.85f'c block, a = As·fy/(0.85f'c·B)); φ = 0.90 tension-controlled (Table 21.2.2)",
+    doc: 'Flexural steel required by the Whitney stress block, before the minimum',
+    fn: (mu: number, b: number, d: number, fc: number, fy: number, phi?: number) =>
+      asReqFooting(mu, b, d, fc, fy, optional(phi, 0.9, phiFactor)),
+  }),
+  defineFunction({
+    name: 'as_min_footing',
+    params: [{ name: 'B', type: 'm', doc: 'width of the section' }, { name: 'h', type: 'm', doc: 'footing thickness' }],
+    returns: 'm^2',
+    clause: 'ACI 318-19 §13.3.3.1 → Table 8.6.1.1 / §24.4.3.2: As,min = 0.0018·Ag (deformed bars) [from memory]',
+    doc: 'Minimum flexural steel of a footing, 0.0018 B h',
+    fn: asMinFooting,
+  }),
+  defineFunction({
+    name: 'as_footing',
+    params: [flexParams[0], flexParams[1], flexParams[2], { name: 'h', type: 'm', doc: 'footing thickness' }, flexParams[3], flexParams[4], flexParams[5]],
+    optional: 1,
+    returns: 'm^2',
+    clause: 'ACI 318-19 §22.2.2.4.1 and As,min = 0.0018·Ag (§13.3.3.1 [from memory]); the larger',
+    doc: 'Flexural steel of a footing: the larger of the required and the minimum',
+    fn: (mu: number, b: number, d: number, h: number, fc: number, fy: number, phi?: number) =>
+      asFooting(mu, b, d, h, fc, fy, optional(phi, 0.9, phiFactor)),
+  }),
+  defineFunction({
+    name: 'gamma_s_band',
+    params: bl,
+    returns: '1',
+    clause: 'ACI 318-19 Eq. 13.3.3.3: γs = 2/(β + 1), β = long/short side',
+    doc: 'Fraction of the short-direction steel placed in the central band of a rectangular footing',
+    fn: gammaSBand,
+  }),
+  defineFunction({
+    name: 'as_band',
+    params: [{ name: 'As_short', type: 'm^2', doc: 'total steel in the short direction' }, ...bl],
+    returns: 'm^2',
+    clause: 'ACI 318-19 §13.3.3.3: γs·As in a band of width equal to the short side, centred on the column',
+    doc: 'Short-direction steel in the central band of a rectangular footing',
+    fn: asBand,
+  }),
+];

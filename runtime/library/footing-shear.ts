@@ -1,0 +1,109 @@
+// Shear in a spread footing under a concentric interior column: two-way at d/2
+// (ACI 318-19 §22.6, λs per edition) and one-way at d from the column face (§22.5).
+// Footings have no stirrups, so 318-19 uses Table 22.5.5.1 (c) with λs and ρw;
+// 318-14 used Vc = 2λ√f'c bw d (§22.5.5.1). The edition argument picks one.
+// Chapter 13 clause numbers here are from memory (not read in a printed copy).
+
+import { defineFunction, type LibFunction, type LibParam } from './types';
+import { EDITIONS, edition, lambdaFactor, nonNegative, optional, positive, type Edition } from './support-args';
+import { lambdaS, sqrtFcShearPsi } from './shear-size-effect';
+import { quFooting } from './footing-area';
+import { psi } from '../units/si';
+
+/** Vu two-way = Pu − qu (c1 + d)(c2 + d), the part of the footing inside the section carries no shear (ACI 318-19 §22.6.4.1). */
+export function vuPunchFooting(pu: number, b: number, l: number, c1: number, c2: number, d: number): number {
+  const qu = quFooting(pu, b, l);
+  const inside = Math.min(positive('c1', c1) + positive('d', d), l) * Math.min(positive('c2', c2) + d, b);
+  return Math.max(0, pu - qu * inside);
+}
+
+/** Vu one-way at d from the face: qu · B · ((L − c)/2 − d) (ACI 318-19 §13.2.7.2, §7.4.3.2). */
+export function vuOnewayFooting(pu: number, b: number, l: number, c: number, d: number): number {
+  const qu = quFooting(pu, b, l);
+  const arm = (l - positive('c', c)) / 2 - positive('d', d);
+  return qu * b * Math.max(0, arm);
+}
+
+export interface OnewayShear {
+  vc: number;
+  rule: string;
+}
+
+/** Vc one-way, no shear reinforcement, Nu = 0: 318-19 Table 22.5.5.1(c) capped at 5λ√f'c bw d; 318-14 2λ√f'c bw d. */
+export function onewayShear(fc: number, bw: number, d: number, rhoW: number, lambda = 1, ed: Edition = '318-19'): OnewayShear {
+  const root = sqrtFcShearPsi(fc) * psi;
+  const area = positive('bw', bw) * positive('d', d);
+  nonNegative('rho_w', rhoW);
+  if (ed === '318-14') {
+    return { vc: 2 * lambda * root * area, rule: "ACI 318-14 §22.5.5.1: Vc = 2λ√f'c·bw·d" };
+  }
+  const c = 8 * lambdaS(d, ed) * lambda * Math.cbrt(rhoW) * root * area;
+  const cap = 5 * lambda * root * area;
+  return c <= cap
+    ? { vc: c, rule: "ACI 318-19 Table 22.5.5.1(c): Vc = 8λsλ(ρw)^(1/3)√f'c·bw·d (Av < Av,min)" }
+    : { vc: cap, rule: "ACI 318-19 §22.5.5.1.1: Vc capped at 5λ√f'c·bw·d" };
+}
+
+const vcParams: LibParam[] = [
+  { name: 'fc', type: 'Pa', doc: 'concrete strength' },
+  { name: 'bw', type: 'm', doc: 'width of the section (footing width B)' },
+  { name: 'd', type: 'm', doc: 'effective depth' },
+  { name: 'rho_w', type: '1', doc: 'As/(bw·d) of the flexural tension steel (unused by 318-14)' },
+  { name: 'lambda', type: '1', doc: 'lightweight concrete factor (default 1.0)' },
+  { name: 'edition', type: 'text', choices: EDITIONS, doc: "'318-19' (default) or '318-14'" },
+];
+const vc = (pick: (s: OnewayShear) => number | string) =>
+  (fc: number, bw: number, d: number, rho: number, lambda?: number, ed?: string) =>
+    pick(onewayShear(fc, bw, d, rho, optional(lambda, 1, lambdaFactor), edition(ed)));
+
+const VC_CLAUSE = "ACI 318-19 Table 22.5.5.1(c) with λs and ρw (no shear reinforcement), ≤ 5λ√f'c bw d; edition '318-14': §22.5.5.1 Vc = 2λ√f'c bw d; √f'c ≤ 100 psi";
+
+export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'vu_punch_footing',
+    params: [
+      { name: 'Pu', type: 'N', doc: 'factored column load' },
+      { name: 'B', type: 'm', doc: 'footing width' },
+      { name: 'L', type: 'm', doc: 'footing length' },
+      { name: 'c1', type: 'm', doc: 'column side along L' },
+      { name: 'c2', type: 'm', doc: 'column side along B' },
+      { name: 'd', type: 'm', doc: 'effective depth of the footing' },
+    ],
+    returns: 'N',
+    clause: 'ACI 318-19 §22.6.4.1: Vu = Pu − qu(c1 + d)(c2 + d), qu = Pu/(B·L)',
+    doc: 'Factored two-way shear at d/2 around a column on a spread footing',
+    fn: vuPunchFooting,
+  }),
+  defineFunction({
+    name: 'vu_oneway_footing',
+    params: [
+      { name: 'Pu', type: 'N', doc: 'factored column load' },
+      { name: 'B', type: 'm', doc: 'footing width (width of the section)' },
+      { name: 'L', type: 'm', doc: 'footing length in the direction of the cantilever' },
+      { name: 'c', type: 'm', doc: 'column side along L' },
+      { name: 'd', type: 'm', doc: 'effective depth' },
+    ],
+    returns: 'N',
+    clause: 'ACI 318-19 §13.2.7.2, §7.4.3.2: section at d from the column face, Vu = qu·B·((L − c)/2 − d)',
+    doc: 'Factored one-way shear at d from the column face of a spread footing',
+    fn: vuOnewayFooting,
+  }),
+  defineFunction({
+    name: 'vc_oneway',
+    params: vcParams,
+    optional: 2,
+    returns: 'N',
+    clause: VC_CLAUSE,
+    doc: 'Nominal one-way shear strength Vc of a slab or footing without stirrups (Nu = 0)',
+    fn: vc((s) => s.vc),
+  }),
+  defineFunction({
+    name: 'vc_oneway_rule',
+    params: vcParams,
+    optional: 2,
+    returns: 'text',
+    clause: VC_CLAUSE,
+    doc: 'Which one-way shear expression vc_oneway used, as text for the hand calc',
+    fn: vc((s) => s.rule),
+  }),
+];
