@@ -1,0 +1,239 @@
+// Pure edits of a calc sheet. Each takes a sheet and returns a new one (the old one
+// is never touched), so undo is a list of sheets and the view can diff by identity.
+
+import type { CalcDocument, Cell, CellKind, DocMeta } from '../document';
+import { cellName } from '../document';
+
+/** An edit that cannot be made (unknown cell, bad name). The message is for people. */
+export class EditError extends Error {
+  override name = 'EditError';
+}
+
+const IDENT = /^[A-Za-z_][A-Za-z0-9_]*$/;
+const ID = /^[A-Za-z0-9_-]+$/;
+
+export function indexOfCell(doc: CalcDocument, id: string): number {
+  const i = doc.cells.findIndex((c) => c.id === id);
+  if (i < 0) throw new EditError(`no cell with id "${id}"`);
+  return i;
+}
+
+/** A cell id not yet used in the sheet, from a readable stem (`f3`, `in12`). */
+export function freshId(doc: CalcDocument, stem: string): string {
+  const base = stem.replace(/[^A-Za-z0-9_-]/g, '') || 'c';
+  const used = new Set(doc.cells.map((c) => c.id));
+  for (let n = 1; ; n++) {
+    const id = `${base}${n}`;
+    if (!used.has(id)) return id;
+  }
+}
+
+/** A name not yet published by any cell: `name`, else `name_2`, `name_3`, ... */
+export function freshName(doc: CalcDocument, name: string): string {
+  const used = new Set(doc.cells.map(cellName).filter((n): n is string => !!n));
+  if (!used.has(name)) return name;
+  const stem = name.replace(/_\d+$/, '');
+  for (let n = 2; ; n++) {
+    const candidate = `${stem}_${n}`;
+    if (!used.has(candidate)) return candidate;
+  }
+}
+
+const STEMS: Record<CellKind, string> = { section: 's', note: 'n', input: 'i', formula: 'f', check: 'k' };
+
+/** A new cell of `kind` with placeholder content that computes. */
+export function blankCell(doc: CalcDocument, kind: CellKind): Cell {
+  const id = freshId(doc, STEMS[kind]);
+  switch (kind) {
+    case 'section': return { id, kind, title: 'New section' };
+    case 'note': return { id, kind, text: 'Note.' };
+    case 'input': return { id, kind, name: freshName(doc, 'x'), value: '1' };
+    case 'formula': return { id, kind, name: freshName(doc, 'y'), expr: '1' };
+    case 'check': return { id, kind, expr: '1 <= 2' };
+  }
+}
+
+function withCells(doc: CalcDocument, cells: Cell[]): CalcDocument {
+  return { ...doc, cells };
+}
+
+/** Inserts `cell` at `index` (end when omitted). Its id must be new. */
+export function insertCell(doc: CalcDocument, cell: Cell, index = doc.cells.length): CalcDocument {
+  if (!ID.test(cell.id)) throw new EditError(`cell id "${cell.id}" may use only letters, digits, _ and -`);
+  if (doc.cells.some((c) => c.id === cell.id)) throw new EditError(`a cell with id "${cell.id}" already exists`);
+  const at = Math.max(0, Math.min(index, doc.cells.length));
+  const cells = doc.cells.slice();
+  cells.splice(at, 0, cell);
+  return withCells(doc, cells);
+}
+
+/** Adds a blank cell of `kind` after the cell `afterId` (or at the end). Returns the new id too. */
+export function addCell(doc: CalcDocument, kind: CellKind, afterId?: string): { doc: CalcDocument; id: string } {
+  const cell = blankCell(doc, kind);
+  const index = afterId === undefined ? doc.cells.length : indexOfCell(doc, afterId) + 1;
+  return { doc: insertCell(doc, cell, index), id: cell.id };
+}
+
+/** Copies a cell just below itself, with a new id and (for named cells) a new name. */
+export function duplicateCell(doc: CalcDocument, id: string): { doc: CalcDocument; id: string } {
+  const i = indexOfCell(doc, id);
+  const src = doc.cells[i];
+  const copy = { ...src, id: freshId(doc, STEMS[src.kind]) } as Cell;
+  if (copy.kind === 'input' || copy.kind === 'formula') copy.name = freshName(doc, copy.name);
+  if (copy.kind === 'check' && copy.name) copy.name = freshName(doc, copy.name);
+  if (copy.kind === 'input' && copy.choices) copy.choices = copy.choices.slice();
+  return { doc: insertCell(doc, copy, i + 1), id: copy.id };
+}
+
+/** Moves a cell by `delta` places (negative = up), clamped to the sheet. */
+export function moveCell(doc: CalcDocument, id: string, delta: number): CalcDocument {
+  const from = indexOfCell(doc, id);
+  const to = Math.max(0, Math.min(doc.cells.length - 1, from + delta));
+  if (to === from) return doc;
+  const cells = doc.cells.slice();
+  const [cell] = cells.splice(from, 1);
+  cells.splice(to, 0, cell);
+  return withCells(doc, cells);
+}
+
+export function deleteCell(doc: CalcDocument, id: string): CalcDocument {
+  const i = indexOfCell(doc, id);
+  return withCells(doc, doc.cells.filter((_, j) => j !== i));
+}
+
+/** Replaces cell `id` by `patch` applied to it; the kind and id cannot change. */
+export function updateCell<C extends Cell>(doc: CalcDocument, id: string, patch: (cell: C) => C): CalcDocument {
+  const i = indexOfCell(doc, id);
+  const old = doc.cells[i] as C;
+  const next = patch(old);
+  if (next === old) return doc;
+  if (next.id !== old.id || next.kind !== old.kind) throw new EditError('an edit cannot change a cell\'s id or kind');
+  const cells = doc.cells.slice();
+  cells[i] = next;
+  return withCells(doc, cells);
+}
+
+function expectKind<K extends CellKind>(cell: Cell, kinds: K[]): Extract<Cell, { kind: K }> {
+  if (!(kinds as string[]).includes(cell.kind)) throw new EditError(`cell "${cell.id}" is a ${cell.kind}, not a ${kinds.join(' or ')}`);
+  return cell as Extract<Cell, { kind: K }>;
+}
+
+/** Stores an input's value exactly as typed; a bad value is kept so the engine can report it. */
+export function setInputValue(doc: CalcDocument, id: string, value: string): CalcDocument {
+  return updateCell(doc, id, (c) => {
+    const cell = expectKind(c, ['input']);
+    return cell.value === value ? cell : { ...cell, value };
+  });
+}
+
+/** Sets the expression of a formula or the condition of a check. */
+export function setExpr(doc: CalcDocument, id: string, expr: string): CalcDocument {
+  return updateCell(doc, id, (c) => {
+    const cell = expectKind(c, ['formula', 'check']);
+    return cell.expr === expr ? cell : { ...cell, expr };
+  });
+}
+
+export function setNoteText(doc: CalcDocument, id: string, text: string): CalcDocument {
+  return updateCell(doc, id, (c) => {
+    const cell = expectKind(c, ['note']);
+    return cell.text === text ? cell : { ...cell, text };
+  });
+}
+
+export function setSectionTitle(doc: CalcDocument, id: string, title: string): CalcDocument {
+  return updateCell(doc, id, (c) => {
+    const cell = expectKind(c, ['section']);
+    return cell.title === title ? cell : { ...cell, title };
+  });
+}
+
+/** Text fields any kind may carry; `undefined` or '' removes the field. */
+export type CellFields = Partial<{
+  label: string; clause: string; unit: string; precision: number;
+  min: string; max: string; choices: string[]; description: string;
+}>;
+
+const FIELD_KINDS: Record<keyof CellFields, CellKind[]> = {
+  label: ['section', 'note', 'input', 'formula', 'check'],
+  clause: ['section', 'note', 'input', 'formula', 'check'],
+  unit: ['input', 'formula'],
+  precision: ['formula'],
+  min: ['input'],
+  max: ['input'],
+  choices: ['input'],
+  description: ['input'],
+};
+
+/** Sets (or, with '' / undefined / [], removes) the optional fields of a cell. */
+export function setCellFields(doc: CalcDocument, id: string, fields: CellFields): CalcDocument {
+  return updateCell(doc, id, (cell) => {
+    const next: Record<string, unknown> = { ...cell };
+    let changed = false;
+    for (const [key, value] of Object.entries(fields) as [keyof CellFields, unknown][]) {
+      if (!FIELD_KINDS[key].includes(cell.kind)) throw new EditError(`a ${cell.kind} cell has no ${key}`);
+      const empty = value === undefined || value === '' || (Array.isArray(value) && value.length === 0);
+      if (key === 'precision' && !empty && !(Number.isInteger(value) && (value as number) >= 1 && (value as number) <= 15)) {
+        throw new EditError('precision is a whole number of significant figures from 1 to 15');
+      }
+      const old = next[key];
+      if (empty) {
+        if (key in next) { delete next[key]; changed = true; }
+      } else if (JSON.stringify(old) !== JSON.stringify(value)) {
+        next[key] = Array.isArray(value) ? value.slice() : value;
+        changed = true;
+      }
+    }
+    return changed ? (next as unknown as Cell) : cell;
+  });
+}
+
+/** Why `name` cannot name cell `id` (syntax or already taken), or undefined. */
+export function nameClash(doc: CalcDocument, id: string, name: string): string | undefined {
+  if (!IDENT.test(name)) return `"${name}" is not a valid name: letters, digits and _, starting with a letter`;
+  const other = doc.cells.find((c) => c.id !== id && cellName(c) === name);
+  return other ? `"${name}" already names another cell` : undefined;
+}
+
+/** Rewrites whole-word uses of `from` as `to` in an expression (not function calls, not inside a number like 1e5). */
+export function renameInExpr(expr: string, from: string, to: string): string {
+  return expr.replace(/[A-Za-z_][A-Za-z0-9_]*/g, (word, offset: number) => {
+    if (word !== from) return word;
+    const before = expr.slice(0, offset);
+    if (/[0-9.]$/.test(before)) return word; // part of a number like 1e5
+    if (/^\s*\(/.test(expr.slice(offset + word.length))) return word; // a function call
+    return to;
+  });
+}
+
+/**
+ * Renames a named cell. With `updateReferences` every formula and check that reads
+ * the old name is rewritten to the new one in the same edit.
+ */
+export function renameCell(doc: CalcDocument, id: string, name: string, updateReferences = true): CalcDocument {
+  const i = indexOfCell(doc, id);
+  const cell = doc.cells[i];
+  if (cell.kind !== 'input' && cell.kind !== 'formula' && cell.kind !== 'check') {
+    throw new EditError(`a ${cell.kind} cell has no name`);
+  }
+  const old = cell.name;
+  if (cell.kind === 'check' && name === '') {
+    const { name: _dropped, ...rest } = cell;
+    return updateCell(doc, id, () => rest as Cell);
+  }
+  if (old === name) return doc;
+  const problem = nameClash(doc, id, name);
+  if (problem) throw new EditError(problem);
+  const cells = doc.cells.map((c) => {
+    if (c.id === id) return { ...c, name } as Cell;
+    if (!updateReferences || !old || (c.kind !== 'formula' && c.kind !== 'check')) return c;
+    const expr = renameInExpr(c.expr, old, name);
+    return expr === c.expr ? c : { ...c, expr };
+  });
+  return withCells(doc, cells);
+}
+
+export function setMeta(doc: CalcDocument, key: keyof DocMeta, value: string): CalcDocument {
+  if (doc.meta[key] === value) return doc;
+  return { ...doc, meta: { ...doc.meta, [key]: value } };
+}
