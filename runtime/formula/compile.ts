@@ -1,0 +1,496 @@
+// Compiling a formula: check every node against an allow-list, resolve names to
+// cells, infer and check units once, and build a closure that evaluates on plain
+// numbers in SI base units. Nothing here evaluates text or reaches the host.
+
+import type { MathNode } from 'mathjs';
+import type { LibFunction } from '../library/types';
+import { addDims, DIMLESS, isDimless, sameDims, scaleDims, isUnitName, unitInfo } from '../units/dimension';
+import { BUILTINS } from './builtins';
+import { CellError } from './cell-error';
+import { columnOf, parseFormula } from './parse';
+import { nearestName } from './suggest';
+import { BOOL, describeType, NUMBER, numType, sameType, TEXT, typeFromDeclaration, type VType } from './value-type';
+
+/** What the compiler needs to know about a cell name. */
+export interface NameInfo {
+  /** Key of the cell's runtime variable (its id). */
+  key: string;
+  type: VType;
+  /** The variable holds a check result `{ value }` rather than a plain value. */
+  unwrap?: boolean;
+}
+
+export interface CompileScope {
+  /** The cell a name refers to; may throw CellError('upstream') when that cell is broken. */
+  lookup(name: string): NameInfo | undefined;
+  /** Is there a cell of this name (it then shadows any unit of the same name)? */
+  isCell(name: string): boolean;
+  /** Every cell name, for "did you mean". */
+  names(): Iterable<string>;
+  functions: ReadonlyMap<string, LibFunction>;
+}
+
+type Ev = (a: readonly unknown[]) => unknown;
+
+interface CNode {
+  type: VType;
+  ev: Ev;
+  /** Present when the node reads no cell: its value, computed once. */
+  constant?: { value: unknown };
+}
+
+export interface CompiledExpr {
+  type: VType;
+  /** Runtime variable keys this expression reads, in slot order. */
+  inputs: string[];
+  /** Cell names read, in first-use order. */
+  reads: string[];
+  /** Clauses of the library functions called. */
+  clauses: string[];
+  run: Ev;
+}
+
+const MAX_DEPTH = 120;
+// After an explicit * or / a one-letter unit is too easily a mistyped cell name
+// (L is litres, A amperes); only these are accepted there.
+const SHORT_UNITS_AFTER_OPERATOR = new Set(['m', 'N', 'g', 's']);
+
+class Compiler {
+  readonly inputs: string[] = [];
+  readonly reads: string[] = [];
+  readonly clauses: string[] = [];
+  private readonly slots = new Map<string, number>();
+
+  constructor(private readonly source: string, private readonly scope: CompileScope) {}
+
+  fail(kind: CellError['kind'], message: string, name?: string): never {
+    throw new CellError(kind, message, name ? columnOf(this.source, name) : undefined);
+  }
+
+  node(n: any, depth: number): CNode {
+    if (depth > MAX_DEPTH) this.fail('syntax', 'the formula is nested too deeply');
+    const q = this.quantity(n);
+    if (q) return q;
+    switch (n.type) {
+      case 'ConstantNode':
+        return this.constantNode(n);
+      case 'SymbolNode':
+        return this.symbol(n.name);
+      case 'ParenthesisNode':
+        return this.node(n.content, depth + 1);
+      case 'OperatorNode':
+        return this.operator(n, depth);
+      case 'ConditionalNode':
+        return this.conditional(n, depth);
+      case 'RelationalNode':
+        return this.relational(n, depth);
+      case 'FunctionNode':
+        return this.call(n, depth);
+      case 'AssignmentNode':
+      case 'FunctionAssignmentNode':
+        return this.fail('not-allowed', 'a formula cannot assign; give the name in the cell and only the expression here');
+      case 'AccessorNode':
+      case 'IndexNode':
+        return this.fail('not-allowed', 'property and index access (a.b, a[1]) are not part of the formula language');
+      case 'ArrayNode':
+      case 'RangeNode':
+        return this.fail('not-allowed', 'lists and ranges are not part of the formula language');
+      case 'ObjectNode':
+        return this.fail('not-allowed', 'objects are not part of the formula language');
+      case 'BlockNode':
+        return this.fail('not-allowed', 'a formula holds one expression; use one cell per result');
+      default:
+        return this.fail('not-allowed', `"${n.type}" is not part of the formula language`);
+    }
+  }
+
+  private constantNode(n: any): CNode {
+    const v = n.value;
+    if (typeof v === 'number') return constant(NUMBER, v);
+    if (typeof v === 'string') {
+      if (v.length > 200) this.fail('not-allowed', 'a quoted text in a formula may have at most 200 characters');
+      return constant(TEXT, v);
+    }
+    if (typeof v === 'boolean') return constant(BOOL, v);
+    return this.fail('not-allowed', `the constant ${String(v)} is not part of the formula language`);
+  }
+
+  private symbol(name: string): CNode {
+    const info = this.scope.lookup(name);
+    if (!info) return this.unknown(name);
+    let slot = this.slots.get(info.key);
+    if (slot === undefined) {
+      slot = this.inputs.length;
+      this.slots.set(info.key, slot);
+      this.inputs.push(info.key);
+    }
+    if (!this.reads.includes(name)) this.reads.push(name);
+    const i = slot;
+    const ev: Ev = info.unwrap ? (a) => (a[i] as { value: unknown }).value : (a) => a[i];
+    return { type: info.type, ev };
+  }
+
+  private unknown(name: string): never {
+    const near = nearestName(name, this.scope.names());
+    let msg = `"${name}" is not the name of any cell`;
+    if (near) msg += `; did you mean ${near}?`;
+    else if (isUnitName(name)) msg += `; to use the unit ${name}, write it after a number (e.g. 1 ${name})`;
+    return this.fail('unknown-name', msg, name);
+  }
+
+  /** `12 in`, `150 lbf/ft^3`, `5 kip ft`: a number followed by units folds to a constant. */
+  private quantity(n: any): CNode | undefined {
+    if (n.type !== 'OperatorNode' || n.args?.length !== 2) return undefined;
+    const implicit = n.fn === 'multiply' && n.implicit;
+    const chained = !implicit && (n.fn === 'multiply' || n.fn === 'divide');
+    if (!implicit && !chained) return undefined;
+    const left = implicit ? this.numberOrQuantity(n.args[0]) : this.quantityOnly(n.args[0]);
+    if (!left) return undefined;
+    const unit = this.unitExpr(n.args[1], chained);
+    if (!unit) return undefined;
+    const sign = n.fn === 'divide' ? -1 : 1;
+    const value = sign > 0 ? left.value * unit.factor : left.value / unit.factor;
+    const dims = addDims(left.dims, unit.dims, sign);
+    const hint = left.hint ? `${left.hint}${sign > 0 ? '*' : '/'}${unit.text}` : unit.text;
+    return constant(numType(dims, hint), value);
+  }
+
+  private numberOrQuantity(n: any): { value: number; dims: readonly number[]; hint?: string } | undefined {
+    const q = this.quantityOnly(n);
+    if (q) return q;
+    const v = pureConstant(n);
+    return v === undefined ? undefined : { value: v, dims: DIMLESS };
+  }
+
+  private quantityOnly(n: any): { value: number; dims: readonly number[]; hint?: string } | undefined {
+    const q = this.quantity(n);
+    if (!q?.constant || q.type.t !== 'num') return undefined;
+    return { value: q.constant.value as number, dims: q.type.dims, hint: q.type.hint };
+  }
+
+  private unitExpr(n: any, strict: boolean): { factor: number; dims: readonly number[]; text: string } | undefined {
+    if (n.type === 'SymbolNode') {
+      const name: string = n.name;
+      if (this.scope.isCell(name) || !isUnitName(name)) return undefined;
+      if (strict && name.length === 1 && !SHORT_UNITS_AFTER_OPERATOR.has(name)) return undefined;
+      const u = unitInfo(name);
+      return { factor: u.factor, dims: u.dims, text: name };
+    }
+    if (n.type === 'ParenthesisNode') {
+      const u = this.unitExpr(n.content, strict);
+      return u && { ...u, text: `(${u.text})` };
+    }
+    if (n.type === 'OperatorNode' && n.fn === 'pow') {
+      const base = this.unitExpr(n.args[0], strict);
+      const p = pureConstant(n.args[1]);
+      if (!base || p === undefined) return undefined;
+      return { factor: Math.pow(base.factor, p), dims: scaleDims(base.dims, p), text: `${base.text}^${p}` };
+    }
+    if (n.type === 'OperatorNode' && (n.fn === 'multiply' || n.fn === 'divide') && n.args.length === 2) {
+      const a = this.unitExpr(n.args[0], strict);
+      const b = a && this.unitExpr(n.args[1], strict || !n.implicit);
+      if (!a || !b) return undefined;
+      const div = n.fn === 'divide';
+      return {
+        factor: div ? a.factor / b.factor : a.factor * b.factor,
+        dims: addDims(a.dims, b.dims, div ? -1 : 1),
+        text: `${a.text}${div ? '/' : '*'}${b.text}`,
+      };
+    }
+    return undefined;
+  }
+
+  private operator(n: any, depth: number): CNode {
+    const op: string = n.op;
+    const args: CNode[] = n.args.map((a: any) => this.node(a, depth + 1));
+    if (args.length === 1) {
+      const [x] = args;
+      if (op === '-' || op === '+') {
+        this.needNum(x, op);
+        return op === '-' ? derive(x.type, [x], (v) => -(v[0] as number)) : x;
+      }
+      if (op === 'not') {
+        this.needBool(x, 'not');
+        return derive(BOOL, [x], (v) => !v[0]);
+      }
+      return this.fail('not-allowed', `the operator ${op} is not part of the formula language`);
+    }
+    const [x, y] = args;
+    switch (op) {
+      case '+':
+      case '-': {
+        this.needSame(x, y, op === '+' ? 'add' : 'subtract');
+        const f = op === '+' ? (v: unknown[]) => (v[0] as number) + (v[1] as number) : (v: unknown[]) => (v[0] as number) - (v[1] as number);
+        return derive(x.type, args, f);
+      }
+      case '*':
+      case '/': {
+        this.needNum(x, op);
+        this.needNum(y, op);
+        const div = op === '/';
+        const dims = addDims(dimsOf(x), dimsOf(y), div ? -1 : 1);
+        const f = div ? (v: unknown[]) => (v[0] as number) / (v[1] as number) : (v: unknown[]) => (v[0] as number) * (v[1] as number);
+        return derive(numType(dims), args, f);
+      }
+      case '^':
+        return this.power(x, y);
+      case '<':
+      case '>':
+      case '<=':
+      case '>=':
+        this.needSame(x, y, 'compare');
+        this.needNum(x, op);
+        return derive(BOOL, args, compareFn(op));
+      case '==':
+      case '!=': {
+        this.needSame(x, y, 'compare');
+        const eq = x.type.t === 'num' ? approxEqual : (a: unknown, b: unknown) => a === b;
+        return derive(BOOL, args, op === '==' ? (v) => eq(v[0], v[1]) : (v) => !eq(v[0], v[1]));
+      }
+      case 'and':
+      case 'or':
+      case 'xor': {
+        this.needBool(x, op);
+        this.needBool(y, op);
+        const f = op === 'and' ? (v: unknown[]) => !!v[0] && !!v[1] : op === 'or' ? (v: unknown[]) => !!v[0] || !!v[1] : (v: unknown[]) => !!v[0] !== !!v[1];
+        return derive(BOOL, args, f);
+      }
+      default:
+        return this.fail('not-allowed', `the operator ${op} is not part of the formula language`);
+    }
+  }
+
+  private power(x: CNode, y: CNode): CNode {
+    this.needNum(x, '^');
+    this.needNum(y, '^');
+    if (!isDimless(dimsOf(y))) this.fail('unit', `an exponent must be a pure number, got ${describeType(y.type)}`);
+    if (isDimless(dimsOf(x))) return derive(NUMBER, [x, y], (v) => Math.pow(v[0] as number, v[1] as number));
+    if (!y.constant) {
+      this.fail('unit', `${describeType(x.type)} can only be raised to a fixed power (e.g. ^2 or ^0.5), not to a computed one`);
+    }
+    const p = y.constant.value as number;
+    return derive(numType(scaleDims(dimsOf(x), p)), [x, y], (v) => Math.pow(v[0] as number, v[1] as number));
+  }
+
+  private conditional(n: any, depth: number): CNode {
+    const c = this.node(n.condition, depth + 1);
+    const a = this.node(n.trueExpr, depth + 1);
+    const b = this.node(n.falseExpr, depth + 1);
+    this.needBool(c, 'the condition of ? :');
+    this.needSame(a, b, 'choose between');
+    const ce = c.ev, ae = a.ev, be = b.ev;
+    const node: CNode = { type: a.type, ev: (v) => (ce(v) ? ae(v) : be(v)) };
+    if (c.constant && a.constant && b.constant) node.constant = { value: node.ev([]) };
+    return node;
+  }
+
+  private relational(n: any, depth: number): CNode {
+    const params: CNode[] = n.params.map((p: any) => this.node(p, depth + 1));
+    const tests = (n.conditionals as string[]).map((c, i) => {
+      const op = ({ smaller: '<', larger: '>', smallerEq: '<=', largerEq: '>=', equal: '==', unequal: '!=' } as Record<string, string>)[c];
+      if (!op) this.fail('not-allowed', `the comparison ${c} is not part of the formula language`);
+      this.needSame(params[i], params[i + 1], 'compare');
+      const f = op === '==' ? (a: unknown, b: unknown) => approxEqual(a, b) : op === '!=' ? (a: unknown, b: unknown) => !approxEqual(a, b) : (a: unknown, b: unknown) => compareFn(op)([a, b]);
+      return { i, f };
+    });
+    return derive(BOOL, params, (v) => tests.every(({ i, f }) => f(v[i], v[i + 1])));
+  }
+
+  private call(n: any, depth: number): CNode {
+    if (n.fn?.type !== 'SymbolNode') this.fail('not-allowed', 'only named functions can be called');
+    const name: string = n.fn.name;
+    const args: CNode[] = n.args.map((a: any) => this.node(a, depth + 1));
+    const builtin = BUILTINS.get(name);
+    if (builtin) {
+      if (args.length < builtin.minArgs || args.length > builtin.maxArgs) {
+        this.fail('syntax', `${builtin.signature} takes ${arity(builtin.minArgs, builtin.maxArgs)}, got ${args.length}`, name);
+      }
+      const t = builtin.type(args.map((a) => a.type));
+      if (typeof t === 'string') this.fail('unit', `${name}: ${t}`, name);
+      const fn = builtin.fn;
+      return derive(t, args, (v) => fn(...v));
+    }
+    const lib = this.scope.functions.get(name);
+    if (!lib) {
+      const near = nearestName(name, [...BUILTINS.keys(), ...this.scope.functions.keys()]);
+      this.fail('unknown-name', `there is no function "${name}"${near ? `; did you mean ${near}?` : ''}`, name);
+    }
+    return this.library(lib, args, name);
+  }
+
+  private library(lib: LibFunction, args: CNode[], name: string): CNode {
+    const max = lib.params.length;
+    const min = max - (lib.optional ?? 0);
+    if (args.length < min || args.length > max) {
+      this.fail('syntax', `${signatureOf(lib)} takes ${arity(min, max)}, got ${args.length}`, name);
+    }
+    args.forEach((a, i) => {
+      const p = lib.params[i];
+      const want = typeFromDeclaration(p.type);
+      if (!sameType(a.type, want)) {
+        this.fail('unit', `${name}: argument ${i + 1} (${p.name}) must be ${describeType(want)}, got ${describeType(a.type)}`, name);
+      }
+      if (p.choices && a.constant && !p.choices.includes(a.constant.value as string)) {
+        this.fail('library', `${name}: ${p.name} must be one of ${p.choices.join(', ')}; got "${String(a.constant.value)}"`, name);
+      }
+    });
+    if (!this.clauses.includes(lib.clause)) this.clauses.push(lib.clause);
+    const fn = lib.fn;
+    const node = derive(typeFromDeclaration(lib.returns), args, (v) => {
+      try {
+        return fn(...v);
+      } catch (e) {
+        throw new CellError('library', `${name}: ${(e as Error).message}`);
+      }
+    });
+    return node;
+  }
+
+  private needNum(x: CNode, what: string): void {
+    if (x.type.t !== 'num') this.fail('unit', `${what} needs numbers, got ${describeType(x.type)}`);
+  }
+
+  private needBool(x: CNode, what: string): void {
+    if (x.type.t !== 'bool') this.fail('unit', `${what} needs a true/false value (a comparison), got ${describeType(x.type)}`);
+  }
+
+  private needSame(x: CNode, y: CNode, verb: string): void {
+    if (!sameType(x.type, y.type)) {
+      this.fail('unit', `cannot ${verb} ${describeType(x.type)} and ${describeType(y.type)}: the units do not agree`);
+    }
+  }
+}
+
+function constant(type: VType, value: unknown): CNode {
+  return { type, ev: () => value, constant: { value } };
+}
+
+/** A node computed from others; folded to a constant when all of them are. */
+function derive(type: VType, args: CNode[], f: (v: unknown[]) => unknown): CNode {
+  if (args.every((a) => a.constant)) {
+    const value = f(args.map((a) => a.constant!.value));
+    return constant(type, value);
+  }
+  const evs = args.map((a) => a.ev);
+  let ev: Ev;
+  if (evs.length === 1) {
+    const [e0] = evs;
+    ev = (a) => f([e0(a)]);
+  } else if (evs.length === 2) {
+    const [e0, e1] = evs;
+    ev = (a) => f([e0(a), e1(a)]);
+  } else {
+    ev = (a) => f(evs.map((e) => e(a)));
+  }
+  return { type, ev };
+}
+
+function dimsOf(x: CNode): readonly number[] {
+  return (x.type as { dims: readonly number[] }).dims;
+}
+
+/** A number written without any name: `2`, `-3`, `(1/2)`, `1e3`. */
+function pureConstant(n: any): number | undefined {
+  if (n.type === 'ConstantNode') return typeof n.value === 'number' ? n.value : undefined;
+  if (n.type === 'ParenthesisNode') return pureConstant(n.content);
+  if (n.type === 'OperatorNode') {
+    const vals = n.args.map(pureConstant);
+    if (vals.some((v: number | undefined) => v === undefined)) return undefined;
+    if (n.args.length === 1) return n.fn === 'unaryMinus' ? -vals[0] : n.fn === 'unaryPlus' ? vals[0] : undefined;
+    const [a, b] = vals;
+    switch (n.fn) {
+      case 'add': return a + b;
+      case 'subtract': return a - b;
+      case 'multiply': return a * b;
+      case 'divide': return a / b;
+      case 'pow': return Math.pow(a, b);
+    }
+  }
+  return undefined;
+}
+
+function compareFn(op: string): (v: unknown[]) => boolean {
+  switch (op) {
+    case '<': return (v) => (v[0] as number) < (v[1] as number);
+    case '>': return (v) => (v[0] as number) > (v[1] as number);
+    case '<=': return (v) => (v[0] as number) <= (v[1] as number);
+    default: return (v) => (v[0] as number) >= (v[1] as number);
+  }
+}
+
+/** Numbers equal to 12 significant figures count as equal (unit conversions leave crumbs). */
+function approxEqual(a: unknown, b: unknown): boolean {
+  if (typeof a !== 'number' || typeof b !== 'number') return a === b;
+  return a === b || Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b));
+}
+
+function arity(min: number, max: number): string {
+  if (min === max) return `${min} argument${min === 1 ? '' : 's'}`;
+  return `${min} to ${max} arguments`;
+}
+
+export function signatureOf(lib: LibFunction): string {
+  const req = lib.params.length - (lib.optional ?? 0);
+  return `${lib.name}(${lib.params.map((p, i) => (i >= req ? `[${p.name}]` : p.name)).join(', ')})`;
+}
+
+function finish(c: Compiler, root: CNode): CompiledExpr {
+  return { type: root.type, inputs: c.inputs, reads: c.reads, clauses: c.clauses, run: root.ev };
+}
+
+/** Compile a formula expression. Throws CellError. */
+export function compileExpression(source: string, scope: CompileScope): CompiledExpr {
+  const ast = parseFormula(source);
+  const c = new Compiler(source, scope);
+  return finish(c, c.node(ast, 0));
+}
+
+export interface CompiledCheck {
+  /** Demand/capacity form, or a plain condition. */
+  form: 'ratio' | 'condition';
+  inputs: string[];
+  reads: string[];
+  clauses: string[];
+  demand?: { type: VType; run: Ev; source: MathNode };
+  capacity?: { type: VType; run: Ev; source: MathNode };
+  /** Evaluates to true when the check passes. */
+  pass: Ev;
+}
+
+const RATIO_OPS: Record<string, 'le' | 'ge'> = { '<=': 'le', '<': 'le', '>=': 'ge', '>': 'ge' };
+
+/**
+ * Compile a check. `demand <= capacity` (or `capacity >= demand`) gives a
+ * demand/capacity ratio; anything else true/false is a plain condition.
+ */
+export function compileCheck(source: string, scope: CompileScope): CompiledCheck {
+  const ast = parseFormula(source) as any;
+  const c = new Compiler(source, scope);
+  const top = ast.type === 'ParenthesisNode' ? ast.content : ast;
+  const dir = top.type === 'OperatorNode' && top.args.length === 2 ? RATIO_OPS[top.op] : undefined;
+  if (dir) {
+    const left = c.node(top.args[0], 1);
+    const right = c.node(top.args[1], 1);
+    if (left.type.t === 'num' && sameType(left.type, right.type)) {
+      const [d, k, dn, kn] = dir === 'le' ? [left, right, top.args[0], top.args[1]] : [right, left, top.args[1], top.args[0]];
+      const strict = top.op === '<' || top.op === '>';
+      const de = d.ev, ke = k.ev;
+      return {
+        form: 'ratio',
+        inputs: c.inputs,
+        reads: c.reads,
+        clauses: c.clauses,
+        demand: { type: d.type, run: de, source: dn },
+        capacity: { type: k.type, run: ke, source: kn },
+        pass: strict ? (v) => (de(v) as number) < (ke(v) as number) : (v) => (de(v) as number) <= (ke(v) as number),
+      };
+    }
+  }
+  const root = c.node(ast, 0);
+  if (root.type.t !== 'bool') {
+    throw new CellError('unit', `a check must be a comparison such as Vu <= phiVc, or a true/false condition; this gives ${describeType(root.type)}`);
+  }
+  return { form: 'condition', inputs: c.inputs, reads: c.reads, clauses: c.clauses, pass: root.ev };
+}
+
+export { sameDims };

@@ -1,0 +1,413 @@
+// The calc engine: one @observablehq/runtime variable per cell that computes,
+// keyed by cell id. `update(doc)` diffs the new document against the running one
+// and redefines only what changed; the runtime then recomputes only what depends
+// on it. Observers turn values and errors into CellStates for the view.
+
+import { Runtime, RuntimeError, type Module, type Variable } from '@observablehq/runtime';
+import type { CalcDocument, Cell } from '../document';
+import { cellName } from '../document';
+import type { CellState, Engine } from '../engine-types';
+import { CellError } from '../formula/cell-error';
+import type { CompileScope, NameInfo } from '../formula/compile';
+import { columnOf, parseFormula, symbolNames } from '../formula/parse';
+import { nameProblem } from '../formula/names';
+import { findCycles } from './cycles';
+import type { LibFunction } from '../library/types';
+import { BUILTINS } from '../formula/builtins';
+import { checkProgram, formulaProgram, inputProgram, type CellProgram } from './cell-program';
+import { buildState, sameState } from './cell-state';
+
+export interface EngineOptions {
+  functions?: readonly LibFunction[];
+}
+
+interface Slot {
+  cell: Cell;
+  /** Names the cell's source mentions (cells or not), for the dependency graph. */
+  refs: string[];
+  program?: CellProgram;
+  variable?: Variable;
+  observer?: { dead: boolean };
+  state: CellState;
+  /** Set while the runtime computes this cell. */
+  busy: boolean;
+}
+
+// The runtime must never see host globals: any name it cannot resolve is an error.
+const strictGlobal = (name: string) => {
+  throw new CellError('unknown-name', `"${name}" is not the name of any cell`);
+};
+
+class DocEngine implements Engine {
+  doc: CalcDocument;
+  private readonly runtime = new Runtime({}, strictGlobal);
+  private readonly module: Module = this.runtime.module();
+  private readonly slots = new Map<string, Slot>();
+  private owners = new Map<string, string[]>();
+  private readonly functions: ReadonlyMap<string, LibFunction>;
+  private readonly functionNames: ReadonlySet<string>;
+  private readonly listeners = new Set<(changed: string[]) => void>();
+  private readonly changed = new Set<string>();
+  private busyCount = 0;
+  private waiting: (() => void)[] = [];
+  private flushQueued = false;
+  private cycleMembers = new Map<string, string>();
+  private disposed = false;
+
+  constructor(doc: CalcDocument, options: EngineOptions) {
+    const fns = options.functions ?? [];
+    this.functions = new Map(fns.map((f) => [f.name, f]));
+    this.functionNames = new Set([...BUILTINS.keys(), ...this.functions.keys()]);
+    this.doc = { meta: doc.meta, cells: [] };
+    this.update(doc);
+  }
+
+  state(id: string): CellState | undefined {
+    return this.slots.get(id)?.state;
+  }
+
+  subscribe(listener: (changed: string[]) => void): () => void {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  }
+
+  settled(): Promise<void> {
+    if (this.busyCount === 0 && !this.flushQueued) return Promise.resolve();
+    return new Promise((resolve) => this.waiting.push(resolve));
+  }
+
+  dispose(): void {
+    if (this.disposed) return;
+    this.disposed = true;
+    for (const slot of this.slots.values()) this.dropVariable(slot);
+    this.slots.clear();
+    this.runtime.dispose();
+    this.listeners.clear();
+    this.waiting.forEach((w) => w());
+    this.waiting = [];
+  }
+
+  update(doc: CalcDocument): void {
+    if (this.disposed) throw new Error('this engine has been disposed');
+    const prevCells = new Map(this.doc.cells.map((c) => [c.id, c]));
+    this.doc = doc;
+    const dirty = new Set<string>();
+    const seen = new Set<string>();
+    let structural = false;
+
+    for (const cell of doc.cells) {
+      if (seen.has(cell.id)) continue; // a repeated id is ignored: ids are the format's job
+      seen.add(cell.id);
+      const slot = this.slots.get(cell.id);
+      if (!slot) {
+        this.slots.set(cell.id, this.newSlot(cell));
+        dirty.add(cell.id);
+        structural = true;
+        continue;
+      }
+      if (slot.cell === cell || sameCell(slot.cell, cell)) {
+        slot.cell = cell;
+        continue;
+      }
+      const before = slot.cell;
+      slot.cell = cell;
+      slot.refs = refsOf(cell);
+      dirty.add(cell.id);
+      if (before.kind !== cell.kind || cellName(before) !== cellName(cell) || !isInputValueOnly(before, cell)) structural = true;
+    }
+    for (const [id, slot] of this.slots) {
+      if (seen.has(id)) continue;
+      this.dropVariable(slot);
+      this.slots.delete(id);
+      this.changed.add(id);
+      structural = true;
+    }
+    void prevCells;
+
+    const affected = new Set(dirty);
+    if (structural) {
+      const before = this.owners;
+      this.owners = this.indexNames();
+      const namesChanged = new Set<string>();
+      for (const n of new Set([...before.keys(), ...this.owners.keys()])) {
+        if (String(before.get(n)) !== String(this.owners.get(n))) namesChanged.add(n);
+      }
+      for (const slot of this.slots.values()) {
+        if (slot.refs.some((r) => namesChanged.has(r))) affected.add(slot.cell.id);
+      }
+      for (const n of namesChanged) for (const id of this.owners.get(n) ?? []) affected.add(id);
+      for (const id of this.updateCycles()) affected.add(id);
+    }
+    this.recompile(affected);
+    this.queueFlush();
+  }
+
+  // ---- compiling -------------------------------------------------------
+
+  private newSlot(cell: Cell): Slot {
+    return {
+      cell,
+      refs: refsOf(cell),
+      busy: false,
+      state: { id: cell.id, status: cell.kind === 'section' || cell.kind === 'note' ? 'ok' : 'pending', clauses: [], reads: [] },
+    };
+  }
+
+  private indexNames(): Map<string, string[]> {
+    const owners = new Map<string, string[]>();
+    for (const cell of this.doc.cells) {
+      const name = cellName(cell);
+      if (!name || !this.slots.has(cell.id)) continue;
+      const list = owners.get(name);
+      if (list) {
+        if (!list.includes(cell.id)) list.push(cell.id);
+      } else owners.set(name, [cell.id]);
+    }
+    return owners;
+  }
+
+  /** Finds loops; returns the cells whose membership in a loop changed. */
+  private updateCycles(): string[] {
+    const next = new Map<string, string>();
+    const edges = (id: string) => {
+      const out: string[] = [];
+      for (const r of this.slots.get(id)?.refs ?? []) for (const o of this.owners.get(r) ?? []) out.push(o);
+      return out;
+    };
+    for (const loop of findCycles([...this.slots.keys()], edges)) {
+      const names = loop.map((id) => cellName(this.slots.get(id)!.cell) ?? id);
+      const text = names.length === 1 ? `${names[0]} uses itself` : `${[...names, names[0]].join(' → ')}`;
+      for (const id of loop) next.set(id, text);
+    }
+    const changed: string[] = [];
+    for (const id of new Set([...next.keys(), ...this.cycleMembers.keys()])) {
+      if (next.get(id) !== this.cycleMembers.get(id)) changed.push(id);
+    }
+    this.cycleMembers = next;
+    return changed;
+  }
+
+  /** Compiles the affected cells, upstream first, then any reader whose input type changed. */
+  private recompile(affected: Set<string>): void {
+    const done = new Set<string>();
+    const visiting = new Set<string>();
+    const queue = [...affected];
+    const ensure = (id: string) => {
+      if (done.has(id) || visiting.has(id)) return;
+      const slot = this.slots.get(id);
+      if (!slot) return;
+      visiting.add(id);
+      for (const r of slot.refs) for (const up of this.owners.get(r) ?? []) if (affected.has(up)) ensure(up);
+      visiting.delete(id);
+      done.add(id);
+      const before = slot.program?.type;
+      this.compileSlot(slot);
+      const after = slot.program?.type;
+      if (!sameTypeOrBoth(before, after)) {
+        const name = cellName(slot.cell);
+        if (name) for (const s of this.slots.values()) {
+          if (s.refs.includes(name) && !done.has(s.cell.id)) {
+            affected.add(s.cell.id);
+            queue.push(s.cell.id);
+          }
+        }
+      }
+    };
+    for (let i = 0; i < queue.length; i++) ensure(queue[i]);
+  }
+
+  private compileSlot(slot: Slot): void {
+    const cell = slot.cell;
+    this.changed.add(cell.id);
+    if (cell.kind === 'section' || cell.kind === 'note') {
+      slot.state = { id: cell.id, status: 'ok', clauses: [], reads: [] };
+      return;
+    }
+    const program = this.program(slot);
+    slot.program = program;
+    this.define(slot, program);
+  }
+
+  private program(slot: Slot): CellProgram {
+    const cell = slot.cell;
+    const name = cellName(cell);
+    const fail = (e: CellError): CellProgram => ({
+      inputs: [], reads: [], clauses: [], unit: '',
+      definition: () => {
+        throw e;
+      },
+    });
+    if (name !== undefined) {
+      const problem = nameProblem(name, this.functionNames);
+      if (problem) return fail(new CellError('syntax', problem));
+      const owners = this.owners.get(name) ?? [];
+      if (owners.length > 1) {
+        const others = owners.filter((o) => o !== cell.id).map((o) => this.describeCell(o));
+        return fail(new CellError('duplicate-name', `the name ${name} is also used by ${others.join(' and ')}; each name must be unique`));
+      }
+    }
+    const loop = this.cycleMembers.get(cell.id);
+    if (loop) return fail(new CellError('cycle', `these cells use each other in a loop: ${loop}`));
+    switch (cell.kind) {
+      case 'input':
+        return inputProgram(cell, slot.program);
+      case 'formula':
+        return formulaProgram(cell, this.scopeFor(cell.expr));
+      case 'check':
+        return checkProgram(cell, this.scopeFor(cell.expr), (node) => this.unitOfNode(node));
+      default:
+        return fail(new CellError('not-allowed', 'this cell does not compute'));
+    }
+  }
+
+  private describeCell(id: string): string {
+    const i = this.doc.cells.findIndex((c) => c.id === id);
+    const cell = this.doc.cells[i];
+    return cell?.label ? `cell ${i + 1} (${cell.label})` : `cell ${i + 1}`;
+  }
+
+  private scopeFor(source: string): CompileScope {
+    return {
+      functions: this.functions,
+      isCell: (name) => this.owners.has(name),
+      names: () => this.owners.keys(),
+      lookup: (name): NameInfo | undefined => {
+        const owners = this.owners.get(name);
+        if (!owners) return undefined;
+        const slot = this.slots.get(owners[0])!;
+        const type = slot.program?.type;
+        if (!type || owners.length > 1) {
+          throw new CellError('upstream', `reads ${name}, which has an error`, columnOf(source, name), name);
+        }
+        return { key: slot.cell.id, type, unwrap: slot.cell.kind === 'check' };
+      },
+    };
+  }
+
+  /** Display unit for one side of a check: the unit of the cell it names, if it is a bare name. */
+  private unitOfNode(node: any): string {
+    while (node?.type === 'ParenthesisNode') node = node.content;
+    if (node?.type !== 'SymbolNode') return '';
+    const owner = this.owners.get(node.name)?.[0];
+    return owner ? this.slots.get(owner)?.program?.unit ?? '' : '';
+  }
+
+  // ---- the reactive graph ------------------------------------------------
+
+  private define(slot: Slot, program: CellProgram): void {
+    const id = slot.cell.id;
+    if (!slot.variable) {
+      const observer = this.observer(slot);
+      slot.observer = observer;
+      slot.variable = this.module.variable(observer);
+    }
+    this.markBusy(slot);
+    slot.variable.define(id, program.inputs, program.definition);
+  }
+
+  private observer(slot: Slot) {
+    const handle = { dead: false };
+    const settle = (next: CellState) => {
+      if (handle.dead || this.disposed) return;
+      if (!sameState(slot.state, next)) {
+        slot.state = next;
+        this.changed.add(slot.cell.id);
+      }
+      this.markIdle(slot);
+    };
+    return Object.assign(handle, {
+      pending: () => {
+        if (!handle.dead) this.markBusy(slot);
+      },
+      fulfilled: (value: unknown) => settle(buildState(slot.cell, slot.program, { value })),
+      rejected: (error: unknown) => settle(buildState(slot.cell, slot.program, { error: this.explain(error) })),
+    });
+  }
+
+  private explain(error: unknown): CellError {
+    if (error instanceof CellError) return error;
+    if (error instanceof RuntimeError && error.input) {
+      const up = this.slots.get(error.input);
+      const name = (up && cellName(up.cell)) ?? error.input;
+      return new CellError('upstream', `reads ${name}, which has an error`, undefined, name);
+    }
+    return new CellError('library', error instanceof Error ? error.message : String(error));
+  }
+
+  private markBusy(slot: Slot): void {
+    if (slot.busy) return;
+    slot.busy = true;
+    this.busyCount++;
+  }
+
+  private markIdle(slot: Slot): void {
+    if (!slot.busy) return;
+    slot.busy = false;
+    this.busyCount--;
+    if (this.busyCount === 0) this.queueFlush();
+  }
+
+  private dropVariable(slot: Slot): void {
+    if (slot.observer) slot.observer.dead = true;
+    if (slot.busy) this.markIdle(slot);
+    slot.variable?.delete();
+    slot.variable = undefined;
+  }
+
+  private queueFlush(): void {
+    if (this.flushQueued) return;
+    this.flushQueued = true;
+    queueMicrotask(() => {
+      this.flushQueued = false;
+      if (this.busyCount > 0 || this.disposed) return;
+      this.flush();
+    });
+  }
+
+  private flush(): void {
+    if (this.changed.size) {
+      // Readers of a changed cell re-show their substituted values too.
+      const names = new Set<string>();
+      for (const id of this.changed) {
+        const slot = this.slots.get(id);
+        const n = slot && cellName(slot.cell);
+        if (n) names.add(n);
+      }
+      if (names.size) for (const slot of this.slots.values()) if (slot.refs.some((r) => names.has(r))) this.changed.add(slot.cell.id);
+      const changed = [...this.changed];
+      this.changed.clear();
+      for (const l of this.listeners) l(changed);
+    }
+    const waiting = this.waiting;
+    this.waiting = [];
+    waiting.forEach((w) => w());
+  }
+}
+
+function refsOf(cell: Cell): string[] {
+  if (cell.kind !== 'formula' && cell.kind !== 'check') return [];
+  try {
+    return symbolNames(parseFormula(cell.expr));
+  } catch {
+    return [];
+  }
+}
+
+function sameCell(a: Cell, b: Cell): boolean {
+  return JSON.stringify(a) === JSON.stringify(b);
+}
+
+/** An input whose value (not its name or kind) changed cannot change the graph's shape. */
+function isInputValueOnly(a: Cell, b: Cell): boolean {
+  return a.kind === 'input' && b.kind === 'input' && a.name === b.name;
+}
+
+function sameTypeOrBoth(a: CellProgram['type'], b: CellProgram['type']): boolean {
+  if (!a || !b) return a === b;
+  if (a.t !== b.t) return false;
+  return a.t !== 'num' || String(a.dims) === String((b as { dims: readonly number[] }).dims);
+}
+
+export function createEngine(doc: CalcDocument, options: EngineOptions = {}): Engine {
+  return new DocEngine(doc, options);
+}
