@@ -1,0 +1,166 @@
+// General bearing capacity equation, qu = c Nc sc dc + q Nq sq dq + ½ γ B Nγ sγ dγ
+// (Meyerhof 1963 / Hansen 1970 / Vesic 1973 form, vertical load, level ground and base).
+// Nq and Nc are the Reissner/Prandtl closed forms the three share; Nγ by Vesic, Meyerhof or Hansen.
+// Shape factors: De Beer (1970) as adopted by Vesic (1973). Depth factors: Hansen (1970) or
+// Meyerhof (1963). The shape and depth factor forms are from memory (Das, Table 3.4 era).
+
+import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
+import { choice, nonNegative, positive } from './support-args';
+import { frictionAngle } from './soil-bearing-terzaghi';
+import { deg } from '../units/si';
+
+export const NGAMMA_METHODS = ['vesic', 'meyerhof', 'hansen'] as const;
+export const DEPTH_METHODS = ['hansen', 'meyerhof', 'none'] as const;
+type NgammaMethod = (typeof NGAMMA_METHODS)[number];
+type DepthMethod = (typeof DEPTH_METHODS)[number];
+
+/** Nq = e^{π tanφ} tan²(45° + φ/2) (Reissner 1924; Meyerhof, Hansen, Vesic). */
+export function nqVesic(phi: number): number {
+  const p = frictionAngle(phi);
+  return Math.exp(Math.PI * Math.tan(p)) * Math.tan(Math.PI / 4 + p / 2) ** 2;
+}
+
+/** Nc = (Nq − 1) cot φ, π + 2 at φ = 0 (Prandtl 1921). */
+export function ncVesic(phi: number): number {
+  const p = frictionAngle(phi);
+  if (p < 1e-9) return Math.PI + 2;
+  return (nqVesic(p) - 1) / Math.tan(p);
+}
+
+/** Nγ = 2(Nq + 1) tan φ (Vesic 1973). */
+export function ngammaVesic(phi: number): number {
+  return 2 * (nqVesic(phi) + 1) * Math.tan(phi);
+}
+
+/** Nγ = (Nq − 1) tan(1.4φ) (Meyerhof 1963). */
+export function ngammaMeyerhof(phi: number): number {
+  return (nqVesic(phi) - 1) * Math.tan(1.4 * phi);
+}
+
+/** Nγ = 1.5 (Nq − 1) tan φ (Hansen 1970). */
+export function ngammaHansen(phi: number): number {
+  return 1.5 * (nqVesic(phi) - 1) * Math.tan(phi);
+}
+
+/** B/L of a rectangular footing, B ≤ L (B = L for square and circular). */
+function ratio(b: number, l: number): number {
+  positive('B', b);
+  if (positive('L', l) < b) throw new LibraryError(`B (${b}) is the smaller side: L must not be less than B`);
+  return b / l;
+}
+
+export interface Shape { sc: number; sq: number; sg: number; }
+
+/** sc = 1 + (B/L)(Nq/Nc), sq = 1 + (B/L)tanφ, sγ = 1 − 0.4B/L (De Beer 1970, as used by Vesic 1973) [from memory]. */
+export function shapeDeBeer(phi: number, b: number, l: number): Shape {
+  const r = ratio(b, l);
+  return { sc: 1 + r * (nqVesic(phi) / ncVesic(phi)), sq: 1 + r * Math.tan(frictionAngle(phi)), sg: 1 - 0.4 * r };
+}
+
+export interface Depth { dc: number; dq: number; dg: number; }
+
+/** Hansen (1970): k = Df/B (Df ≤ B) or atan(Df/B); dc = 1 + 0.4k, dq = 1 + 2tanφ(1 − sinφ)²k, dγ = 1 [from memory]. */
+export function depthHansen(phi: number, df: number, b: number): Depth {
+  const p = frictionAngle(phi);
+  const x = nonNegative('Df', df) / positive('B', b);
+  const k = x <= 1 ? x : Math.atan(x);
+  return { dc: 1 + 0.4 * k, dq: 1 + 2 * Math.tan(p) * (1 - Math.sin(p)) ** 2 * k, dg: 1 };
+}
+
+/** Meyerhof (1963): dc = 1 + 0.2√Kp Df/B; dq = dγ = 1 + 0.1√Kp Df/B for φ > 10°, else 1 [from memory]. */
+export function depthMeyerhof(phi: number, df: number, b: number): Depth {
+  const p = frictionAngle(phi);
+  const x = nonNegative('Df', df) / positive('B', b);
+  const rootKp = Math.tan(Math.PI / 4 + p / 2);
+  const dq = p > 10 * deg ? 1 + 0.1 * rootKp * x : 1;
+  return { dc: 1 + 0.2 * rootKp * x, dq, dg: dq };
+}
+
+/** qu = c Nc sc dc + q Nq sq dq + ½γB Nγ sγ dγ (Meyerhof 1963 / Vesic 1973 general form). */
+export function quGeneral(
+  c: number, q: number, gamma: number, b: number, l: number, df: number, phi: number,
+  ng: NgammaMethod = 'vesic', dm: DepthMethod = 'hansen',
+): number {
+  const nq = nqVesic(phi);
+  const nc = ncVesic(phi);
+  const ngamma = ng === 'vesic' ? ngammaVesic(phi) : ng === 'meyerhof' ? ngammaMeyerhof(phi) : ngammaHansen(phi);
+  const s = shapeDeBeer(phi, b, l);
+  const d = dm === 'hansen' ? depthHansen(phi, df, b) : dm === 'meyerhof' ? depthMeyerhof(phi, df, b) : (nonNegative('Df', df), { dc: 1, dq: 1, dg: 1 });
+  return nonNegative('c', c) * nc * s.sc * d.dc + nonNegative('q', q) * nq * s.sq * d.dq +
+    0.5 * nonNegative('gamma', gamma) * b * ngamma * s.sg * d.dg;
+}
+
+/** q_allow = qu / FS (common practice; FS usually 2.5 to 3). */
+export function qAllowFs(qu: number, fs: number): number {
+  if (positive('FS', fs) < 1) throw new LibraryError(`factor of safety must be at least 1, got ${fs}`);
+  return positive('qu', qu) / fs;
+}
+
+/** True when the pressure used does not exceed qu / FS. */
+export function bearingOk(qUsed: number, qu: number, fs: number): boolean {
+  return nonNegative('q (used)', qUsed) <= qAllowFs(qu, fs);
+}
+
+const phiP: LibParam = { name: 'phi', type: 'rad', doc: 'soil friction angle' };
+const geo: LibParam[] = [phiP, { name: 'B', type: 'm', doc: 'footing width (short side)' }, { name: 'L', type: 'm', doc: 'footing length (B for square/circular)' }];
+const dep: LibParam[] = [phiP, { name: 'Df', type: 'm', doc: 'depth of the footing base below grade' }, { name: 'B', type: 'm', doc: 'footing width' }];
+const SHAPE = 'De Beer (1970) shape factors as adopted by Vesic (1973) [form from memory]';
+const HANSEN = "Hansen (1970) depth factors, k = Df/B or atan(Df/B) for Df > B [form from memory]";
+const MEYERHOF = 'Meyerhof (1963) depth factors, √Kp = tan(45° + φ/2) [form from memory]';
+
+export const functions: LibFunction[] = [
+  defineFunction({ name: 'nq_vesic', params: [phiP], returns: '1', clause: 'Reissner (1924): Nq = e^{π tanφ}tan²(45° + φ/2), shared by Meyerhof, Hansen, Vesic', doc: 'Bearing capacity factor Nq', fn: nqVesic }),
+  defineFunction({ name: 'nc_vesic', params: [phiP], returns: '1', clause: 'Prandtl (1921): Nc = (Nq − 1)cotφ, π + 2 at φ = 0', doc: 'Bearing capacity factor Nc', fn: ncVesic }),
+  defineFunction({ name: 'ngamma_vesic', params: [phiP], returns: '1', clause: 'Vesic (1973): Nγ = 2(Nq + 1)tanφ', doc: 'Bearing capacity factor Nγ after Vesic', fn: ngammaVesic }),
+  defineFunction({ name: 'ngamma_meyerhof', params: [phiP], returns: '1', clause: 'Meyerhof (1963): Nγ = (Nq − 1)tan(1.4φ)', doc: 'Bearing capacity factor Nγ after Meyerhof', fn: ngammaMeyerhof }),
+  defineFunction({ name: 'ngamma_hansen', params: [phiP], returns: '1', clause: 'Hansen (1970): Nγ = 1.5(Nq − 1)tanφ', doc: 'Bearing capacity factor Nγ after Hansen', fn: ngammaHansen }),
+  defineFunction({ name: 'sc_debeer', params: geo, returns: '1', clause: SHAPE + ': sc = 1 + (B/L)(Nq/Nc)', doc: 'Shape factor for cohesion', fn: (p: number, b: number, l: number) => shapeDeBeer(p, b, l).sc }),
+  defineFunction({ name: 'sq_debeer', params: geo, returns: '1', clause: SHAPE + ': sq = 1 + (B/L)tanφ', doc: 'Shape factor for surcharge', fn: (p: number, b: number, l: number) => shapeDeBeer(p, b, l).sq }),
+  defineFunction({ name: 'sgamma_debeer', params: geo, returns: '1', clause: SHAPE + ': sγ = 1 − 0.4B/L', doc: 'Shape factor for soil weight', fn: (p: number, b: number, l: number) => shapeDeBeer(p, b, l).sg }),
+  defineFunction({ name: 'dc_hansen', params: dep, returns: '1', clause: HANSEN + ': dc = 1 + 0.4k', doc: 'Depth factor for cohesion (Hansen)', fn: (p: number, d: number, b: number) => depthHansen(p, d, b).dc }),
+  defineFunction({ name: 'dq_hansen', params: dep, returns: '1', clause: HANSEN + ': dq = 1 + 2tanφ(1 − sinφ)²k', doc: 'Depth factor for surcharge (Hansen); dγ = 1', fn: (p: number, d: number, b: number) => depthHansen(p, d, b).dq }),
+  defineFunction({ name: 'dc_meyerhof', params: dep, returns: '1', clause: MEYERHOF + ': dc = 1 + 0.2√Kp·Df/B', doc: 'Depth factor for cohesion (Meyerhof)', fn: (p: number, d: number, b: number) => depthMeyerhof(p, d, b).dc }),
+  defineFunction({ name: 'dq_meyerhof', params: dep, returns: '1', clause: MEYERHOF + ': dq = dγ = 1 + 0.1√Kp·Df/B (φ > 10°), else 1', doc: 'Depth factor for surcharge and weight (Meyerhof)', fn: (p: number, d: number, b: number) => depthMeyerhof(p, d, b).dq }),
+  defineFunction({
+    name: 'qu_general',
+    params: [
+      { name: 'c', type: 'Pa', doc: 'soil cohesion' },
+      { name: 'q', type: 'Pa', doc: 'overburden pressure at the base (γ·Df)' },
+      { name: 'gamma', type: 'N/m^3', doc: 'unit weight of the soil below the base' },
+      { name: 'B', type: 'm', doc: 'footing width (short side; diameter if circular)' },
+      { name: 'L', type: 'm', doc: 'footing length (B for square/circular)' },
+      { name: 'Df', type: 'm', doc: 'depth of the base below grade' },
+      phiP,
+      { name: 'ngamma', type: 'text', choices: NGAMMA_METHODS, doc: "Nγ: 'vesic' (default), 'meyerhof' or 'hansen'" },
+      { name: 'depth', type: 'text', choices: DEPTH_METHODS, doc: "depth factors: 'hansen' (default), 'meyerhof' or 'none'" },
+    ],
+    optional: 2,
+    returns: 'Pa',
+    clause: `qu = cNc·sc·dc + qNq·sq·dq + ½γBNγ·sγ·dγ (Meyerhof 1963 / Vesic 1973); ${SHAPE}; ${HANSEN} or ${MEYERHOF}`,
+    doc: 'Ultimate bearing capacity, general equation with shape and depth factors',
+    fn: (c: number, q: number, g: number, b: number, l: number, df: number, p: number, ng?: string, dm?: string) =>
+      quGeneral(c, q, g, b, l, df, p,
+        ng === undefined ? 'vesic' : choice('Nγ method', ng, NGAMMA_METHODS),
+        dm === undefined ? 'hansen' : choice('depth factor method', dm, DEPTH_METHODS)),
+  }),
+  defineFunction({
+    name: 'q_allow_fs',
+    params: [{ name: 'qu', type: 'Pa', doc: 'ultimate bearing capacity' }, { name: 'FS', type: '1', doc: 'factor of safety (≥ 1, usually 2.5–3)' }],
+    returns: 'Pa',
+    clause: 'q_allow = qu/FS (common practice)',
+    doc: 'Allowable bearing pressure from the ultimate capacity and a factor of safety',
+    fn: qAllowFs,
+  }),
+  defineFunction({
+    name: 'bearing_ok',
+    params: [
+      { name: 'q_used', type: 'Pa', doc: 'allowable pressure used in the design' },
+      { name: 'qu', type: 'Pa', doc: 'ultimate bearing capacity' },
+      { name: 'FS', type: '1', doc: 'factor of safety' },
+    ],
+    returns: 'bool',
+    clause: 'q_used ≤ qu/FS (common practice)',
+    doc: 'Whether the allowable pressure used is within capacity / FS',
+    fn: bearingOk,
+  }),
+];

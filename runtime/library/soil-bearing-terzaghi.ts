@@ -1,0 +1,116 @@
+// Terzaghi (1943) bearing capacity: Nq, Nc in closed form; Nγ has none, so it comes from
+// Das, Principles of Foundation Engineering, Table 3.1 (Nγ after Kumbhojkar 1993) at 5° steps,
+// interpolated log-linearly (linearly between 0° and 5°). Rows 45° and 50° are from memory.
+
+import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
+import { choice, finite, nonNegative, positive } from './support-args';
+import { deg } from '../units/si';
+
+export const SHAPES = ['strip', 'square', 'circular'] as const;
+export const SHEAR_MODES = ['general', 'local'] as const;
+type Shape = (typeof SHAPES)[number];
+type ShearMode = (typeof SHEAR_MODES)[number];
+
+/** Das Table 3.1, Nγ (Kumbhojkar 1993): [φ in degrees, Nγ]. */
+const NGAMMA_ROWS: readonly (readonly [number, number])[] = [
+  [0, 0], [5, 0.14], [10, 0.56], [15, 1.52], [20, 3.64], [25, 8.34],
+  [30, 19.13], [35, 45.41], [40, 115.31],
+  [45, 325.34], [50, 1072.8], // from memory
+];
+
+/** A friction angle in radians, 0 ≤ φ ≤ 50°, the range of the table. */
+export function frictionAngle(v: unknown): number {
+  const phi = finite('phi', v);
+  if (phi < 0 || phi > 50 * deg + 1e-12) {
+    throw new LibraryError(`friction angle must be between 0 and 50 deg (given in rad: ${phi.toFixed(4)} = ${(phi / deg).toFixed(2)} deg)`);
+  }
+  return phi;
+}
+
+/** φ' = atan((2/3) tan φ) for Terzaghi local shear (Terzaghi 1943, as in Das §3.3) [from memory]. */
+export function localPhi(phi: number): number {
+  return Math.atan((2 / 3) * Math.tan(frictionAngle(phi)));
+}
+
+/** Nq = e^{2(3π/4 − φ/2)tanφ} / (2cos²(45° + φ/2)) (Terzaghi 1943). */
+export function nqTerzaghi(phi: number): number {
+  const p = frictionAngle(phi);
+  return Math.exp(2 * (0.75 * Math.PI - p / 2) * Math.tan(p)) / (2 * Math.cos(Math.PI / 4 + p / 2) ** 2);
+}
+
+/** Nc = (Nq − 1) cot φ, and 1.5π + 1 at φ = 0 (Terzaghi 1943). */
+export function ncTerzaghi(phi: number): number {
+  const p = frictionAngle(phi);
+  if (p < 1e-9) return 1.5 * Math.PI + 1;
+  return (nqTerzaghi(p) - 1) / Math.tan(p);
+}
+
+/** Nγ from Das Table 3.1 (Kumbhojkar 1993), log-linear between the 5° rows. */
+export function ngammaTerzaghi(phi: number): number {
+  const d = frictionAngle(phi) / deg;
+  const i = Math.min(Math.floor(d / 5), NGAMMA_ROWS.length - 2);
+  const [p0, n0] = NGAMMA_ROWS[i];
+  const [p1, n1] = NGAMMA_ROWS[i + 1];
+  const t = (d - p0) / (p1 - p0);
+  if (n0 === 0) return n0 + t * (n1 - n0);
+  return n0 * Math.pow(n1 / n0, t);
+}
+
+export interface TerzaghiFactors { nc: number; nq: number; ngamma: number; }
+
+/** The three factors at φ (general shear) or at φ' (local shear). */
+export function terzaghiFactors(phi: number, mode: ShearMode = 'general'): TerzaghiFactors {
+  const p = mode === 'local' ? localPhi(phi) : frictionAngle(phi);
+  return { nc: ncTerzaghi(p), nq: nqTerzaghi(p), ngamma: ngammaTerzaghi(p) };
+}
+
+/** qu = s_c c Nc + q Nq + s_γ γ B Nγ: strip 1/0.5, square 1.3/0.4, circular 1.3/0.3 (Terzaghi 1943; Das §3.3). */
+export function quTerzaghi(c: number, q: number, gamma: number, b: number, phi: number, shape: Shape, mode: ShearMode = 'general'): number {
+  const f = terzaghiFactors(phi, mode);
+  const cc = nonNegative('c', c) * (mode === 'local' ? 2 / 3 : 1);
+  const sc = shape === 'strip' ? 1 : 1.3;
+  const sg = shape === 'strip' ? 0.5 : shape === 'square' ? 0.4 : 0.3;
+  return sc * cc * f.nc + nonNegative('q', q) * f.nq + sg * nonNegative('gamma', gamma) * positive('B', b) * f.ngamma;
+}
+
+const phiParam: LibParam = { name: 'phi', type: 'rad', doc: 'soil friction angle' };
+const modeParam: LibParam = { name: 'shear', type: 'text', choices: SHEAR_MODES, doc: "'general' (default) or 'local' (φ' = atan(2/3 tan φ))" };
+const mode = (v: unknown): ShearMode => (v === undefined ? 'general' : choice('shear mode', v, SHEAR_MODES));
+const factor = (k: keyof TerzaghiFactors) => (phi: number, m?: string) => terzaghiFactors(phi, mode(m))[k];
+const LOCAL = "; local shear at φ' = atan((2/3)tanφ) [from memory]";
+
+export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'nq_terzaghi', params: [phiParam, modeParam], optional: 1, returns: '1',
+    clause: 'Terzaghi (1943): Nq = e^{2(3π/4 − φ/2)tanφ}/(2cos²(45° + φ/2))' + LOCAL,
+    doc: 'Terzaghi bearing capacity factor Nq', fn: factor('nq'),
+  }),
+  defineFunction({
+    name: 'nc_terzaghi', params: [phiParam, modeParam], optional: 1, returns: '1',
+    clause: 'Terzaghi (1943): Nc = (Nq − 1)cotφ, 1.5π + 1 at φ = 0' + LOCAL,
+    doc: 'Terzaghi bearing capacity factor Nc', fn: factor('nc'),
+  }),
+  defineFunction({
+    name: 'ngamma_terzaghi', params: [phiParam, modeParam], optional: 1, returns: '1',
+    clause: 'Das, Principles of Foundation Engineering, Table 3.1 (Nγ after Kumbhojkar 1993), 5° rows, log-linear interpolation' + LOCAL,
+    doc: 'Terzaghi bearing capacity factor Nγ (tabulated, interpolated)', fn: factor('ngamma'),
+  }),
+  defineFunction({
+    name: 'qu_terzaghi',
+    params: [
+      { name: 'c', type: 'Pa', doc: 'soil cohesion' },
+      { name: 'q', type: 'Pa', doc: 'overburden pressure at the footing base (γ·Df)' },
+      { name: 'gamma', type: 'N/m^3', doc: 'unit weight of the soil below the base' },
+      { name: 'B', type: 'm', doc: 'footing width (diameter if circular)' },
+      phiParam,
+      { name: 'shape', type: 'text', choices: SHAPES, doc: "'strip', 'square' or 'circular'" },
+      modeParam,
+    ],
+    optional: 1,
+    returns: 'Pa',
+    clause: 'Terzaghi (1943): qu = cNc + qNq + 0.5γBNγ; square 1.3cNc + qNq + 0.4γBNγ; circular 1.3cNc + qNq + 0.3γBNγ (Das §3.3); Nγ from Das Table 3.1' + LOCAL + ", c' = 2c/3",
+    doc: 'Ultimate bearing capacity by Terzaghi, general or local shear',
+    fn: (c: number, q: number, g: number, b: number, phi: number, s: string, m?: string) =>
+      quTerzaghi(c, q, g, b, phi, choice('shape', s, SHAPES), mode(m)),
+  }),
+];
