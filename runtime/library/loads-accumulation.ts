@@ -1,0 +1,106 @@
+// Axial load accumulated down a column: the roof plus `floors` floor levels above the
+// section, each with the same tributary area, and one storey of column self-weight per
+// level carried (the section is at the foot of its own storey). Floor live load is reduced
+// once for the summed area of all floors supported (ASCE 7-22 §4.7.2, AT summed over the
+// floors, commentary C4.7); roof live load is taken unreduced (conservative).
+
+import { defineFunction, type LibFunction } from './types';
+import { choice, count, nonNegative, positive } from './gravity-args';
+import { liveReduced, OCCUPANCIES, type Occupancy } from './loads-reduction';
+import { comboAsd, comboUGoverning } from './loads-combinations';
+
+export interface ColumnLoads {
+  floors: number;
+  AT: number; // tributary area of one level, m²
+  Dfloor: number; // floor dead load incl. slab self-weight, Pa
+  Lfloor: number; // unreduced floor live load Lo, Pa
+  Droof: number; // roof dead load, Pa
+  Lroof: number; // roof live load Lr, Pa
+  wCol: number; // column self-weight per metre, N/m
+  hStorey: number; // storey height, m
+  KLL: number;
+  occupancy?: Occupancy;
+}
+
+function checked(fn: string, c: ColumnLoads): Required<ColumnLoads> {
+  return {
+    floors: count(fn, 'floors', c.floors, 0),
+    AT: positive(fn, 'AT', c.AT),
+    Dfloor: nonNegative(fn, 'D_floor', c.Dfloor),
+    Lfloor: nonNegative(fn, 'L_floor', c.Lfloor),
+    Droof: nonNegative(fn, 'D_roof', c.Droof),
+    Lroof: nonNegative(fn, 'Lr', c.Lroof),
+    wCol: nonNegative(fn, 'w_col', c.wCol),
+    hStorey: positive(fn, 'h_storey', c.hStorey),
+    KLL: positive(fn, 'KLL', c.KLL),
+    occupancy: choice(fn, 'occupancy', c.occupancy, OCCUPANCIES, 'general'),
+  };
+}
+
+/** Dead load at the foot of the storey: roof + floors × floor dead load over AT, plus (floors + 1) storeys of column (statics). */
+export function colDead(c: ColumnLoads): number {
+  const k = checked('col_dead', c);
+  return k.AT * (k.Droof + k.floors * k.Dfloor) + (k.floors + 1) * k.wCol * k.hStorey;
+}
+
+/** Reduced floor live load carried: ASCE 7-22 §4.7.2 with AT summed over the floors supported. */
+export function colLive(c: ColumnLoads): number {
+  const k = checked('col_live', c);
+  if (k.floors === 0) return 0;
+  const area = k.floors * k.AT;
+  return area * liveReduced(k.Lfloor, area, k.KLL, k.floors, k.occupancy);
+}
+
+/** Roof live load carried (unreduced). */
+export function colRoofLive(c: ColumnLoads): number {
+  const k = checked('col_roof_live', c);
+  return k.AT * k.Lroof;
+}
+
+/** Factored axial load: governing ASCE 7-16 §2.3.1 gravity combination of the accumulated D, L, Lr. */
+export function colPu(c: ColumnLoads): number {
+  return comboUGoverning(colDead(c), colLive(c), colRoofLive(c)).value;
+}
+
+/** Service axial load: governing ASCE 7-16 §2.4.1 gravity combination of the accumulated D, L, Lr. */
+export function colPs(c: ColumnLoads): number {
+  return comboAsd(colDead(c), colLive(c), colRoofLive(c));
+}
+
+// ---- formula functions ------------------------------------------------------------
+
+const PARAMS = [
+  { name: 'floors', type: '1', doc: 'floor levels supported above the section (roof not counted)' },
+  { name: 'AT', type: 'm^2', doc: 'tributary area of one level' },
+  { name: 'D_floor', type: 'N/m^2', doc: 'floor dead load incl. slab self-weight' },
+  { name: 'L_floor', type: 'N/m^2', doc: 'unreduced floor live load Lo' },
+  { name: 'D_roof', type: 'N/m^2', doc: 'roof dead load' },
+  { name: 'Lr', type: 'N/m^2', doc: 'roof live load' },
+  { name: 'w_col', type: 'N/m', doc: 'column self-weight per length' },
+  { name: 'h_storey', type: 'm', doc: 'storey height' },
+  { name: 'KLL', type: '1', doc: 'live load element factor' },
+  { name: 'occupancy', type: 'text', choices: OCCUPANCIES, doc: 'general, assembly or garage' },
+];
+
+type Args = [number, number, number, number, number, number, number, number, number, Occupancy?];
+const pack = ([floors, AT, Dfloor, Lfloor, Droof, Lroof, wCol, hStorey, KLL, occupancy]: Args): ColumnLoads =>
+  ({ floors, AT, Dfloor, Lfloor, Droof, Lroof, wCol, hStorey, KLL, occupancy });
+
+function entry(name: string, clause: string, doc: string, f: (c: ColumnLoads) => number): LibFunction {
+  return defineFunction({
+    name, params: PARAMS, optional: 1, returns: 'N', clause, doc,
+    fn: (a: number, b: number, c: number, d: number, e: number, g: number, h: number, i: number, j: number, k?: Occupancy) =>
+      f(pack([a, b, c, d, e, g, h, i, j, k])),
+  });
+}
+
+export const functions: LibFunction[] = [
+  entry('col_dead', 'Statics (tributary area × load per level + column weight)',
+    'Accumulated dead load at the foot of the storey', colDead),
+  entry('col_live', 'ASCE 7-22 §4.7.2-4.7.5 (AT summed over floors)',
+    'Accumulated reduced floor live load', colLive),
+  entry('col_pu', 'ASCE 7-16 §2.3.1 on accumulated D, L (ASCE 7-22 §4.7), Lr',
+    'Factored column axial load, governing gravity combination', colPu),
+  entry('col_ps', 'ASCE 7-16 §2.4.1 on accumulated D, L (ASCE 7-22 §4.7), Lr',
+    'Service column axial load, governing ASD gravity combination', colPs),
+];

@@ -1,0 +1,98 @@
+// Tributary area of a column by the half-bay rule: a column carries the floor out to the
+// mid-lines of the bays around it, plus any cantilever overhang beyond an edge column line.
+// Overhangs are measured from the column centreline to the slab edge.
+
+import { defineFunction, LibraryError, type LibFunction } from './types';
+import { choice, nonNegative, optNonNegative, positive } from './gravity-args';
+
+export const POSITIONS = ['interior', 'edge', 'corner'] as const;
+export type ColumnPosition = (typeof POSITIONS)[number];
+
+/** Tributary width along one grid line: half of each adjoining span plus an overhang past an edge (half-bay rule, common practice). */
+export function tribWidth(spanA: number, spanB: number, overhang = 0): number {
+  const fn = 'trib_width';
+  const a = nonNegative(fn, 'span_a', spanA);
+  const b = nonNegative(fn, 'span_b', spanB);
+  const o = nonNegative(fn, 'overhang', overhang);
+  if (a === 0 && b === 0) throw new LibraryError(`${fn}: at least one adjoining span must be positive`);
+  if (o > 0 && a > 0 && b > 0) {
+    throw new LibraryError(`${fn}: an overhang needs an edge (one adjoining span 0); both spans are given`);
+  }
+  return a / 2 + b / 2 + o;
+}
+
+/**
+ * Tributary area on a regular grid of bays lx × ly (half-bay rule, common practice).
+ * 'edge': the slab edge runs parallel to y, so half a bay in x is missing; cantX is the
+ * overhang past that edge. 'corner': both; cantX and cantY the overhangs in x and y.
+ */
+export function tribArea(lx: number, ly: number, position: ColumnPosition, cantX = 0, cantY = 0): number {
+  const fn = 'trib_area';
+  const x = positive(fn, 'lx', lx);
+  const y = positive(fn, 'ly', ly);
+  const cx = nonNegative(fn, 'cant_x', cantX);
+  const cy = nonNegative(fn, 'cant_y', cantY);
+  const pos = choice(fn, 'position', position, POSITIONS);
+  if (pos === 'interior') {
+    if (cx > 0 || cy > 0) throw new LibraryError(`${fn}: an interior column has no overhang`);
+    return x * y;
+  }
+  if (pos === 'edge') {
+    if (cy > 0) throw new LibraryError(`${fn}: an edge column's edge runs along y; give its overhang as cant_x`);
+    return (x / 2 + cx) * y;
+  }
+  return (x / 2 + cx) * (y / 2 + cy);
+}
+
+/** Tributary area from the four adjoining spans (0 where the column is on an edge), with optional overhangs (half-bay rule, common practice). */
+export function tribAreaSpans(
+  xLeft: number, xRight: number, yBelow: number, yAbove: number, cantX = 0, cantY = 0,
+): number {
+  return tribWidth(xLeft, xRight, cantX) * tribWidth(yBelow, yAbove, cantY);
+}
+
+const CLAUSE = 'Half-bay rule (common practice)';
+
+export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'trib_width',
+    params: [
+      { name: 'span_a', type: 'm', doc: 'span on one side (0 at an edge)' },
+      { name: 'span_b', type: 'm', doc: 'span on the other side (0 at an edge)' },
+      { name: 'overhang', type: 'm', doc: 'cantilever past the edge column line' },
+    ],
+    optional: 1, returns: 'm', clause: CLAUSE,
+    doc: 'Tributary width along one grid line: half of each adjoining span + overhang',
+    fn: (a: number, b: number, o?: number) => tribWidth(a, b, optNonNegative('trib_width', 'overhang', o, 0)),
+  }),
+  defineFunction({
+    name: 'trib_area',
+    params: [
+      { name: 'lx', type: 'm', doc: 'bay span in x' },
+      { name: 'ly', type: 'm', doc: 'bay span in y' },
+      { name: 'position', type: 'text', choices: POSITIONS, doc: 'interior, edge (edge parallel to y) or corner' },
+      { name: 'cant_x', type: 'm', doc: 'overhang past the edge, x' },
+      { name: 'cant_y', type: 'm', doc: 'overhang past the edge, y (corner only)' },
+    ],
+    optional: 2, returns: 'm^2', clause: CLAUSE,
+    doc: 'Tributary area of an interior, edge or corner column on a regular grid',
+    fn: (lx: number, ly: number, pos: ColumnPosition, cx?: number, cy?: number) =>
+      tribArea(lx, ly, pos, optNonNegative('trib_area', 'cant_x', cx, 0), optNonNegative('trib_area', 'cant_y', cy, 0)),
+  }),
+  defineFunction({
+    name: 'trib_area_spans',
+    params: [
+      { name: 'x_left', type: 'm', doc: 'span to the left (0 at an edge)' },
+      { name: 'x_right', type: 'm', doc: 'span to the right (0 at an edge)' },
+      { name: 'y_below', type: 'm', doc: 'span below (0 at an edge)' },
+      { name: 'y_above', type: 'm', doc: 'span above (0 at an edge)' },
+      { name: 'cant_x', type: 'm', doc: 'overhang past an edge, x' },
+      { name: 'cant_y', type: 'm', doc: 'overhang past an edge, y' },
+    ],
+    optional: 2, returns: 'm^2', clause: CLAUSE,
+    doc: 'Tributary area from unequal adjoining spans and overhangs',
+    fn: (xl: number, xr: number, yb: number, ya: number, cx?: number, cy?: number) =>
+      tribAreaSpans(xl, xr, yb, ya, optNonNegative('trib_area_spans', 'cant_x', cx, 0),
+        optNonNegative('trib_area_spans', 'cant_y', cy, 0)),
+  }),
+];

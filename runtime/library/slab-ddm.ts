@@ -1,0 +1,221 @@
+// Direct Design Method for two-way slabs, ACI 318-19 §8.10: applicability, total static
+// moment Mo, its split between negative and positive sections, and the column-strip share.
+// Table values are from memory except where the test file names a confirmed source.
+
+import { defineFunction, LibraryError, type LibFunction } from './types';
+import { choice, count, nonNegative, positive, show } from './gravity-args';
+
+interface Applicability { ok: boolean; reason: string }
+
+/** ACI 318-19 §8.10.2.1, .2, .3, .6: spans each way, span ratio, successive spans, L/D. */
+function applicability(
+  fn: string, nx: number, ny: number, l1: number, l2: number, D: number, L: number, l1Next?: number, l2Next?: number,
+): Applicability {
+  const n1 = count(fn, 'n1', nx, 1);
+  const n2 = count(fn, 'n2', ny, 1);
+  const a = positive(fn, 'l1', l1);
+  const b = positive(fn, 'l2', l2);
+  const d = positive(fn, 'D', D);
+  const live = nonNegative(fn, 'L', L);
+  const a2 = l1Next === undefined ? a : positive(fn, 'l1_next', l1Next);
+  const b2 = l2Next === undefined ? b : positive(fn, 'l2_next', l2Next);
+  const fail = (reason: string): Applicability => ({ ok: false, reason: `DDM not applicable: ${reason}` });
+  if (n1 < 3 || n2 < 3) return fail(`§8.10.2.1 needs at least 3 continuous spans each way (${n1} × ${n2})`);
+  const ratio = Math.max(a, b) / Math.min(a, b);
+  if (ratio > 2 + 1e-9) return fail(`§8.10.2.3 panel ℓlong/ℓshort = ${ratio.toFixed(2)} > 2`);
+  for (const [x, y, dir] of [[a, a2, 1], [b, b2, 2]] as const) {
+    const diff = Math.abs(x - y) / Math.max(x, y);
+    if (diff > 1 / 3 + 1e-9) {
+      return fail(`§8.10.2.2 successive spans in direction ${dir} differ by ${(100 * diff).toFixed(0)} % of the longer (> 1/3)`);
+    }
+  }
+  if (live > 2 * d * (1 + 1e-12)) return fail(`§8.10.2.6 L/D = ${(live / d).toFixed(2)} > 2`);
+  return {
+    ok: true,
+    reason: 'DDM applicable: §8.10.2.1 spans, .2 successive spans, .3 ratio and .6 L/D met (column offsets, .4, and beam stiffness, .7, not checked)',
+  };
+}
+
+/** ACI 318-19 §8.10.2: the DDM limits checked here are all met. */
+export function ddmApplicable(nx: number, ny: number, l1: number, l2: number, D: number, L: number, l1Next?: number, l2Next?: number): boolean {
+  return applicability('ddm_applicable', nx, ny, l1, l2, D, L, l1Next, l2Next).ok;
+}
+
+/** Why the DDM applies or not, naming the first limit that fails (ACI 318-19 §8.10.2). */
+export function ddmApplicableReason(nx: number, ny: number, l1: number, l2: number, D: number, L: number, l1Next?: number, l2Next?: number): string {
+  return applicability('ddm_applicable_reason', nx, ny, l1, l2, D, L, l1Next, l2Next).reason;
+}
+
+/** ACI 318-19 §8.10.3.2.2: clear span face to face of supports, not less than 0.65 ℓ1. */
+export function ddmLn(l1: number, c1a: number, c1b?: number): number {
+  const fn = 'ddm_ln';
+  const l = positive(fn, 'l1', l1);
+  const ca = nonNegative(fn, 'c1a', c1a);
+  const cb = c1b === undefined ? ca : nonNegative(fn, 'c1b', c1b);
+  const clear = l - ca / 2 - cb / 2;
+  if (clear <= 0) throw new LibraryError(`${fn}: supports of ${show(ca)} m and ${show(cb)} m leave no clear span in ${show(l)} m`);
+  return Math.max(clear, 0.65 * l);
+}
+
+/** ACI 318-19 Eq. 8.10.3.2: Mo = qu ℓ2 ℓn²/8, with ℓn ≥ 0.65 ℓ1 (§8.10.3.2.2). */
+export function ddmMo(qu: number, l2: number, ln: number, l1: number): number {
+  const fn = 'ddm_mo';
+  const q = nonNegative(fn, 'qu', qu);
+  const b = positive(fn, 'l2', l2);
+  const n = positive(fn, 'ln', ln);
+  const a = positive(fn, 'l1', l1);
+  if (n > a) throw new LibraryError(`${fn}: clear span ln = ${show(n)} m exceeds the centre-to-centre span l1 = ${show(a)} m`);
+  const lnEff = Math.max(n, 0.65 * a);
+  return (q * b * lnEff * lnEff) / 8;
+}
+
+export const INTERIOR_LOCATIONS = ['negative', 'positive'] as const;
+export type InteriorLocation = (typeof INTERIOR_LOCATIONS)[number];
+
+/** ACI 318-19 §8.10.4.1: interior span, negative 0.65 Mo, positive 0.35 Mo. */
+export function ddmInteriorCoef(location: InteriorLocation): number {
+  return choice('ddm_interior_coef', 'location', location, INTERIOR_LOCATIONS) === 'negative' ? 0.65 : 0.35;
+}
+
+/** ACI 318-19 Table 8.10.4.2 rows: [interior negative, positive, exterior negative] fractions of Mo. */
+export const END_SPAN_TABLE = {
+  unrestrained: [0.75, 0.63, 0], // exterior edge unrestrained
+  'beams-all': [0.7, 0.57, 0.16], // slab with beams between all supports
+  'no-beams': [0.7, 0.52, 0.26], // no beams between interior supports, no edge beam
+  'edge-beam': [0.7, 0.5, 0.3], // no beams between interior supports, with edge beam
+  restrained: [0.65, 0.35, 0.65], // exterior edge fully restrained
+} as const;
+export type EndCase = keyof typeof END_SPAN_TABLE;
+export const END_CASES = Object.keys(END_SPAN_TABLE) as EndCase[];
+export const END_LOCATIONS = ['negative-interior', 'positive', 'negative-exterior'] as const;
+export type EndLocation = (typeof END_LOCATIONS)[number];
+
+/** ACI 318-19 Table 8.10.4.2: end span moment as a fraction of Mo. */
+export function ddmEndCoef(endCase: EndCase, location: EndLocation): number {
+  const c = choice('ddm_end_coef', 'case', endCase, END_CASES);
+  const loc = choice('ddm_end_coef', 'location', location, END_LOCATIONS);
+  return END_SPAN_TABLE[c][END_LOCATIONS.indexOf(loc)];
+}
+
+/** ACI 318-19 §8.4.1.5: column strip width, 0.25ℓ1 or 0.25ℓ2 (the smaller) each side of the column line. */
+export function ddmCsWidth(l1: number, l2: number): number {
+  return 2 * Math.min(0.25 * positive('ddm_cs_width', 'l1', l1), 0.25 * positive('ddm_cs_width', 'l2', l2));
+}
+
+export const CS_LOCATIONS = ['negative-interior', 'negative-exterior', 'positive'] as const;
+export type CsLocation = (typeof CS_LOCATIONS)[number];
+
+const RATIOS = [0.5, 1, 2];
+const CS_NO_BEAMS = { 'negative-interior': [0.75, 0.75, 0.75], positive: [0.6, 0.6, 0.6] };
+const CS_BEAMS = [0.9, 0.75, 0.45]; // αf1ℓ2/ℓ1 ≥ 1.0, interior negative and positive alike
+
+/** Piecewise-linear in ℓ2/ℓ1 over 0.5, 1, 2. */
+function byRatio(row: readonly number[], r: number): number {
+  const i = r <= 1 ? 0 : 1;
+  const t = (r - RATIOS[i]) / (RATIOS[i + 1] - RATIOS[i]);
+  return row[i] + t * (row[i + 1] - row[i]);
+}
+
+/**
+ * ACI 318-19 Tables 8.10.5.1 (interior negative), 8.10.5.2 (exterior negative, with βt) and
+ * 8.10.5.5 (positive): column-strip fraction, linear in ℓ2/ℓ1 (0.5-2), in αf1ℓ2/ℓ1 (0-1) and βt (0-2.5).
+ */
+export function ddmCsFraction(location: CsLocation, l2OverL1: number, alphaRatio = 0, betaT = 0): number {
+  const fn = 'ddm_cs_fraction';
+  const loc = choice(fn, 'location', location, CS_LOCATIONS);
+  const r = positive(fn, 'l2_l1', l2OverL1);
+  if (r < 0.5 - 1e-9 || r > 2 + 1e-9) throw new LibraryError(`${fn}: ℓ2/ℓ1 = ${show(r)} is outside 0.5-2 (§8.10.2.3)`);
+  const ta = Math.min(nonNegative(fn, 'alpha_l2_l1', alphaRatio), 1);
+  const beams = byRatio(CS_BEAMS, r);
+  if (loc === 'negative-exterior') {
+    const tb = Math.min(nonNegative(fn, 'beta_t', betaT), 2.5) / 2.5;
+    const stiffEdge = 0.75 + ta * (beams - 0.75); // βt ≥ 2.5
+    return 1 + tb * (stiffEdge - 1);
+  }
+  const none = byRatio(CS_NO_BEAMS[loc], r);
+  return none + ta * (beams - none);
+}
+
+/** ACI 318-19 §8.10.5.7.1: share of the column-strip moment taken by the beam, 0.85 at αf1ℓ2/ℓ1 ≥ 1, linear to 0. */
+export function ddmBeamShare(alphaRatio: number): number {
+  return 0.85 * Math.min(nonNegative('ddm_beam_share', 'alpha_l2_l1', alphaRatio), 1);
+}
+
+const APPL_PARAMS = [
+  { name: 'n1', type: '1', doc: 'number of continuous spans in direction 1' },
+  { name: 'n2', type: '1', doc: 'number of continuous spans in direction 2' },
+  { name: 'l1', type: 'm', doc: 'span centre to centre, direction 1' },
+  { name: 'l2', type: 'm', doc: 'span centre to centre, direction 2' },
+  { name: 'D', type: 'N/m^2', doc: 'unfactored dead load' },
+  { name: 'L', type: 'N/m^2', doc: 'unfactored live load' },
+  { name: 'l1_next', type: 'm', doc: 'next span in direction 1' },
+  { name: 'l2_next', type: 'm', doc: 'next span in direction 2' },
+];
+const ALPHA = { name: 'alpha_l2_l1', type: '1', doc: 'αf1ℓ2/ℓ1 (0 for a flat plate)' };
+
+export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'ddm_applicable', params: APPL_PARAMS, optional: 2, returns: 'bool', clause: 'ACI 318-19 §8.10.2',
+    doc: 'The Direct Design Method limits are met',
+    fn: (a: number, b: number, c: number, d: number, e: number, f: number, g?: number, h?: number) =>
+      ddmApplicable(a, b, c, d, e, f, g, h),
+  }),
+  defineFunction({
+    name: 'ddm_applicable_reason', params: APPL_PARAMS, optional: 2, returns: 'text', clause: 'ACI 318-19 §8.10.2',
+    doc: 'Why the Direct Design Method applies or not',
+    fn: (a: number, b: number, c: number, d: number, e: number, f: number, g?: number, h?: number) =>
+      ddmApplicableReason(a, b, c, d, e, f, g, h),
+  }),
+  defineFunction({
+    name: 'ddm_ln',
+    params: [{ name: 'l1', type: 'm', doc: 'span centre to centre' }, { name: 'c1a', type: 'm', doc: 'support width at one end' },
+      { name: 'c1b', type: 'm', doc: 'support width at the other end (default c1a)' }],
+    optional: 1, returns: 'm', clause: 'ACI 318-19 §8.10.3.2.2',
+    doc: 'Clear span face to face of supports, ≥ 0.65 ℓ1',
+    fn: (l1: number, a: number, b?: number) => ddmLn(l1, a, b),
+  }),
+  defineFunction({
+    name: 'ddm_mo',
+    params: [{ name: 'qu', type: 'N/m^2', doc: 'factored load' }, { name: 'l2', type: 'm', doc: 'transverse span' },
+      { name: 'ln', type: 'm', doc: 'clear span' }, { name: 'l1', type: 'm', doc: 'span centre to centre' }],
+    returns: 'N*m', clause: 'ACI 318-19 Eq. 8.10.3.2',
+    doc: 'Total factored static moment Mo = qu ℓ2 ℓn²/8',
+    fn: (q: number, l2: number, ln: number, l1: number) => ddmMo(q, l2, ln, l1),
+  }),
+  defineFunction({
+    name: 'ddm_interior_coef',
+    params: [{ name: 'location', type: 'text', choices: INTERIOR_LOCATIONS, doc: 'negative or positive' }],
+    returns: '1', clause: 'ACI 318-19 §8.10.4.1',
+    doc: 'Interior span moment as a fraction of Mo (0.65 / 0.35)',
+    fn: (l: InteriorLocation) => ddmInteriorCoef(l),
+  }),
+  defineFunction({
+    name: 'ddm_end_coef',
+    params: [{ name: 'case', type: 'text', choices: END_CASES, doc: 'edge condition of the end span' },
+      { name: 'location', type: 'text', choices: END_LOCATIONS, doc: 'negative-interior, positive or negative-exterior' }],
+    returns: '1', clause: 'ACI 318-19 Table 8.10.4.2',
+    doc: 'End span moment as a fraction of Mo',
+    fn: (c: EndCase, l: EndLocation) => ddmEndCoef(c, l),
+  }),
+  defineFunction({
+    name: 'ddm_cs_width',
+    params: [{ name: 'l1', type: 'm', doc: 'span in the direction of the moments' }, { name: 'l2', type: 'm', doc: 'transverse span' }],
+    returns: 'm', clause: 'ACI 318-19 §8.4.1.5',
+    doc: 'Column strip total width, 2·min(0.25ℓ1, 0.25ℓ2)',
+    fn: (l1: number, l2: number) => ddmCsWidth(l1, l2),
+  }),
+  defineFunction({
+    name: 'ddm_cs_fraction',
+    params: [{ name: 'location', type: 'text', choices: CS_LOCATIONS, doc: 'negative-interior, negative-exterior or positive' },
+      { name: 'l2_l1', type: '1', doc: 'ℓ2/ℓ1' }, ALPHA,
+      { name: 'beta_t', type: '1', doc: 'torsional stiffness ratio βt of the edge beam (exterior negative)' }],
+    optional: 2, returns: '1', clause: 'ACI 318-19 Tables 8.10.5.1, 8.10.5.2, 8.10.5.5',
+    doc: 'Share of the moment taken by the column strip',
+    fn: (l: CsLocation, r: number, a?: number, b?: number) => ddmCsFraction(l, r, a, b),
+  }),
+  defineFunction({
+    name: 'ddm_beam_share', params: [ALPHA], returns: '1', clause: 'ACI 318-19 §8.10.5.7.1',
+    doc: 'Share of the column-strip moment taken by the beam',
+    fn: (a: number) => ddmBeamShare(a),
+  }),
+];

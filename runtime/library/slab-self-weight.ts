@@ -1,0 +1,66 @@
+// Can the slab carry its own weight as a one-way strip? A sanity flag for thin or long
+// slabs: the factored self-weight moment of a 1 m strip (1.4D, ASCE 7-16 §2.3.1 comb. 1)
+// against φMn of the same strip with only the minimum steel (0.0018 b h, ACI 318-19
+// Table 7.6.1.1). Elastic moment coefficients of a uniform beam (common practice): simple
+// wℓ²/8, one end continuous (propped) wℓ²/8, both ends continuous (fixed) wℓ²/12,
+// cantilever wℓ²/2.
+
+import { defineFunction, LibraryError, type LibFunction } from './types';
+import { choice, positive, type Edition, EDITIONS } from './gravity-args';
+import { comboU1 } from './loads-combinations';
+import { asMinSlab } from './reinforcement-limits';
+import { phiMn } from './flexure';
+import { ONE_WAY_SUPPORTS, type OneWaySupport } from './slab-thickness';
+
+const MOMENT_COEF: Record<OneWaySupport, number> = { simple: 1 / 8, 'one-end': 1 / 8, 'both-ends': 1 / 12, cantilever: 1 / 2 };
+
+/** Demand/capacity of a 1 m strip under 1.4 × self-weight with minimum steel (see header). */
+export function selfWeightRatio(
+  h: number, d: number, span: number, support: OneWaySupport, fc: number, fy: number, wc: number, ed: Edition = '318-19',
+): number {
+  const fn = 'self_weight_ratio';
+  const hh = positive(fn, 'h', h);
+  const dd = positive(fn, 'd', d);
+  if (dd >= hh) throw new LibraryError(`${fn}: d must be less than h`);
+  const l = positive(fn, 'span', span);
+  const sup = choice(fn, 'support', support, ONE_WAY_SUPPORTS);
+  const w = positive(fn, 'wc', wc);
+  const qu = comboU1(w * hh); // N/m² = N/m on a 1 m strip
+  const Mu = MOMENT_COEF[sup] * qu * l * l;
+  const capacity = phiMn(asMinSlab(1, hh, fy, ed), 1, dd, fc, fy, ed);
+  return Mu / capacity;
+}
+
+/** True when the strip with minimum steel carries its factored self-weight (ratio ≤ 1). */
+export function selfWeightOk(
+  h: number, d: number, span: number, support: OneWaySupport, fc: number, fy: number, wc: number, ed: Edition = '318-19',
+): boolean {
+  return selfWeightRatio(h, d, span, support, fc, fy, wc, ed) <= 1;
+}
+
+const PARAMS = [
+  { name: 'h', type: 'm', doc: 'slab thickness' },
+  { name: 'd', type: 'm', doc: 'effective depth of the minimum steel' },
+  { name: 'span', type: 'm', doc: 'span of the strip' },
+  { name: 'support', type: 'text', choices: ONE_WAY_SUPPORTS, doc: 'simple, one-end, both-ends or cantilever' },
+  { name: 'fc', type: 'Pa', doc: "specified compressive strength f'c" },
+  { name: 'fy', type: 'Pa', doc: 'yield strength of the reinforcement' },
+  { name: 'wc', type: 'N/m^3', doc: 'unit weight of the concrete' },
+  { name: 'edition', type: 'text', choices: EDITIONS, doc: "ACI 318 edition, '318-19' (default) or '318-14'" },
+];
+const CLAUSE = 'ASCE 7-16 §2.3.1 (1.4D); ACI 318-19 Table 7.6.1.1, §22.2';
+
+export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'self_weight_ratio', params: PARAMS, optional: 1, returns: '1', clause: CLAUSE,
+    doc: 'Factored self-weight moment / φMn of a strip with minimum steel',
+    fn: (h: number, d: number, l: number, s: OneWaySupport, fc: number, fy: number, wc: number, ed?: Edition) =>
+      selfWeightRatio(h, d, l, s, fc, fy, wc, ed),
+  }),
+  defineFunction({
+    name: 'self_weight_ok', params: PARAMS, optional: 1, returns: 'bool', clause: CLAUSE,
+    doc: 'The slab carries its own factored weight as a one-way strip with minimum steel',
+    fn: (h: number, d: number, l: number, s: OneWaySupport, fc: number, fy: number, wc: number, ed?: Edition) =>
+      selfWeightOk(h, d, l, s, fc, fy, wc, ed),
+  }),
+];

@@ -1,0 +1,84 @@
+// Minimum slab thickness for deflection control when deflections are not calculated.
+// One-way: ACI 318-19 Table 7.3.1.1 with its fy and lightweight modifiers (§7.3.1.1.1-2).
+// Two-way without interior beams: Table 8.3.1.1 with linear interpolation in fy and the
+// absolute minimums of §8.3.1.1 (5 in without, 4 in with drop panels).
+
+import { defineFunction, LibraryError, type LibFunction } from './types';
+import { bool, choice, positive, show } from './gravity-args';
+import { inch, pcf, psi } from '../units/si';
+
+export const ONE_WAY_SUPPORTS = ['simple', 'one-end', 'both-ends', 'cantilever'] as const;
+export type OneWaySupport = (typeof ONE_WAY_SUPPORTS)[number];
+const ONE_WAY_DIVISOR: Record<OneWaySupport, number> = { simple: 20, 'one-end': 24, 'both-ends': 28, cantilever: 10 };
+
+/** ACI 318-19 §7.3.1.1.1: fy modifier 0.4 + fy/100,000 (psi). */
+export function fyFactor(fy: number): number {
+  return 0.4 + positive('h_min_one_way', 'fy', fy) / psi / 100000;
+}
+
+/** ACI 318-19 §7.3.1.1.2: lightweight modifier (1.65 − 0.005wc) ≥ 1.09 for wc 90-115 pcf; 1.0 above 115 pcf. */
+export function lightweightFactor(wc: number): number {
+  const w = positive('h_min_one_way', 'wc', wc) / pcf;
+  if (w < 90 - 1e-9) throw new LibraryError(`h_min_one_way: wc = ${show(w)} pcf is below the 90 pcf the table covers`);
+  if (w > 115) return 1;
+  return Math.max(1.65 - 0.005 * w, 1.09);
+}
+
+/** ACI 318-19 Table 7.3.1.1: one-way slab h ≥ ℓ/20, ℓ/24, ℓ/28, ℓ/10, times the fy and lightweight modifiers. */
+export function hMinOneWay(l: number, support: OneWaySupport, fy = 60000 * psi, wc?: number): number {
+  const fn = 'h_min_one_way';
+  const span = positive(fn, 'l', l);
+  const sup = choice(fn, 'support', support, ONE_WAY_SUPPORTS);
+  const lw = wc === undefined ? 1 : lightweightFactor(wc);
+  return (span / ONE_WAY_DIVISOR[sup]) * fyFactor(fy) * lw;
+}
+
+export const PANELS = ['exterior', 'exterior-edge-beam', 'interior'] as const;
+export type Panel = (typeof PANELS)[number];
+
+/** ACI 318-19 Table 8.3.1.1 divisors at fy = 40, 60, 75 ksi (no drop panels / with drop panels). */
+const FY_KSI = [40, 60, 75];
+const TWO_WAY_DIVISOR: Record<'none' | 'drop', Record<Panel, number[]>> = {
+  none: { exterior: [33, 30, 28], 'exterior-edge-beam': [36, 33, 31], interior: [36, 33, 31] },
+  drop: { exterior: [36, 33, 31], 'exterior-edge-beam': [40, 36, 34], interior: [40, 36, 34] },
+};
+
+/** ACI 318-19 Table 8.3.1.1: two-way slab without interior beams, h ≥ ℓn/divisor (h interpolated in fy), ≥ 5 in (4 in with drop panels). */
+export function hMinTwoWay(ln: number, panel: Panel, dropPanels = false, fy = 60000 * psi): number {
+  const fn = 'h_min_two_way';
+  const span = positive(fn, 'ln', ln);
+  const p = choice(fn, 'panel', panel, PANELS);
+  const drop = bool(fn, 'drop_panels', dropPanels, false);
+  const k = positive(fn, 'fy', fy) / psi / 1000;
+  if (k < 40 - 1e-9 || k > 75 + 1e-9) {
+    throw new LibraryError(`${fn}: fy = ${show(k)} ksi is outside the 40-75 ksi range of Table 8.3.1.1`);
+  }
+  const div = TWO_WAY_DIVISOR[drop ? 'drop' : 'none'][p];
+  const i = k <= 60 ? 0 : 1;
+  const t = (k - FY_KSI[i]) / (FY_KSI[i + 1] - FY_KSI[i]);
+  const h = span / div[i] + t * (span / div[i + 1] - span / div[i]);
+  return Math.max(h, (drop ? 4 : 5) * inch);
+}
+
+const L = { name: 'l', type: 'm', doc: 'span length' };
+const FY = { name: 'fy', type: 'Pa', doc: 'yield strength of the reinforcement (default 60 ksi)' };
+
+export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'h_min_one_way',
+    params: [L, { name: 'support', type: 'text', choices: ONE_WAY_SUPPORTS, doc: 'simple, one-end, both-ends (continuous) or cantilever' },
+      FY, { name: 'wc', type: 'N/m^3', doc: 'unit weight of lightweight concrete (omit for normal weight)' }],
+    optional: 2, returns: 'm', clause: 'ACI 318-19 Table 7.3.1.1, §7.3.1.1.1-2',
+    doc: 'Minimum thickness of a one-way slab',
+    fn: (l: number, s: OneWaySupport, fy?: number, wc?: number) => hMinOneWay(l, s, fy, wc),
+  }),
+  defineFunction({
+    name: 'h_min_two_way',
+    params: [{ name: 'ln', type: 'm', doc: 'clear span in the long direction' },
+      { name: 'panel', type: 'text', choices: PANELS, doc: 'exterior, exterior-edge-beam (αf ≥ 0.8) or interior' },
+      { name: 'drop_panels', type: 'bool', doc: 'drop panels present (§8.2.4)' }, FY],
+    optional: 2, returns: 'm', clause: 'ACI 318-19 Table 8.3.1.1',
+    doc: 'Minimum thickness of a two-way slab without interior beams',
+    fn: (ln: number, p: Panel, drop?: boolean, fy?: number) => hMinTwoWay(ln, p, drop, fy),
+  }),
+];
