@@ -112,7 +112,8 @@ export function decodeValue(text: string, column: number, what: string): Decoded
   const q = scanQuoted(text, 0, column);
   if (!q.ok) return q;
   if (q.end < text.length) {
-    return { ok: false, message: `unexpected text after the quoted ${what}`, column: column + q.end };
+    const at = q.end + /^[ \t]*/.exec(text.slice(q.end))![0].length;
+    return { ok: false, message: `unexpected text after the quoted ${what}`, column: column + at };
   }
   return { ok: true, value: q.value };
 }
