@@ -10,17 +10,17 @@ import { MPa, pcf, psi } from '../units/si';
 /** Lowest f'c accepted: 17 MPa (SI edition; 2500 psi in inch-pound), ACI 318-19 §19.2.1.1. */
 export const FC_MIN = 17 * MPa;
 
-function fcPsi(fn: string, fc: number): number {
-  const f = positive(fn, 'fc', fc);
+function fcPsi(fc: number): number {
+  const f = positive('fc', fc);
   if (f < FC_MIN * (1 - 1e-9)) {
-    throw new LibraryError(`${fn}: f'c = ${show(f / MPa)} MPa is below the 17 MPa (2500 psi) minimum of ACI 318-19 §19.2.1.1`);
+    throw new LibraryError(`f'c = ${show(f / MPa)} MPa is below the 17 MPa (2500 psi) minimum of ACI 318-19 §19.2.1.1`);
   }
   return f / psi;
 }
 
 /** ACI 318-19 Table 22.2.2.4.3: β1 = 0.85 to 4000 psi, less 0.05 per 1000 psi, not below 0.65. */
 export function beta1(fc: number): number {
-  const f = fcPsi('beta1', fc);
+  const f = fcPsi(fc);
   if (f <= 4000) return 0.85;
   if (f >= 8000) return 0.65;
   return 0.85 - (0.05 * (f - 4000)) / 1000;
@@ -28,13 +28,13 @@ export function beta1(fc: number): number {
 
 /** ACI 318-19 §19.2.2.1(b): Ec = 57,000 √f'c psi for normal-weight concrete. */
 export function ecConcrete(fc: number): number {
-  return 57000 * Math.sqrt(fcPsi('ec_concrete', fc)) * psi;
+  return 57000 * Math.sqrt(fcPsi(fc)) * psi;
 }
 
 /** ACI 318-19 §19.2.2.1(a): Ec = wc^1.5 · 33 √f'c psi, wc in pcf between 90 and 160. */
 export function ecConcreteWc(fc: number, wc: number): number {
-  const f = fcPsi('ec_concrete_wc', fc);
-  const w = positive('ec_concrete_wc', 'wc', wc) / pcf;
+  const f = fcPsi(fc);
+  const w = positive('wc', wc) / pcf;
   if (w < 90 - 1e-9 || w > 160 + 1e-9) {
     throw new LibraryError(`ec_concrete_wc: wc = ${show(w)} pcf is outside 90-160 pcf (ACI 318-19 §19.2.2.1(a))`);
   }
@@ -52,12 +52,12 @@ export const CONCRETE_TYPES = Object.keys(LAMBDA_TABLE) as ConcreteType[];
 
 /** ACI 318-19 Table 19.2.4.2: modification factor λ for lightweight concrete. */
 export function lambdaConcrete(type: ConcreteType): number {
-  return LAMBDA_TABLE[choice('lambda_concrete', 'type', type, CONCRETE_TYPES)];
+  return LAMBDA_TABLE[choice('type', type, CONCRETE_TYPES)];
 }
 
 /** ACI 318-19 Table 19.2.4.1(a), from memory: λ = 0.75 to 100 pcf, 0.0075 wc to 135 pcf, 1.0 above. */
 export function lambdaWc(wc: number): number {
-  const w = positive('lambda_wc', 'wc', wc) / pcf;
+  const w = positive('wc', wc) / pcf;
   if (w <= 100) return 0.75;
   if (w <= 135) return Math.min(1, 0.0075 * w);
   return 1.0;

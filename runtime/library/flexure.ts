@@ -21,12 +21,12 @@ export interface SectionState {
 }
 
 /** ACI 318-19 §22.2: force equilibrium with strain compatibility (steel elastic if it does not yield). */
-export function section(As: number, b: number, d: number, fc: number, fy: number, fn = 'section'): SectionState {
-  const A = positive(fn, 'As', As);
-  const bb = positive(fn, 'b', b);
-  const dd = positive(fn, 'd', d);
-  const f = positive(fn, 'fc', fc);
-  const y = positive(fn, 'fy', fy);
+export function section(As: number, b: number, d: number, fc: number, fy: number): SectionState {
+  const A = positive('As', As);
+  const bb = positive('b', b);
+  const dd = positive('d', d);
+  const f = positive('fc', fc);
+  const y = positive('fy', fy);
   const b1 = beta1(f);
   let c = (A * y) / (0.85 * f * b1 * bb);
   let eps = (ECU * (dd - c)) / c;
@@ -44,17 +44,16 @@ export function section(As: number, b: number, d: number, fc: number, fy: number
 
 /** ACI 318-19 §22.2.2.4 Whitney block: As for Mu with φ = 0.9, ρ = 0.85f'c/fy·(1 − √(1 − 2Rn/(0.85f'c))). */
 export function asRequired(Mu: number, b: number, d: number, fc: number, fy: number): number {
-  const fn = 'as_required';
-  const M = nonNegative(fn, 'Mu', Mu);
-  const bb = positive(fn, 'b', b);
-  const dd = positive(fn, 'd', d);
-  const f = positive(fn, 'fc', fc);
-  const y = positive(fn, 'fy', fy);
+  const M = nonNegative('Mu', Mu);
+  const bb = positive('b', b);
+  const dd = positive('d', d);
+  const f = positive('fc', fc);
+  const y = positive('fy', fy);
   const Rn = M / (PHI_TC * bb * dd * dd);
   const root = 1 - (2 * Rn) / (0.85 * f);
   if (root < 0) {
     throw new LibraryError(
-      `${fn}: Mu is more than the section can carry with tension steel only (Rn = ${show(Rn / 1e6)} MPa > 0.425 f'c); deepen the section`,
+      `Mu is more than the section can carry with tension steel only (Rn = ${show(Rn / 1e6)} MPa > 0.425 f'c); deepen the section`,
     );
   }
   return ((0.85 * f) / y) * (1 - Math.sqrt(root)) * bb * dd;
@@ -62,24 +61,24 @@ export function asRequired(Mu: number, b: number, d: number, fc: number, fy: num
 
 /** ACI 318-19 §22.2.2.1: net tensile strain εt = 0.003(d − c)/c of the extreme tension steel. */
 export function epsT(As: number, b: number, d: number, fc: number, fy: number): number {
-  return section(As, b, d, fc, fy, 'eps_t').epsT;
+  return section(As, b, d, fc, fy).epsT;
 }
 
 /** ACI 318-19 Table 21.2.2: true when εt reaches the tension-controlled limit. */
 export function tensionControlled(As: number, b: number, d: number, fc: number, fy: number, ed: Edition = '318-19'): boolean {
-  return epsT(As, b, d, fc, fy) >= epsTc(fy, edition('tension_controlled', ed)) - 1e-12;
+  return epsT(As, b, d, fc, fy) >= epsTc(fy, edition(ed)) - 1e-12;
 }
 
 /** ACI 318-19 §22.2 and Table 21.2.2: design strength φMn = φ As fs (d − a/2), φ from εt. */
 export function phiMn(As: number, b: number, d: number, fc: number, fy: number, ed: Edition = '318-19'): number {
-  const s = section(As, b, d, fc, fy, 'phi_mn');
-  const phi = phiEpsT(s.epsT, fy, 'other', edition('phi_mn', ed));
+  const s = section(As, b, d, fc, fy);
+  const phi = phiEpsT(s.epsT, fy, 'other', edition(ed));
   return phi * As * s.fs * (d - s.a / 2);
 }
 
 /** Steel area per unit width of bars at spacing s (area/s). */
 export function asProvided(bar: string, s: number): number {
-  return barData(bar, 'as_provided').area / positive('as_provided', 's', s);
+  return barData(bar).area / positive('s', s);
 }
 
 /** φMn per unit width of a slab with bars at spacing s (ACI 318-19 §22.2, Table 21.2.2). */
@@ -89,7 +88,7 @@ export function phiMnBars(bar: string, s: number, d: number, fc: number, fy: num
 
 /** Design steel of a slab strip: the larger of as_required and As,min (ACI 318-19 §22.2, §7.6.1.1 / §8.6.1.1). */
 export function asSlab(Mu: number, b: number, d: number, h: number, fc: number, fy: number, ed: Edition = '318-19'): number {
-  if (positive('as_slab', 'h', h) < positive('as_slab', 'd', d)) throw new LibraryError('as_slab: h must not be less than d');
+  if (positive('h', h) < positive('d', d)) throw new LibraryError('as_slab: h must not be less than d');
   return Math.max(asRequired(Mu, b, d, fc, fy), asMinSlab(b, h, fy, ed));
 }
 
@@ -102,17 +101,16 @@ export const SPACING_STEP = { 'inch-pound': 0.5 * inch, metric: 25 * mm } as con
  * minimum clear spacing max(1 in, db) of ACI 318-19 §25.2.1 (aggregate size not checked).
  */
 export function barSpacing(AsReqPerWidth: number, bar: string, sMax: number): number {
-  const fn = 'bar_spacing';
-  const req = nonNegative(fn, 'As_req', AsReqPerWidth);
-  const row = barData(bar, fn);
-  const cap = positive(fn, 's_max', sMax);
+  const req = nonNegative('As_req', AsReqPerWidth);
+  const row = barData(bar);
+  const cap = positive('s_max', sMax);
   const step = SPACING_STEP[row.system];
   const raw = req > 0 ? Math.min(row.area / req, cap) : cap;
   const s = Math.floor(raw / step + 1e-9) * step;
   const sMin = row.dia + Math.max(1 * inch, row.dia);
   if (s < sMin || s <= 0) {
     throw new LibraryError(
-      `${fn}: ${bar} would need a spacing of ${show(raw / mm)} mm, below the minimum ${show(sMin / mm)} mm (§25.2.1); use a larger bar`,
+      `${bar} would need a spacing of ${show(raw / mm)} mm, below the minimum ${show(sMin / mm)} mm (§25.2.1); use a larger bar`,
     );
   }
   return s;

@@ -1,6 +1,6 @@
 // Argument guards shared by the gravity library (part 1). Each guard either returns the
-// value in the type the formula needs or throws a LibraryError that names the function,
-// the argument and what was expected, so the calling cell can show a clear message.
+// value in the type the formula needs or throws a LibraryError that names the argument and
+// what was expected. The engine prefixes the function name when it shows the message.
 
 import { LibraryError } from './types';
 
@@ -13,60 +13,60 @@ export function show(v: unknown): string {
 }
 
 /** A finite number. */
-export function num(fn: string, name: string, v: unknown): number {
+export function num(name: string, v: unknown): number {
   if (typeof v !== 'number' || !Number.isFinite(v)) {
-    throw new LibraryError(`${fn}: ${name} must be a finite number (got ${show(v)})`);
+    throw new LibraryError(`${name} must be a finite number (got ${show(v)})`);
   }
   return v;
 }
 
 /** A number > 0 (spans, depths, strengths). */
-export function positive(fn: string, name: string, v: unknown): number {
-  const x = num(fn, name, v);
-  if (x <= 0) throw new LibraryError(`${fn}: ${name} must be positive (got ${show(x)})`);
+export function positive(name: string, v: unknown): number {
+  const x = num(name, v);
+  if (x <= 0) throw new LibraryError(`${name} must be positive (got ${show(x)})`);
   return x;
 }
 
 /** A number >= 0 (loads, overhangs, ratios that may be zero). */
-export function nonNegative(fn: string, name: string, v: unknown): number {
-  const x = num(fn, name, v);
-  if (x < 0) throw new LibraryError(`${fn}: ${name} must not be negative (got ${show(x)})`);
+export function nonNegative(name: string, v: unknown): number {
+  const x = num(name, v);
+  if (x < 0) throw new LibraryError(`${name} must not be negative (got ${show(x)})`);
   return x;
 }
 
 /** An optional non-negative number; undefined gives the default. */
-export function optNonNegative(fn: string, name: string, v: unknown, dflt: number): number {
-  return v === undefined ? dflt : nonNegative(fn, name, v);
+export function optNonNegative(name: string, v: unknown, dflt: number): number {
+  return v === undefined ? dflt : nonNegative(name, v);
 }
 
 /** A whole number >= min (floors, spans). */
-export function count(fn: string, name: string, v: unknown, min: number): number {
-  const x = num(fn, name, v);
+export function count(name: string, v: unknown, min: number): number {
+  const x = num(name, v);
   if (!Number.isInteger(x) || x < min) {
-    throw new LibraryError(`${fn}: ${name} must be a whole number >= ${min} (got ${show(x)})`);
+    throw new LibraryError(`${name} must be a whole number >= ${min} (got ${show(x)})`);
   }
   return x;
 }
 
 /** One of a fixed set of texts; undefined gives the default when there is one. */
 export function choice<T extends string>(
-  fn: string, name: string, v: unknown, choices: readonly T[], dflt?: T,
+  name: string, v: unknown, choices: readonly T[], dflt?: T,
 ): T {
   if (v === undefined && dflt !== undefined) return dflt;
   if (typeof v === 'string' && (choices as readonly string[]).includes(v)) return v as T;
   throw new LibraryError(
-    `${fn}: unknown ${name} ${show(v)}; expected one of ${choices.map((c) => `"${c}"`).join(', ')}`,
+    `unknown ${name} ${show(v)}; expected one of ${choices.map((c) => `"${c}"`).join(', ')}`,
   );
 }
 
 /** The ACI 318 edition; '318-19' when left out. */
-export function edition(fn: string, v: unknown): Edition {
-  return choice(fn, 'edition', v, EDITIONS, '318-19');
+export function edition(v: unknown): Edition {
+  return choice('edition', v, EDITIONS, '318-19');
 }
 
 /** A boolean argument. */
-export function bool(fn: string, name: string, v: unknown, dflt?: boolean): boolean {
+export function bool(name: string, v: unknown, dflt?: boolean): boolean {
   if (v === undefined && dflt !== undefined) return dflt;
-  if (typeof v !== 'boolean') throw new LibraryError(`${fn}: ${name} must be true or false (got ${show(v)})`);
+  if (typeof v !== 'boolean') throw new LibraryError(`${name} must be true or false (got ${show(v)})`);
   return v;
 }

@@ -22,30 +22,30 @@ export interface ColumnLoads {
   occupancy?: Occupancy;
 }
 
-function checked(fn: string, c: ColumnLoads): Required<ColumnLoads> {
+function checked(c: ColumnLoads): Required<ColumnLoads> {
   return {
-    floors: count(fn, 'floors', c.floors, 0),
-    AT: positive(fn, 'AT', c.AT),
-    Dfloor: nonNegative(fn, 'D_floor', c.Dfloor),
-    Lfloor: nonNegative(fn, 'L_floor', c.Lfloor),
-    Droof: nonNegative(fn, 'D_roof', c.Droof),
-    Lroof: nonNegative(fn, 'Lr', c.Lroof),
-    wCol: nonNegative(fn, 'w_col', c.wCol),
-    hStorey: positive(fn, 'h_storey', c.hStorey),
-    KLL: positive(fn, 'KLL', c.KLL),
-    occupancy: choice(fn, 'occupancy', c.occupancy, OCCUPANCIES, 'general'),
+    floors: count('floors', c.floors, 0),
+    AT: positive('AT', c.AT),
+    Dfloor: nonNegative('D_floor', c.Dfloor),
+    Lfloor: nonNegative('L_floor', c.Lfloor),
+    Droof: nonNegative('D_roof', c.Droof),
+    Lroof: nonNegative('Lr', c.Lroof),
+    wCol: nonNegative('w_col', c.wCol),
+    hStorey: positive('h_storey', c.hStorey),
+    KLL: positive('KLL', c.KLL),
+    occupancy: choice('occupancy', c.occupancy, OCCUPANCIES, 'general'),
   };
 }
 
 /** Dead load at the foot of the storey: roof + floors × floor dead load over AT, plus (floors + 1) storeys of column (statics). */
 export function colDead(c: ColumnLoads): number {
-  const k = checked('col_dead', c);
+  const k = checked(c);
   return k.AT * (k.Droof + k.floors * k.Dfloor) + (k.floors + 1) * k.wCol * k.hStorey;
 }
 
 /** Reduced floor live load carried: ASCE 7-22 §4.7.2 with AT summed over the floors supported. */
 export function colLive(c: ColumnLoads): number {
-  const k = checked('col_live', c);
+  const k = checked(c);
   if (k.floors === 0) return 0;
   const area = k.floors * k.AT;
   return area * liveReduced(k.Lfloor, area, k.KLL, k.floors, k.occupancy);
@@ -53,7 +53,7 @@ export function colLive(c: ColumnLoads): number {
 
 /** Roof live load carried (unreduced). */
 export function colRoofLive(c: ColumnLoads): number {
-  const k = checked('col_roof_live', c);
+  const k = checked(c);
   return k.AT * k.Lroof;
 }
 

@@ -74,9 +74,9 @@ function loadParams(type: string, names: string[]): LibParam[] {
 }
 
 /** Reads and checks the load arguments (all >= 0; roof loads default to 0). */
-function loads(fn: string, args: unknown[]): [number, number, number, number, number] {
+function loads(args: unknown[]): [number, number, number, number, number] {
   const names = ['D', 'L', 'Lr', 'S', 'R'];
-  const v = names.map((n, i) => (i >= 2 && args[i] === undefined ? 0 : nonNegative(fn, n, args[i])));
+  const v = names.map((n, i) => (i >= 2 && args[i] === undefined ? 0 : nonNegative(n, args[i])));
   return [v[0], v[1], v[2], v[3], v[4]];
 }
 
@@ -87,43 +87,43 @@ function forDim(d: Dim): LibFunction[] {
     defineFunction({
       name: n('combo_u1'), params: loadParams(d.type, ['D']), returns: d.type, clause: `${CLAUSE_U} comb. 1`,
       doc: `Factored ${d.what} 1.4D`,
-      fn: (D: unknown) => comboU1(nonNegative(n('combo_u1'), 'D', D)),
+      fn: (D: unknown) => comboU1(nonNegative('D', D)),
     }),
     defineFunction({
       name: n('combo_u2'), params: all, optional: 3, returns: d.type, clause: `${CLAUSE_U} comb. 2`,
       doc: `Factored ${d.what} 1.2D + 1.6L + 0.5(Lr or S or R)`,
       fn: (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown) =>
-        comboU2(...loads(n('combo_u2'), [D, L, Lr, S, R])),
+        comboU2(...loads([D, L, Lr, S, R])),
     }),
     defineFunction({
       name: n('combo_u3'), params: all, optional: 3, returns: d.type, clause: `${CLAUSE_U} comb. 3`,
       doc: `Factored ${d.what} 1.2D + 1.6(Lr or S or R) + L (no wind)`,
       fn: (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown) =>
-        comboU3(...loads(n('combo_u3'), [D, L, Lr, S, R])),
+        comboU3(...loads([D, L, Lr, S, R])),
     }),
     defineFunction({
       name: n('combo_u'), params: all, optional: 3, returns: d.type, clause: `${CLAUSE_U} comb. 1-3`,
       doc: `Governing factored gravity ${d.what} (largest of combinations 1-3)`,
       fn: (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown) =>
-        comboUGoverning(...loads(n('combo_u'), [D, L, Lr, S, R])).value,
+        comboUGoverning(...loads([D, L, Lr, S, R])).value,
     }),
     defineFunction({
       name: n('combo_u_governs'), params: all, optional: 3, returns: 'text', clause: `${CLAUSE_U} comb. 1-3`,
       doc: 'Which strength combination governs, as text for the hand calc',
       fn: (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown) =>
-        STRENGTH_COMBOS[comboUGoverning(...loads(n('combo_u_governs'), [D, L, Lr, S, R])).index],
+        STRENGTH_COMBOS[comboUGoverning(...loads([D, L, Lr, S, R])).index],
     }),
     defineFunction({
       name: n('combo_service'), params: loadParams(d.type, ['D', 'L']), returns: d.type, clause: `${CLAUSE_ASD} comb. 2`,
       doc: `Service ${d.what} D + L (for soil pressure)`,
       fn: (D: unknown, L: unknown) =>
-        comboService(nonNegative(n('combo_service'), 'D', D), nonNegative(n('combo_service'), 'L', L)),
+        comboService(nonNegative('D', D), nonNegative('L', L)),
     }),
     defineFunction({
       name: n('combo_asd'), params: all, optional: 3, returns: d.type, clause: `${CLAUSE_ASD} comb. 1-4`,
       doc: `Governing service (ASD) gravity ${d.what}`,
       fn: (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown) =>
-        comboAsd(...loads(n('combo_asd'), [D, L, Lr, S, R])),
+        comboAsd(...loads([D, L, Lr, S, R])),
     }),
   ];
 }

@@ -31,22 +31,21 @@ export const INFLUENCE_MIN = 400 * ft * ft;
 
 /** ASCE 7-22 Table 4.7-1: KLL for an element type. */
 export function kll(element: LlElement): number {
-  return KLL_TABLE[choice('kll', 'element', element, ELEMENTS)];
+  return KLL_TABLE[choice('element', element, ELEMENTS)];
 }
 
 /** ASCE 7-22 §4.7.2: true when KLL·AT ≥ 400 ft² (37.16 m²), so the live load may be reduced. */
 export function lldApplies(AT: number, KLL: number): boolean {
-  const a = nonNegative('lld_applies', 'AT', AT);
-  const k = positive('lld_applies', 'KLL', KLL);
+  const a = nonNegative('AT', AT);
+  const k = positive('KLL', KLL);
   return k * a >= INFLUENCE_MIN * (1 - 1e-12);
 }
 
 /** ASCE 7-22 Eq. 4.7-1 factor L/Lo = 0.25 + 15/√(KLL·AT[ft²]), ≤ 1, ≥ 0.50 (one floor) or 0.40 (two or more). */
 export function lldFactor(AT: number, KLL: number, floors: number): number {
-  const fn = 'lld_factor';
-  const a = nonNegative(fn, 'AT', AT);
-  const k = positive(fn, 'KLL', KLL);
-  const n = count(fn, 'floors', floors, 1);
+  const a = nonNegative('AT', AT);
+  const k = positive('KLL', KLL);
+  const n = count('floors', floors, 1);
   if (!lldApplies(a, k)) return 1;
   const influenceFt2 = (k * a) / (ft * ft);
   const factor = 0.25 + 15 / Math.sqrt(influenceFt2);
@@ -60,9 +59,8 @@ export function lldFactor(AT: number, KLL: number, floors: number): number {
  * or more floors by at most 20 % and not below the Eq. 4.7-1 value.
  */
 export function liveReduced(Lo: number, AT: number, KLL: number, floors: number, occupancy: Occupancy = 'general'): number {
-  const fn = 'live_reduced';
-  const lo = nonNegative(fn, 'Lo', Lo);
-  const occ = choice(fn, 'occupancy', occupancy, OCCUPANCIES, 'general');
+  const lo = nonNegative('Lo', Lo);
+  const occ = choice('occupancy', occupancy, OCCUPANCIES, 'general');
   const factor = lldFactor(AT, KLL, floors);
   if (occ === 'assembly') return lo;
   const heavy = lo > 100 * psf * (1 + 1e-12);
@@ -72,8 +70,8 @@ export function liveReduced(Lo: number, AT: number, KLL: number, floors: number,
 
 /** ASCE 7-22 §4.7.6: the tributary area of a one-way slab may not exceed 1.5 ls². */
 export function atOneWaySlab(AT: number, ls: number): number {
-  const a = nonNegative('at_one_way_slab', 'AT', AT);
-  const s = positive('at_one_way_slab', 'ls', ls);
+  const a = nonNegative('AT', AT);
+  const s = positive('ls', ls);
   return Math.min(a, 1.5 * s * s);
 }
 

@@ -10,13 +10,12 @@ export type ColumnPosition = (typeof POSITIONS)[number];
 
 /** Tributary width along one grid line: half of each adjoining span plus an overhang past an edge (half-bay rule, common practice). */
 export function tribWidth(spanA: number, spanB: number, overhang = 0): number {
-  const fn = 'trib_width';
-  const a = nonNegative(fn, 'span_a', spanA);
-  const b = nonNegative(fn, 'span_b', spanB);
-  const o = nonNegative(fn, 'overhang', overhang);
-  if (a === 0 && b === 0) throw new LibraryError(`${fn}: at least one adjoining span must be positive`);
+  const a = nonNegative('span_a', spanA);
+  const b = nonNegative('span_b', spanB);
+  const o = nonNegative('overhang', overhang);
+  if (a === 0 && b === 0) throw new LibraryError(`at least one adjoining span must be positive`);
   if (o > 0 && a > 0 && b > 0) {
-    throw new LibraryError(`${fn}: an overhang needs an edge (one adjoining span 0); both spans are given`);
+    throw new LibraryError(`an overhang needs an edge (one adjoining span 0); both spans are given`);
   }
   return a / 2 + b / 2 + o;
 }
@@ -27,18 +26,17 @@ export function tribWidth(spanA: number, spanB: number, overhang = 0): number {
  * overhang past that edge. 'corner': both; cantX and cantY the overhangs in x and y.
  */
 export function tribArea(lx: number, ly: number, position: ColumnPosition, cantX = 0, cantY = 0): number {
-  const fn = 'trib_area';
-  const x = positive(fn, 'lx', lx);
-  const y = positive(fn, 'ly', ly);
-  const cx = nonNegative(fn, 'cant_x', cantX);
-  const cy = nonNegative(fn, 'cant_y', cantY);
-  const pos = choice(fn, 'position', position, POSITIONS);
+  const x = positive('lx', lx);
+  const y = positive('ly', ly);
+  const cx = nonNegative('cant_x', cantX);
+  const cy = nonNegative('cant_y', cantY);
+  const pos = choice('position', position, POSITIONS);
   if (pos === 'interior') {
-    if (cx > 0 || cy > 0) throw new LibraryError(`${fn}: an interior column has no overhang`);
+    if (cx > 0 || cy > 0) throw new LibraryError(`an interior column has no overhang`);
     return x * y;
   }
   if (pos === 'edge') {
-    if (cy > 0) throw new LibraryError(`${fn}: an edge column's edge runs along y; give its overhang as cant_x`);
+    if (cy > 0) throw new LibraryError(`an edge column's edge runs along y; give its overhang as cant_x`);
     return (x / 2 + cx) * y;
   }
   return (x / 2 + cx) * (y / 2 + cy);
@@ -63,7 +61,7 @@ export const functions: LibFunction[] = [
     ],
     optional: 1, returns: 'm', clause: CLAUSE,
     doc: 'Tributary width along one grid line: half of each adjoining span + overhang',
-    fn: (a: number, b: number, o?: number) => tribWidth(a, b, optNonNegative('trib_width', 'overhang', o, 0)),
+    fn: (a: number, b: number, o?: number) => tribWidth(a, b, optNonNegative('overhang', o, 0)),
   }),
   defineFunction({
     name: 'trib_area',
@@ -77,7 +75,7 @@ export const functions: LibFunction[] = [
     optional: 2, returns: 'm^2', clause: CLAUSE,
     doc: 'Tributary area of an interior, edge or corner column on a regular grid',
     fn: (lx: number, ly: number, pos: ColumnPosition, cx?: number, cy?: number) =>
-      tribArea(lx, ly, pos, optNonNegative('trib_area', 'cant_x', cx, 0), optNonNegative('trib_area', 'cant_y', cy, 0)),
+      tribArea(lx, ly, pos, optNonNegative('cant_x', cx, 0), optNonNegative('cant_y', cy, 0)),
   }),
   defineFunction({
     name: 'trib_area_spans',
@@ -92,7 +90,7 @@ export const functions: LibFunction[] = [
     optional: 2, returns: 'm^2', clause: CLAUSE,
     doc: 'Tributary area from unequal adjoining spans and overhangs',
     fn: (xl: number, xr: number, yb: number, ya: number, cx?: number, cy?: number) =>
-      tribAreaSpans(xl, xr, yb, ya, optNonNegative('trib_area_spans', 'cant_x', cx, 0),
-        optNonNegative('trib_area_spans', 'cant_y', cy, 0)),
+      tribAreaSpans(xl, xr, yb, ya, optNonNegative('cant_x', cx, 0),
+        optNonNegative('cant_y', cy, 0)),
   }),
 ];

@@ -51,16 +51,13 @@ for (const d of ISO_DIAS) {
 
 export const BARS: readonly string[] = [...TABLE.keys()];
 
-/** The table row of a bar; accepts "#5", "#16M" (or "#16m"), "D16" (or "d16", "Ø16"). */
-export function barData(bar: string, fn = 'bar'): BarData {
-  if (typeof bar !== 'string') throw new LibraryError(`${fn}: bar must be a designation such as "#5", "#16M" or "D16"`);
-  let key = bar.trim();
-  if (/^#\d+m$/.test(key)) key = key.slice(0, -1) + 'M';
-  if (/^[dØø]\d+$/.test(key)) key = 'D' + key.slice(1);
-  const row = TABLE.get(key);
+/** The table row of a bar, by its exact designation ("#5", "#16M", "D16"). */
+export function barData(bar: string): BarData {
+  if (typeof bar !== 'string') throw new LibraryError(`bar must be a designation such as "#5", "#16M" or "D16"`);
+  const row = TABLE.get(bar);
   if (!row) {
     throw new LibraryError(
-      `${fn}: unknown bar "${bar}"; use "#3".."#18" (ASTM A615), "#10M".."#57M" (A615M) or "D8".."D40" (ISO 6935-2): ${BARS.join(' ')}`,
+      `unknown bar "${bar}"; use "#3".."#18" (ASTM A615), "#10M".."#57M" (A615M) or "D8".."D40" (ISO 6935-2): ${BARS.join(' ')}`,
     );
   }
   return row;
@@ -68,17 +65,17 @@ export function barData(bar: string, fn = 'bar'): BarData {
 
 /** ASTM A615 / A615M / ISO 6935-2 nominal area of one bar. */
 export function barArea(bar: string): number {
-  return barData(bar, 'bar_area').area;
+  return barData(bar).area;
 }
 
 /** ASTM A615 / A615M / ISO 6935-2 nominal diameter. */
 export function barDia(bar: string): number {
-  return barData(bar, 'bar_dia').dia;
+  return barData(bar).dia;
 }
 
 /** ASTM A615 / A615M nominal mass per metre (ISO bars: 7850 kg/m³ × area). */
 export function barMass(bar: string): number {
-  return barData(bar, 'bar_mass').mass;
+  return barData(bar).mass;
 }
 
 const BAR = { name: 'bar', type: 'text', choices: BARS, doc: 'bar designation: "#5", "#16M" or "D16"' };

@@ -10,34 +10,32 @@ import { inch, psi } from '../units/si';
 
 /** ACI 318-19 Tables 7.6.1.1 / 8.6.1.1, §24.4.3.2: ρmin = 0.0018 of Ag for deformed bars (318-14: 0.0020 below Grade 60, else 0.0018·60,000/fy ≥ 0.0014). */
 export function rhoMinSlab(fy: number, ed: Edition = '318-19'): number {
-  const f = positive('rho_min_slab', 'fy', fy) / psi;
-  if (edition('rho_min_slab', ed) === '318-19') return 0.0018;
+  const f = positive('fy', fy) / psi;
+  if (edition(ed) === '318-19') return 0.0018;
   return f < 60000 ? 0.002 : Math.max((0.0018 * 60000) / f, 0.0014);
 }
 
 /** ACI 318-19 §7.6.1.1 / §8.6.1.1 / §24.4.3.2: As,min = ρmin·b·h of a slab or footing strip. */
 export function asMinSlab(b: number, h: number, fy: number, ed: Edition = '318-19'): number {
-  return rhoMinSlab(fy, ed) * positive('as_min_slab', 'b', b) * positive('as_min_slab', 'h', h);
+  return rhoMinSlab(fy, ed) * positive('b', b) * positive('h', h);
 }
 
 /** ACI 318-19 §9.6.1.2: As,min = max(3√f'c/fy, 200/fy)·bw·d for beams (psi). */
 export function asMinBeam(bw: number, d: number, fc: number, fy: number): number {
-  const fn = 'as_min_beam';
-  const b = positive(fn, 'bw', bw);
-  const dd = positive(fn, 'd', d);
-  const f = positive(fn, 'fc', fc) / psi;
-  const y = positive(fn, 'fy', fy) / psi;
+  const b = positive('bw', bw);
+  const dd = positive('d', d);
+  const f = positive('fc', fc) / psi;
+  const y = positive('fy', fy) / psi;
   return Math.max((3 * Math.sqrt(f)) / y, 200 / y) * b * dd;
 }
 
 /** ACI 318-19 §22.2.2 + Table 21.2.2: largest As with εt at the tension-controlled limit (c = 0.003d/(0.003 + εt)). */
 export function asMaxTc(b: number, d: number, fc: number, fy: number, ed: Edition = '318-19'): number {
-  const fn = 'as_max_tc';
-  const bb = positive(fn, 'b', b);
-  const dd = positive(fn, 'd', d);
-  const f = positive(fn, 'fc', fc);
-  const y = positive(fn, 'fy', fy);
-  const c = (0.003 / (0.003 + epsTc(y, edition(fn, ed)))) * dd;
+  const bb = positive('b', b);
+  const dd = positive('d', d);
+  const f = positive('fc', fc);
+  const y = positive('fy', fy);
+  const c = (0.003 / (0.003 + epsTc(y, edition(ed)))) * dd;
   return (0.85 * f * beta1(f) * c * bb) / y;
 }
 
@@ -47,15 +45,15 @@ const SPACING_FACTOR: Record<SpacingKind, number> = { 'two-way': 2, 'one-way': 3
 
 /** ACI 318-19 §8.7.2.2 two-way min(2h, 18 in); §7.7.2.3 one-way min(3h, 18 in); §24.4.3.3 shrinkage min(5h, 18 in). */
 export function sMaxSlab(h: number, kind: SpacingKind): number {
-  const hh = positive('s_max_slab', 'h', h);
-  const k = choice('s_max_slab', 'kind', kind, SPACING_KINDS);
+  const hh = positive('h', h);
+  const k = choice('kind', kind, SPACING_KINDS);
   return Math.min(SPACING_FACTOR[k] * hh, 18 * inch);
 }
 
 /** ACI 318-19 Table 24.3.2, from memory: s ≤ 15(40,000/fs) − 2.5cc and ≤ 12(40,000/fs), in and psi; fs ≈ 2/3 fy. */
 export function sMaxCrack(fs: number, cc: number): number {
-  const f = positive('s_max_crack', 'fs', fs) / psi;
-  const c = nonNegative('s_max_crack', 'cc', cc) / inch;
+  const f = positive('fs', fs) / psi;
+  const c = nonNegative('cc', cc) / inch;
   const s = Math.min(15 * (40000 / f) - 2.5 * c, 12 * (40000 / f));
   if (s <= 0) throw new LibraryError(`s_max_crack: clear cover ${show(c)} in leaves no admissible spacing`);
   return s * inch;

@@ -28,27 +28,26 @@ export type Transverse = (typeof TRANSVERSE)[number];
 
 /** ACI 318-19 Table 21.2.1: φ for an action. */
 export function phiAction(action: Action): number {
-  return PHI_TABLE[choice('phi_action', 'action', action, ACTIONS)];
+  return PHI_TABLE[choice('action', action, ACTIONS)];
 }
 
 /** ACI 318-19 §21.2.2.1: yield strain εty = fy/Es. */
 export function epsTy(fy: number): number {
-  return positive('eps_ty', 'fy', fy) / ES;
+  return positive('fy', fy) / ES;
 }
 
 /** ACI 318-19 Table 21.2.2: tension-controlled strain limit, εty + 0.003 (318-14: 0.005). */
 export function epsTc(fy: number, ed: Edition = '318-19'): number {
-  const e = edition('eps_tc', ed);
+  const e = edition(ed);
   return e === '318-19' ? epsTy(fy) + 0.003 : 0.005;
 }
 
 /** ACI 318-19 Table 21.2.2: φ for moment/axial force from εt, linear between εty and the tension-controlled limit. */
 export function phiEpsT(epsT: number, fy: number, transverse: Transverse = 'other', ed: Edition = '318-19'): number {
-  const fn = 'phi_eps_t';
-  const et = num(fn, 'eps_t', epsT);
-  const tr = choice(fn, 'transverse', transverse, TRANSVERSE, 'other');
+  const et = num('eps_t', epsT);
+  const tr = choice('transverse', transverse, TRANSVERSE, 'other');
   const ety = epsTy(fy);
-  const etc = epsTc(fy, edition(fn, ed));
+  const etc = epsTc(fy, edition(ed));
   const low = tr === 'spiral' ? 0.75 : 0.65;
   if (et <= ety) return low;
   if (et >= etc) return 0.9;

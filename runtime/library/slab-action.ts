@@ -14,10 +14,10 @@ export type SlabAction = 'one-way' | 'two-way';
 interface Verdict { action: SlabAction; reason: string }
 
 /** Classifies the panel and says why (convention above; ACI 318-19 §8.10.2.3 for the 2.0 ratio). */
-function classify(fn: string, la: number, lb: number, supports: Supports): Verdict {
-  const a = positive(fn, 'l_a', la);
-  const b = positive(fn, 'l_b', lb);
-  const sup = choice(fn, 'supports', supports, SUPPORTS);
+function classify(la: number, lb: number, supports: Supports): Verdict {
+  const a = positive('l_a', la);
+  const b = positive('l_b', lb);
+  const sup = choice('supports', supports, SUPPORTS);
   if (sup === 'two-opposite-sides') {
     return { action: 'one-way', reason: 'supported on two opposite sides only: one-way, spanning between the supports' };
   }
@@ -35,12 +35,12 @@ function classify(fn: string, la: number, lb: number, supports: Supports): Verdi
 
 /** 'one-way' or 'two-way' by panel proportions and supports (convention; ACI 318-19 §8.10.2.3 ratio). */
 export function slabAction(la: number, lb: number, supports: Supports): SlabAction {
-  return classify('slab_action', la, lb, supports).action;
+  return classify(la, lb, supports).action;
 }
 
 /** The reason for slabAction, as a line for the hand calc. */
 export function slabActionReason(la: number, lb: number, supports: Supports): string {
-  return classify('slab_action_reason', la, lb, supports).reason;
+  return classify(la, lb, supports).reason;
 }
 
 const PARAMS = [

@@ -9,16 +9,16 @@ interface Applicability { ok: boolean; reason: string }
 
 /** ACI 318-19 §8.10.2.1, .2, .3, .6: spans each way, span ratio, successive spans, L/D. */
 function applicability(
-  fn: string, nx: number, ny: number, l1: number, l2: number, D: number, L: number, l1Next?: number, l2Next?: number,
+  nx: number, ny: number, l1: number, l2: number, D: number, L: number, l1Next?: number, l2Next?: number,
 ): Applicability {
-  const n1 = count(fn, 'n1', nx, 1);
-  const n2 = count(fn, 'n2', ny, 1);
-  const a = positive(fn, 'l1', l1);
-  const b = positive(fn, 'l2', l2);
-  const d = positive(fn, 'D', D);
-  const live = nonNegative(fn, 'L', L);
-  const a2 = l1Next === undefined ? a : positive(fn, 'l1_next', l1Next);
-  const b2 = l2Next === undefined ? b : positive(fn, 'l2_next', l2Next);
+  const n1 = count('n1', nx, 1);
+  const n2 = count('n2', ny, 1);
+  const a = positive('l1', l1);
+  const b = positive('l2', l2);
+  const d = positive('D', D);
+  const live = nonNegative('L', L);
+  const a2 = l1Next === undefined ? a : positive('l1_next', l1Next);
+  const b2 = l2Next === undefined ? b : positive('l2_next', l2Next);
   const fail = (reason: string): Applicability => ({ ok: false, reason: `DDM not applicable: ${reason}` });
   if (n1 < 3 || n2 < 3) return fail(`§8.10.2.1 needs at least 3 continuous spans each way (${n1} × ${n2})`);
   const ratio = Math.max(a, b) / Math.min(a, b);
@@ -38,33 +38,31 @@ function applicability(
 
 /** ACI 318-19 §8.10.2: the DDM limits checked here are all met. */
 export function ddmApplicable(nx: number, ny: number, l1: number, l2: number, D: number, L: number, l1Next?: number, l2Next?: number): boolean {
-  return applicability('ddm_applicable', nx, ny, l1, l2, D, L, l1Next, l2Next).ok;
+  return applicability(nx, ny, l1, l2, D, L, l1Next, l2Next).ok;
 }
 
 /** Why the DDM applies or not, naming the first limit that fails (ACI 318-19 §8.10.2). */
 export function ddmApplicableReason(nx: number, ny: number, l1: number, l2: number, D: number, L: number, l1Next?: number, l2Next?: number): string {
-  return applicability('ddm_applicable_reason', nx, ny, l1, l2, D, L, l1Next, l2Next).reason;
+  return applicability(nx, ny, l1, l2, D, L, l1Next, l2Next).reason;
 }
 
 /** ACI 318-19 §8.10.3.2.2: clear span face to face of supports, not less than 0.65 ℓ1. */
 export function ddmLn(l1: number, c1a: number, c1b?: number): number {
-  const fn = 'ddm_ln';
-  const l = positive(fn, 'l1', l1);
-  const ca = nonNegative(fn, 'c1a', c1a);
-  const cb = c1b === undefined ? ca : nonNegative(fn, 'c1b', c1b);
+  const l = positive('l1', l1);
+  const ca = nonNegative('c1a', c1a);
+  const cb = c1b === undefined ? ca : nonNegative('c1b', c1b);
   const clear = l - ca / 2 - cb / 2;
-  if (clear <= 0) throw new LibraryError(`${fn}: supports of ${show(ca)} m and ${show(cb)} m leave no clear span in ${show(l)} m`);
+  if (clear <= 0) throw new LibraryError(`supports of ${show(ca)} m and ${show(cb)} m leave no clear span in ${show(l)} m`);
   return Math.max(clear, 0.65 * l);
 }
 
 /** ACI 318-19 Eq. 8.10.3.2: Mo = qu ℓ2 ℓn²/8, with ℓn ≥ 0.65 ℓ1 (§8.10.3.2.2). */
 export function ddmMo(qu: number, l2: number, ln: number, l1: number): number {
-  const fn = 'ddm_mo';
-  const q = nonNegative(fn, 'qu', qu);
-  const b = positive(fn, 'l2', l2);
-  const n = positive(fn, 'ln', ln);
-  const a = positive(fn, 'l1', l1);
-  if (n > a) throw new LibraryError(`${fn}: clear span ln = ${show(n)} m exceeds the centre-to-centre span l1 = ${show(a)} m`);
+  const q = nonNegative('qu', qu);
+  const b = positive('l2', l2);
+  const n = positive('ln', ln);
+  const a = positive('l1', l1);
+  if (n > a) throw new LibraryError(`clear span ln = ${show(n)} m exceeds the centre-to-centre span l1 = ${show(a)} m`);
   const lnEff = Math.max(n, 0.65 * a);
   return (q * b * lnEff * lnEff) / 8;
 }
@@ -74,7 +72,7 @@ export type InteriorLocation = (typeof INTERIOR_LOCATIONS)[number];
 
 /** ACI 318-19 §8.10.4.1: interior span, negative 0.65 Mo, positive 0.35 Mo. */
 export function ddmInteriorCoef(location: InteriorLocation): number {
-  return choice('ddm_interior_coef', 'location', location, INTERIOR_LOCATIONS) === 'negative' ? 0.65 : 0.35;
+  return choice('location', location, INTERIOR_LOCATIONS) === 'negative' ? 0.65 : 0.35;
 }
 
 /** ACI 318-19 Table 8.10.4.2 rows: [interior negative, positive, exterior negative] fractions of Mo. */
@@ -92,14 +90,14 @@ export type EndLocation = (typeof END_LOCATIONS)[number];
 
 /** ACI 318-19 Table 8.10.4.2: end span moment as a fraction of Mo. */
 export function ddmEndCoef(endCase: EndCase, location: EndLocation): number {
-  const c = choice('ddm_end_coef', 'case', endCase, END_CASES);
-  const loc = choice('ddm_end_coef', 'location', location, END_LOCATIONS);
+  const c = choice('case', endCase, END_CASES);
+  const loc = choice('location', location, END_LOCATIONS);
   return END_SPAN_TABLE[c][END_LOCATIONS.indexOf(loc)];
 }
 
 /** ACI 318-19 §8.4.1.5: column strip width, 0.25ℓ1 or 0.25ℓ2 (the smaller) each side of the column line. */
 export function ddmCsWidth(l1: number, l2: number): number {
-  return 2 * Math.min(0.25 * positive('ddm_cs_width', 'l1', l1), 0.25 * positive('ddm_cs_width', 'l2', l2));
+  return 2 * Math.min(0.25 * positive('l1', l1), 0.25 * positive('l2', l2));
 }
 
 export const CS_LOCATIONS = ['negative-interior', 'negative-exterior', 'positive'] as const;
@@ -121,14 +119,13 @@ function byRatio(row: readonly number[], r: number): number {
  * 8.10.5.5 (positive): column-strip fraction, linear in ℓ2/ℓ1 (0.5-2), in αf1ℓ2/ℓ1 (0-1) and βt (0-2.5).
  */
 export function ddmCsFraction(location: CsLocation, l2OverL1: number, alphaRatio = 0, betaT = 0): number {
-  const fn = 'ddm_cs_fraction';
-  const loc = choice(fn, 'location', location, CS_LOCATIONS);
-  const r = positive(fn, 'l2_l1', l2OverL1);
-  if (r < 0.5 - 1e-9 || r > 2 + 1e-9) throw new LibraryError(`${fn}: ℓ2/ℓ1 = ${show(r)} is outside 0.5-2 (§8.10.2.3)`);
-  const ta = Math.min(nonNegative(fn, 'alpha_l2_l1', alphaRatio), 1);
+  const loc = choice('location', location, CS_LOCATIONS);
+  const r = positive('l2_l1', l2OverL1);
+  if (r < 0.5 - 1e-9 || r > 2 + 1e-9) throw new LibraryError(`ℓ2/ℓ1 = ${show(r)} is outside 0.5-2 (§8.10.2.3)`);
+  const ta = Math.min(nonNegative('alpha_l2_l1', alphaRatio), 1);
   const beams = byRatio(CS_BEAMS, r);
   if (loc === 'negative-exterior') {
-    const tb = Math.min(nonNegative(fn, 'beta_t', betaT), 2.5) / 2.5;
+    const tb = Math.min(nonNegative('beta_t', betaT), 2.5) / 2.5;
     const stiffEdge = 0.75 + ta * (beams - 0.75); // βt ≥ 2.5
     return 1 + tb * (stiffEdge - 1);
   }
@@ -138,7 +135,7 @@ export function ddmCsFraction(location: CsLocation, l2OverL1: number, alphaRatio
 
 /** ACI 318-19 §8.10.5.7.1: share of the column-strip moment taken by the beam, 0.85 at αf1ℓ2/ℓ1 ≥ 1, linear to 0. */
 export function ddmBeamShare(alphaRatio: number): number {
-  return 0.85 * Math.min(nonNegative('ddm_beam_share', 'alpha_l2_l1', alphaRatio), 1);
+  return 0.85 * Math.min(nonNegative('alpha_l2_l1', alphaRatio), 1);
 }
 
 const APPL_PARAMS = [

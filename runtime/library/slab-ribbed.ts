@@ -9,27 +9,27 @@ import { positive, show } from './gravity-args';
 
 interface Rib { h: number; hf: number; bw: number; s: number }
 
-function rib(fn: string, h: number, hf: number, bw: number, s: number): Rib {
-  const r = { h: positive(fn, 'h', h), hf: positive(fn, 'hf', hf), bw: positive(fn, 'bw', bw), s: positive(fn, 's', s) };
-  if (r.hf >= r.h) throw new LibraryError(`${fn}: topping hf = ${show(r.hf)} m must be thinner than the depth h = ${show(r.h)} m`);
-  if (r.bw > r.s) throw new LibraryError(`${fn}: rib width bw = ${show(r.bw)} m exceeds the rib spacing s = ${show(r.s)} m`);
+function rib(h: number, hf: number, bw: number, s: number): Rib {
+  const r = { h: positive('h', h), hf: positive('hf', hf), bw: positive('bw', bw), s: positive('s', s) };
+  if (r.hf >= r.h) throw new LibraryError(`topping hf = ${show(r.hf)} m must be thinner than the depth h = ${show(r.h)} m`);
+  if (r.bw > r.s) throw new LibraryError(`rib width bw = ${show(r.bw)} m exceeds the rib spacing s = ${show(r.s)} m`);
   return r;
 }
 
 /** Equivalent solid thickness by volume: (s·hf + bw·(h − hf))/s (geometry). */
 export function ribHEq(h: number, hf: number, bw: number, s: number): number {
-  const r = rib('rib_h_eq', h, hf, bw, s);
+  const r = rib(h, hf, bw, s);
   return (r.s * r.hf + r.bw * (r.h - r.hf)) / r.s;
 }
 
 /** Fraction of the self-weight saved against a solid slab of the same depth: 1 − h_eq/h. */
 export function ribSaving(h: number, hf: number, bw: number, s: number): number {
-  return 1 - ribHEq(h, hf, bw, s) / positive('rib_saving', 'h', h);
+  return 1 - ribHEq(h, hf, bw, s) / positive('h', h);
 }
 
 /** Gross moment of inertia of one T-section rib (flange width s) about its centroid (parallel-axis theorem). */
 export function ribI(h: number, hf: number, bw: number, s: number): number {
-  const r = rib('rib_i', h, hf, bw, s);
+  const r = rib(h, hf, bw, s);
   const web = r.h - r.hf;
   const aF = r.s * r.hf;
   const aW = r.bw * web;

@@ -18,13 +18,12 @@ const MOMENT_COEF: Record<OneWaySupport, number> = { simple: 1 / 8, 'one-end': 1
 export function selfWeightRatio(
   h: number, d: number, span: number, support: OneWaySupport, fc: number, fy: number, wc: number, ed: Edition = '318-19',
 ): number {
-  const fn = 'self_weight_ratio';
-  const hh = positive(fn, 'h', h);
-  const dd = positive(fn, 'd', d);
-  if (dd >= hh) throw new LibraryError(`${fn}: d must be less than h`);
-  const l = positive(fn, 'span', span);
-  const sup = choice(fn, 'support', support, ONE_WAY_SUPPORTS);
-  const w = positive(fn, 'wc', wc);
+  const hh = positive('h', h);
+  const dd = positive('d', d);
+  if (dd >= hh) throw new LibraryError(`d must be less than h`);
+  const l = positive('span', span);
+  const sup = choice('support', support, ONE_WAY_SUPPORTS);
+  const w = positive('wc', wc);
   const qu = comboU1(w * hh); // N/m² = N/m on a 1 m strip
   const Mu = MOMENT_COEF[sup] * qu * l * l;
   const capacity = phiMn(asMinSlab(1, hh, fy, ed), 1, dd, fc, fy, ed);

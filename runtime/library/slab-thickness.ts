@@ -13,12 +13,12 @@ const ONE_WAY_DIVISOR: Record<OneWaySupport, number> = { simple: 20, 'one-end': 
 
 /** ACI 318-19 §7.3.1.1.1: fy modifier 0.4 + fy/100,000 (psi). */
 export function fyFactor(fy: number): number {
-  return 0.4 + positive('h_min_one_way', 'fy', fy) / psi / 100000;
+  return 0.4 + positive('fy', fy) / psi / 100000;
 }
 
 /** ACI 318-19 §7.3.1.1.2: lightweight modifier (1.65 − 0.005wc) ≥ 1.09 for wc 90-115 pcf; 1.0 above 115 pcf. */
 export function lightweightFactor(wc: number): number {
-  const w = positive('h_min_one_way', 'wc', wc) / pcf;
+  const w = positive('wc', wc) / pcf;
   if (w < 90 - 1e-9) throw new LibraryError(`h_min_one_way: wc = ${show(w)} pcf is below the 90 pcf the table covers`);
   if (w > 115) return 1;
   return Math.max(1.65 - 0.005 * w, 1.09);
@@ -26,9 +26,8 @@ export function lightweightFactor(wc: number): number {
 
 /** ACI 318-19 Table 7.3.1.1: one-way slab h ≥ ℓ/20, ℓ/24, ℓ/28, ℓ/10, times the fy and lightweight modifiers. */
 export function hMinOneWay(l: number, support: OneWaySupport, fy = 60000 * psi, wc?: number): number {
-  const fn = 'h_min_one_way';
-  const span = positive(fn, 'l', l);
-  const sup = choice(fn, 'support', support, ONE_WAY_SUPPORTS);
+  const span = positive('l', l);
+  const sup = choice('support', support, ONE_WAY_SUPPORTS);
   const lw = wc === undefined ? 1 : lightweightFactor(wc);
   return (span / ONE_WAY_DIVISOR[sup]) * fyFactor(fy) * lw;
 }
@@ -45,13 +44,12 @@ const TWO_WAY_DIVISOR: Record<'none' | 'drop', Record<Panel, number[]>> = {
 
 /** ACI 318-19 Table 8.3.1.1: two-way slab without interior beams, h ≥ ℓn/divisor (h interpolated in fy), ≥ 5 in (4 in with drop panels). */
 export function hMinTwoWay(ln: number, panel: Panel, dropPanels = false, fy = 60000 * psi): number {
-  const fn = 'h_min_two_way';
-  const span = positive(fn, 'ln', ln);
-  const p = choice(fn, 'panel', panel, PANELS);
-  const drop = bool(fn, 'drop_panels', dropPanels, false);
-  const k = positive(fn, 'fy', fy) / psi / 1000;
+  const span = positive('ln', ln);
+  const p = choice('panel', panel, PANELS);
+  const drop = bool('drop_panels', dropPanels, false);
+  const k = positive('fy', fy) / psi / 1000;
   if (k < 40 - 1e-9 || k > 75 + 1e-9) {
-    throw new LibraryError(`${fn}: fy = ${show(k)} ksi is outside the 40-75 ksi range of Table 8.3.1.1`);
+    throw new LibraryError(`fy = ${show(k)} ksi is outside the 40-75 ksi range of Table 8.3.1.1`);
   }
   const div = TWO_WAY_DIVISOR[drop ? 'drop' : 'none'][p];
   const i = k <= 60 ? 0 : 1;
