@@ -230,7 +230,9 @@ class Compiler {
         const div = op === '/';
         const dims = addDims(dimsOf(x), dimsOf(y), div ? -1 : 1);
         const f = div ? (v: unknown[]) => (v[0] as number) / (v[1] as number) : (v: unknown[]) => (v[0] as number) * (v[1] as number);
-        return derive(numType(dims), args, f);
+        // Scaling by a pure number keeps the unit people typed: 8 * 1.00 in^2 is still in^2.
+        const hint = isDimless(dimsOf(y)) ? hintOf(x) : !div && isDimless(dimsOf(x)) ? hintOf(y) : undefined;
+        return derive(numType(dims, hint), args, f);
       }
       case '^':
         return this.power(x, y);
@@ -385,6 +387,10 @@ function derive(type: VType, args: CNode[], f: (v: unknown[]) => unknown): CNode
   return { type, ev };
 }
 
+function hintOf(x: CNode): string | undefined {
+  return x.type.t === 'num' ? x.type.hint : undefined;
+}
+
 function dimsOf(x: CNode): readonly number[] {
   return (x.type as { dims: readonly number[] }).dims;
 }
@@ -443,6 +449,25 @@ export function compileExpression(source: string, scope: CompileScope): Compiled
   const ast = parseFormula(source);
   const c = new Compiler(source, scope);
   return finish(c, c.node(ast, 0));
+}
+
+/**
+ * Syntax and forbidden constructs only, with every name taken as a pure number:
+ * used where a full compile cannot run (a cell inside a loop).
+ */
+export function structuralProblem(source: string, functions: ReadonlyMap<string, LibFunction>): CellError | undefined {
+  const scope: CompileScope = {
+    lookup: (name) => ({ key: name, type: NUMBER }),
+    isCell: () => true,
+    names: () => [],
+    functions,
+  };
+  try {
+    compileExpression(source, scope);
+  } catch (e) {
+    if (e instanceof CellError && (e.kind === 'syntax' || e.kind === 'not-allowed')) return e;
+  }
+  return undefined;
 }
 
 export interface CompiledCheck {

@@ -1,0 +1,63 @@
+// `npm run calc -- FILE [--set NAME=VALUE]... [--json]`: run a template or record
+// headless with the same engine the browser uses.
+
+import { readFileSync } from 'node:fs';
+import type { CalcDocument } from '../document';
+import { createEngine } from '../engine';
+import { parse } from '../format/index';
+import { setInputValue } from '../edit/index';
+import { parseArgs, UsageError, type CalcArgs } from './args';
+import { exitCode, resultRows, table } from './report';
+
+export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
+  let text: string;
+  try {
+    text = readFileSync(args.file, 'utf8');
+  } catch (e) {
+    err(`cannot read ${args.file}: ${(e as Error).message}`);
+    return 2;
+  }
+  const { doc: parsed, errors } = parse(text);
+  for (const e of errors) err(`${args.file}:${e.line}:${e.column}: ${e.message}`);
+  let doc: CalcDocument = parsed;
+  for (const { name, value } of args.sets) {
+    const cell = doc.cells.find((c) => c.kind === 'input' && c.name === name);
+    if (!cell) {
+      err(`--set ${name}: there is no input named ${name}`);
+      return 2;
+    }
+    doc = setInputValue(doc, cell.id, value);
+  }
+  const engine = createEngine(doc);
+  await engine.settled();
+  const rows = resultRows(doc, engine);
+  for (const { name, value } of args.sets) {
+    const cell = doc.cells.find((c) => c.kind === 'input' && c.name === name)!;
+    const s = engine.state(cell.id);
+    if (s?.status === 'error') {
+      err(`--set ${name}=${value}: ${s.error?.message}`);
+      engine.dispose();
+      return 2;
+    }
+  }
+  out(args.json ? JSON.stringify(rows, null, 2) : table(rows, engine));
+  engine.dispose();
+  return errors.length ? 2 : exitCode(rows);
+}
+
+async function main(): Promise<void> {
+  let args: CalcArgs;
+  try {
+    args = parseArgs(process.argv.slice(2));
+  } catch (e) {
+    if (e instanceof UsageError) {
+      console.error(e.message);
+      process.exit(2);
+    }
+    throw e;
+  }
+  const code = await runCalc(args, (s) => console.log(s), (s) => console.error(s));
+  process.exitCode = code;
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) void main();
