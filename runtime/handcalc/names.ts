@@ -24,7 +24,7 @@ function subTex(part: string): string {
 }
 
 /** The head of a name (before the first `_`): its main symbol and any subscript it implies. */
-function headTex(head: string): { main: string; subs: string[] } {
+function headTex(head: string, alone: boolean): { main: string; subs: string[] } {
   if (GREEK.has(head)) return { main: `\\${head}`, subs: [] };
   const digits = /^([A-Za-z]+?)(\d+)$/.exec(head);
   if (digits && (GREEK.has(digits[1]) || digits[1].length === 1)) {
@@ -32,8 +32,8 @@ function headTex(head: string): { main: string; subs: string[] } {
   }
   if (head.length === 1) return { main: head, subs: [] };
   if (/^[A-Z]+$/.test(head)) return { main: roman(head), subs: [] };
-  // Short trade symbols read as a letter with a subscript: Vu, fc, Ast, bo.
-  if (head.length <= 3 && /^[A-Za-z][a-z0-9]+$/.test(head)) return { main: head[0], subs: [head.slice(1)] };
+  // Short trade symbols standing alone read as a letter with a subscript: Vu, fc, Ast, bo.
+  if (alone && head.length <= 3 && /^[A-Za-z][a-z0-9]+$/.test(head)) return { main: head[0], subs: [head.slice(1)] };
   return { main: `\\mathit{${head}}`, subs: [] };
 }
 
@@ -41,7 +41,7 @@ function symbolTex(parts: string[]): string {
   const prime = parts.includes('prime');
   const rest = parts.filter((p) => p !== 'prime');
   if (rest.length === 0) return 'x';
-  const { main, subs } = headTex(rest[0]);
+  const { main, subs } = headTex(rest[0], rest.length === 1);
   const allSubs = [...subs, ...rest.slice(1)];
   const sub = allSubs.length ? `_{${allSubs.map(subTex).join(',')}}` : '';
   return `${main}${prime ? "'" : ''}${sub}`;

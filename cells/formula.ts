@@ -1,0 +1,52 @@
+// Formula cell: `name = expression`, shown as a hand calc (symbol = formula =
+// values put in = result) with its clause in the right margin.
+
+import type { FormulaCell } from '../runtime/document';
+import { renameCell, setExpr } from '../runtime/edit/index';
+import { formulaTex } from '../runtime/handcalc/index';
+import {
+  errorOf, orThrow, marginRefs, parseAssignment, renderError, renderLabel, renderNumber, renderRefs, statusOf,
+  type CellKindModule, type CellViewBase, type ParsedSource,
+} from './kind';
+import { texHtml } from './tex';
+
+export interface FormulaView extends CellViewBase {
+  kind: 'formula';
+  name: string;
+  /** The hand calc as TeX: one line, or one part a row when long. */
+  tex: string;
+}
+
+/** Beyond this many characters of formula the hand calc is set one step a row. */
+const LONG_FORMULA = 38;
+
+export const formulaKind: CellKindModule<FormulaCell, { name: string; expr: string }, FormulaView> = {
+  kind: 'formula',
+
+  parse(source): ParsedSource<{ name: string; expr: string }> {
+    const p = parseAssignment(source, 'expression');
+    return p.ok ? { ok: true, value: { name: p.value.name, expr: p.value.rest } } : p;
+  },
+
+  serialize: (cell) => `${cell.name} = ${cell.expr}`,
+
+  bind(cell, ctx) {
+    const state = ctx.state(cell.id);
+    const t = formulaTex(cell.name, cell.expr, state, ctx.scope);
+    const long = cell.expr.length > LONG_FORMULA && t.parts.length > 2;
+    return {
+      id: cell.id, kind: 'formula', status: statusOf(state), number: ctx.number, label: cell.label,
+      refs: marginRefs(cell.clause, state), error: errorOf(state, cell.expr), name: cell.name,
+      tex: long ? t.aligned : t.line,
+    };
+  },
+
+  render: (v) =>
+    `${renderNumber(v.number)}<div class="cell-body">${renderLabel(v.label)}<div class="cell-math" data-act="open">${
+      texHtml(v.tex, true)}</div>${renderError(v.error)}</div>${renderRefs(v.refs)}`,
+
+  edit(doc, id, source) {
+    const { name, expr } = orThrow(formulaKind.parse(source));
+    return setExpr(renameCell(doc, id, name), id, expr);
+  },
+};
