@@ -31,9 +31,16 @@ function headTex(head: string, alone: boolean): { main: string; subs: string[] }
     return { main: GREEK.has(digits[1]) ? `\\${digits[1]}` : digits[1], subs: [digits[2]] };
   }
   if (head.length === 1) return { main: head, subs: [] };
+  // A Greek word run into a capital: phiVc → φ V_c.
+  const greekRun = /^([a-z]+)([A-Z].*)$/.exec(head);
+  if (greekRun && GREEK.has(greekRun[1])) {
+    const inner = headTex(greekRun[2], alone);
+    return { main: `\\${greekRun[1]} ${inner.main}`, subs: inner.subs };
+  }
   if (/^[A-Z]+$/.test(head)) return { main: roman(head), subs: [] };
-  // Short trade symbols standing alone read as a letter with a subscript: Vu, fc, Ast, bo.
-  if (alone && head.length <= 3 && /^[A-Za-z][a-z0-9]+$/.test(head)) return { main: head[0], subs: [head.slice(1)] };
+  // Short trade symbols read as a letter with a subscript: Vu, fc, Ast, bo (and Vu_slab,
+  // but not chk_w, where a lower-case word is the head of a longer name).
+  if ((alone || /^[A-Z]/.test(head)) && head.length <= 3 && /^[A-Za-z][a-z0-9]+$/.test(head)) return { main: head[0], subs: [head.slice(1)] };
   return { main: `\\mathit{${head}}`, subs: [] };
 }
 

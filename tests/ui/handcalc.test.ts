@@ -183,3 +183,14 @@ describe('checkTex', () => {
     expect(ratioText(Infinity)).toBe('∞');
   });
 });
+
+describe('nameTex on run-together trade names', () => {
+  it('reads a Greek word run into a capital, and capital heads with subscripts', () => {
+    expect(nameTex('phiVc')).toBe('{\\phi V_{\\mathrm{c}}}');
+    expect(nameTex('phiVc_f')).toBe('{\\phi V_{\\mathrm{c},\\mathrm{f}}}');
+    expect(nameTex('Vu_slab')).toBe('{V_{\\mathrm{u},\\mathrm{slab}}}');
+    expect(nameTex('chk_w')).toBe('{\\mathit{chk}_{\\mathrm{w}}}');
+    expect(nameTex('Lo')).toBe('{L_{\\mathrm{o}}}');
+    expect(nameTex('floors')).toBe('{\\mathit{floors}}');
+  });
+});
