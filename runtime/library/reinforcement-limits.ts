@@ -12,7 +12,7 @@ import { inch, psi } from '../units/si';
 export function rhoMinSlab(fy: number, ed: Edition = '318-19'): number {
   const f = positive('fy', fy) / psi;
   if (edition(ed) === '318-19') return 0.0018;
-  return f < 60000 ? 0.002 : Math.max((0.0018 * 60000) / f, 0.0014);
+  return f < 60000 * (1 - 1e-9) ? 0.002 : Math.max((0.0018 * 60000) / f, 0.0014);
 }
 
 /** ACI 318-19 §7.6.1.1 / §8.6.1.1 / §24.4.3.2: As,min = ρmin·b·h of a slab or footing strip. */

@@ -20,7 +20,7 @@ export function fyFactor(fy: number): number {
 export function lightweightFactor(wc: number): number {
   const w = positive('wc', wc) / pcf;
   if (w < 90 - 1e-9) throw new LibraryError(`h_min_one_way: wc = ${show(w)} pcf is below the 90 pcf the table covers`);
-  if (w > 115) return 1;
+  if (w > 115 * (1 + 1e-9)) return 1;
   return Math.max(1.65 - 0.005 * w, 1.09);
 }
 
