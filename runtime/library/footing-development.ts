@@ -13,7 +13,8 @@ import { inch, ksi, psi } from '../units/si';
 export function psiG(fy: number, ed: Edition = '318-19'): number {
   const f = positive('fy', fy) / ksi;
   if (ed === '318-14') return 1;
-  return f <= 60 + 1e-9 ? 1 : f <= 80 + 1e-9 ? 1.15 : 1.3;
+  // Grades by the nearest name, so SI grades 420/550/690 MPa (60.9/79.8/100.1 ksi) land right.
+  return f < 70 ? 1 : f < 90 ? 1.15 : 1.3;
 }
 
 function psiE(v: number): number {
