@@ -32,6 +32,7 @@ export function assemble(mesh: PlateMesh, dofs: DofMap, el: PlateElement): Assem
   const K = new BandedSpd(dofs.size, bandwidth(mesh, dofs));
   const f = new Float64Array(dofs.size);
   const g = new Int32Array(16), e = new Int32Array(16);
+  const data = K.data, bw = K.bw, w = bw + 1, Ke = el.K;
   for (let ey = 0; ey < mesh.ny; ey++) for (let ex = 0; ex < mesh.nx; ex++) {
     elementDofs(mesh, ex, ey, g);
     for (let k = 0; k < 16; k++) e[k] = dofs.eq[g[k]];
@@ -39,10 +40,11 @@ export function assemble(mesh: PlateMesh, dofs: DofMap, el: PlateElement): Assem
       const er = e[r];
       if (er < 0) continue;
       f[er] += el.f[r];
+      const row = er * w - er + bw; // band layout of BandedSpd
       for (let c = 0; c < 16; c++) {
         const ec = e[c];
         if (ec < 0 || ec > er) continue; // lower triangle only
-        K.add(er, ec, el.K[r * 16 + c]);
+        data[row + ec] += Ke[r * 16 + c];
       }
     }
   }
