@@ -14,7 +14,7 @@ export function poColumn(fc: number, ag: number, ast: number, fy: number): numbe
   positive('Ag', ag);
   nonNegative('Ast', ast);
   positive('fy', fy);
-  if (ast >= ag) throw new LibraryError(`Ast (${ast}) must be less than Ag (${ag})`);
+  if (ast >= ag) throw new LibraryError('Ast must be less than Ag');
   return 0.85 * fc * (ag - ast) + Math.min(fy, 80 * ksi) * ast;
 }
 

@@ -9,7 +9,7 @@ import { nonNegative, optional, positive } from './support-args';
 export function qNetAllow(qAllow: number, hf: number, gammaC: number, hFill: number, gammaSoil: number, surcharge = 0): number {
   const q = positive('q_allow', qAllow) - positive('h_footing', hf) * positive('gamma_c', gammaC)
     - nonNegative('h_fill', hFill) * nonNegative('gamma_soil', gammaSoil) - nonNegative('surcharge', surcharge);
-  if (q <= 0) throw new LibraryError(`nothing left of q_allow for the column load: q_net = ${q.toFixed(0)} Pa`);
+  if (q <= 0) throw new LibraryError('nothing left of q_allow for the column load: footing, fill and surcharge weigh as much or more');
   return q;
 }
 

@@ -26,7 +26,7 @@ export function bnBearing(fc: number, a1: number, a2?: number): number {
   positive('fc', fc);
   positive('A1', a1);
   const area2 = a2 === undefined ? a1 : positive('A2', a2);
-  if (area2 < a1) throw new LibraryError(`A2 (${area2}) must not be smaller than A1 (${a1})`);
+  if (area2 < a1) throw new LibraryError('A2 must not be smaller than A1');
   return 0.85 * fc * a1 * Math.min(Math.sqrt(area2 / a1), 2);
 }
 

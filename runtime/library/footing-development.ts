@@ -39,7 +39,7 @@ export function ldBottom(db: number, fy: number, fc: number, spacingOk = true, l
 export function ldBottomGeneral(db: number, fy: number, fc: number, cb: number, ktr = 0, lambda = 1, psie = 1, ed: Edition = '318-19'): number {
   positive('db', db);
   positive('cb', cb);
-  if (finite('Ktr', ktr) < 0) throw new LibraryError(`Ktr must not be negative, got ${ktr}`);
+  if (finite('Ktr', ktr) < 0) throw new LibraryError('Ktr must not be negative');
   const root = sqrtFcShearPsi(fc);
   const psiS = smallBar(db) ? 0.8 : 1.0;
   const confinement = Math.min((cb + ktr) / db, 2.5);
@@ -51,7 +51,7 @@ export function ldBottomGeneral(db: number, fy: number, fc: number, cb: number, 
 /** Length available to develop a bottom bar: (L − c)/2 − end cover (common practice). */
 export function ldAvailFooting(l: number, c: number, cover: number): number {
   const avail = (positive('L', l) - positive('c', c)) / 2 - positive('cover', cover);
-  if (avail <= 0) throw new LibraryError(`no length left to develop the bars: (L − c)/2 − cover = ${avail}`);
+  if (avail <= 0) throw new LibraryError('no length left to develop the bars: (L − c)/2 − cover ≤ 0');
   return avail;
 }
 

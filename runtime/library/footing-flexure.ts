@@ -10,7 +10,7 @@ import { quFooting } from './footing-area';
 export function muFooting(pu: number, b: number, l: number, c: number): number {
   const qu = quFooting(pu, b, l);
   const arm = (l - positive('c', c)) / 2;
-  if (arm <= 0) throw new LibraryError(`the column (c = ${c}) is not smaller than the footing (L = ${l})`);
+  if (arm <= 0) throw new LibraryError('the column is not smaller than the footing');
   return (qu * b * arm * arm) / 2;
 }
 
@@ -34,7 +34,7 @@ export function asMinFooting(b: number, h: number): number {
 
 /** The larger of the Whitney steel and the 0.0018Ag minimum. */
 export function asFooting(mu: number, b: number, d: number, h: number, fc: number, fy: number, phi = 0.9): number {
-  if (positive('h', h) <= positive('d', d)) throw new LibraryError(`h (${h}) must exceed d (${d})`);
+  if (positive('h', h) <= positive('d', d)) throw new LibraryError('h must exceed d');
   return Math.max(asReqFooting(mu, b, d, fc, fy, phi), asMinFooting(b, h));
 }
 

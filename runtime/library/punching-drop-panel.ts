@@ -26,7 +26,7 @@ export function dropPanelCheck(
   positive('x2 (drop panel size)', x2);
   positive('d (slab)', dSlab);
   if (positive('d (drop)', dDrop) <= dSlab) {
-    throw new LibraryError(`d at the drop panel (${dDrop}) must exceed the slab d (${dSlab})`);
+    throw new LibraryError('d at the drop panel must exceed the slab d');
   }
   const s = criticalSection(c1, c2, dDrop, pos);
   // The inner section must lie inside the thickening, or the thickened d does not apply there.

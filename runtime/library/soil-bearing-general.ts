@@ -45,7 +45,7 @@ export function ngammaHansen(phi: number): number {
 /** B/L of a rectangular footing, B ≤ L (B = L for square and circular). */
 function ratio(b: number, l: number): number {
   positive('B', b);
-  if (positive('L', l) < b) throw new LibraryError(`B (${b}) is the smaller side: L must not be less than B`);
+  if (positive('L', l) < b) throw new LibraryError('B is the smaller side: L must not be less than B');
   return b / l;
 }
 

@@ -1,6 +1,7 @@
 // Argument checks shared by the support-side library (punching, column, footing, soil).
 // Library functions get plain SI numbers from the engine; a bad value must come back
-// as a LibraryError that names the argument, never as NaN in a hand calc.
+// as a LibraryError that names the argument, never as NaN in a hand calc. Messages quote
+// pure numbers only: a length arrives in metres, which the user may never have typed.
 
 import { LibraryError } from './types';
 
@@ -23,14 +24,14 @@ export function finite(name: string, v: unknown): number {
 /** A length, force or stress that must be greater than zero. */
 export function positive(name: string, v: unknown): number {
   const x = num(name, v);
-  if (x <= 0) throw new LibraryError(`${name} must be greater than 0, got ${x}`);
+  if (x <= 0) throw new LibraryError(`${name} must be greater than 0 (it is ${x === 0 ? 'zero' : 'negative'})`);
   return x;
 }
 
 /** A value that may be zero but not negative (loads, fill depth, cohesion). */
 export function nonNegative(name: string, v: unknown): number {
   const x = num(name, v);
-  if (x < 0) throw new LibraryError(`${name} must not be negative, got ${x}`);
+  if (x < 0) throw new LibraryError(`${name} must not be negative`);
   return x;
 }
 

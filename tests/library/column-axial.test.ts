@@ -44,7 +44,7 @@ describe('column axial strength, ACI 318-19 §22.4', () => {
   });
 
   it('rejects Ast ≥ Ag, negative Ast and unknown transverse reinforcement', () => {
-    expect(() => num('po_column', 5000 * psi, 324 * in2, 400 * in2, 60 * ksi)).toThrow(/Ast .* must be less than Ag/);
+    expect(() => num('po_column', 5000 * psi, 324 * in2, 400 * in2, 60 * ksi)).toThrow(/Ast must be less than Ag/);
     expect(() => num('po_column', 5000 * psi, 324 * in2, -1 * in2, 60 * ksi)).toThrow(/Ast must not be negative/);
     expect(() => num('phi_pn_max', ...e4, 'hoops')).toThrow(LibraryError);
     expect(() => num('phi_pn_max', ...e4, 'hoops')).toThrow(/unknown transverse reinforcement 'hoops'/);

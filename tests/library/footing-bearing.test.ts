@@ -40,7 +40,7 @@ describe('bearing at the column–footing interface, ACI 318-19 §22.8', () => {
 
   it('rejects A2 < A1, a column larger than the footing, and negative areas', () => {
     expect(() => num('bn_bearing', 3000 * psi, 324 * in2, 100 * in2)).toThrow(LibraryError);
-    expect(() => num('bn_bearing', 3000 * psi, 324 * in2, 100 * in2)).toThrow(/A2 .* must not be smaller than A1/);
+    expect(() => num('bn_bearing', 3000 * psi, 324 * in2, 100 * in2)).toThrow(/A2 must not be smaller than A1/);
     expect(() => num('a2_frustum', 0.5, 0.5, 0.4, 0.4, 0.6)).toThrow(/column is larger than the footing/);
     expect(() => num('as_dowel_min', -1)).toThrow(/Ag must be greater than 0/);
   });

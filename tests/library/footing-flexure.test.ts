@@ -43,7 +43,7 @@ describe('footing flexure', () => {
     expect(() => num('as_req_footing', 722.5 * kipFt, 120 * inch, 20 * inch, 4000 * psi, 60 * ksi, 1.1)).toThrow(LibraryError);
     expect(() => num('as_req_footing', 722.5 * kipFt, 120 * inch, 20 * inch, 4000 * psi, 60 * ksi, 1.1)).toThrow(/φ must be in \(0, 1\]/);
     expect(() => num('as_req_footing', 5000 * kipFt, 120 * inch, 10 * inch, 4000 * psi, 60 * ksi)).toThrow(/footing too shallow/);
-    expect(() => num('as_footing', 100 * kipFt, 120 * inch, 20 * inch, 18 * inch, 4000 * psi, 60 * ksi)).toThrow(/h .* must exceed d/);
+    expect(() => num('as_footing', 100 * kipFt, 120 * inch, 20 * inch, 18 * inch, 4000 * psi, 60 * ksi)).toThrow(/h must exceed d/);
     expect(() => num('mu_footing', 800 * kN, 0.4, 0.4, 0.5)).toThrow(/not smaller than the footing/);
   });
 });
