@@ -207,11 +207,11 @@ class Compiler {
       const [x] = args;
       if (op === '-' || op === '+') {
         this.needNum(x, op);
-        return op === '-' ? derive(x.type, [x], (v) => -(v[0] as number)) : x;
+        return op === '-' ? derive(x.type, [x], (x0: number) => -x0) : x;
       }
       if (op === 'not') {
         this.needBool(x, 'not');
-        return derive(BOOL, [x], (v) => !v[0]);
+        return derive(BOOL, [x], (x0: unknown) => !x0);
       }
       return this.fail('not-allowed', `the operator ${op} is not part of the formula language`);
     }
@@ -220,8 +220,7 @@ class Compiler {
       case '+':
       case '-': {
         this.needSame(x, y, op === '+' ? 'add' : 'subtract');
-        const f = op === '+' ? (v: unknown[]) => (v[0] as number) + (v[1] as number) : (v: unknown[]) => (v[0] as number) - (v[1] as number);
-        return derive(x.type, args, f);
+        return arithmetic(op, x.type, x, y);
       }
       case '*':
       case '/': {
@@ -229,10 +228,9 @@ class Compiler {
         this.needNum(y, op);
         const div = op === '/';
         const dims = addDims(dimsOf(x), dimsOf(y), div ? -1 : 1);
-        const f = div ? (v: unknown[]) => (v[0] as number) / (v[1] as number) : (v: unknown[]) => (v[0] as number) * (v[1] as number);
         // Scaling by a pure number keeps the unit people typed: 8 * 1.00 in^2 is still in^2.
         const hint = isDimless(dimsOf(y)) ? hintOf(x) : !div && isDimless(dimsOf(x)) ? hintOf(y) : undefined;
-        return derive(numType(dims, hint), args, f);
+        return arithmetic(op, numType(dims, hint), x, y);
       }
       case '^':
         return this.power(x, y);
@@ -247,14 +245,14 @@ class Compiler {
       case '!=': {
         this.needSame(x, y, 'compare');
         const eq = x.type.t === 'num' ? approxEqual : (a: unknown, b: unknown) => a === b;
-        return derive(BOOL, args, op === '==' ? (v) => eq(v[0], v[1]) : (v) => !eq(v[0], v[1]));
+        return derive(BOOL, args, op === '==' ? (p: unknown, q: unknown) => eq(p, q) : (p: unknown, q: unknown) => !eq(p, q));
       }
       case 'and':
       case 'or':
       case 'xor': {
         this.needBool(x, op);
         this.needBool(y, op);
-        const f = op === 'and' ? (v: unknown[]) => !!v[0] && !!v[1] : op === 'or' ? (v: unknown[]) => !!v[0] || !!v[1] : (v: unknown[]) => !!v[0] !== !!v[1];
+        const f = op === 'and' ? (p: unknown, q: unknown) => !!p && !!q : op === 'or' ? (p: unknown, q: unknown) => !!p || !!q : (p: unknown, q: unknown) => !!p !== !!q;
         return derive(BOOL, args, f);
       }
       default:
@@ -266,12 +264,12 @@ class Compiler {
     this.needNum(x, '^');
     this.needNum(y, '^');
     if (!isDimless(dimsOf(y))) this.fail('unit', `an exponent must be a pure number, got ${describeType(y.type)}`);
-    if (isDimless(dimsOf(x))) return derive(NUMBER, [x, y], (v) => Math.pow(v[0] as number, v[1] as number));
+    if (isDimless(dimsOf(x))) return derive(NUMBER, [x, y], Math.pow);
     if (!y.constant) {
       this.fail('unit', `${describeType(x.type)} can only be raised to a fixed power (e.g. ^2 or ^0.5), not to a computed one`);
     }
     const p = y.constant.value as number;
-    return derive(numType(scaleDims(dimsOf(x), p)), [x, y], (v) => Math.pow(v[0] as number, v[1] as number));
+    return derive(numType(scaleDims(dimsOf(x), p)), [x, y], p === 2 ? (b: number) => b * b : p === 0.5 ? (b: number) => Math.sqrt(b) : Math.pow);
   }
 
   private conditional(n: any, depth: number): CNode {
@@ -292,10 +290,11 @@ class Compiler {
       const op = ({ smaller: '<', larger: '>', smallerEq: '<=', largerEq: '>=', equal: '==', unequal: '!=' } as Record<string, string>)[c];
       if (!op) this.fail('not-allowed', `the comparison ${c} is not part of the formula language`);
       this.needSame(params[i], params[i + 1], 'compare');
-      const f = op === '==' ? (a: unknown, b: unknown) => approxEqual(a, b) : op === '!=' ? (a: unknown, b: unknown) => !approxEqual(a, b) : (a: unknown, b: unknown) => compareFn(op)([a, b]);
+      const cmp = compareFn(op);
+      const f = op === '==' ? (a: unknown, b: unknown) => approxEqual(a, b) : op === '!=' ? (a: unknown, b: unknown) => !approxEqual(a, b) : (a: unknown, b: unknown) => cmp(a as number, b as number);
       return { i, f };
     });
-    return derive(BOOL, params, (v) => tests.every(({ i, f }) => f(v[i], v[i + 1])));
+    return derive(BOOL, params, (...v: unknown[]) => tests.every(({ i, f }) => f(v[i], v[i + 1])));
   }
 
   private call(n: any, depth: number): CNode {
@@ -310,7 +309,7 @@ class Compiler {
       const t = builtin.type(args.map((a) => a.type));
       if (typeof t === 'string') this.fail('unit', `${name}: ${t}`, name);
       const fn = builtin.fn;
-      return derive(t, args, (v) => fn(...v));
+      return derive(t, args, fn);
     }
     const lib = this.scope.functions.get(name);
     if (!lib) {
@@ -338,7 +337,7 @@ class Compiler {
     });
     if (!this.clauses.includes(lib.clause)) this.clauses.push(lib.clause);
     const fn = lib.fn;
-    const node = derive(typeFromDeclaration(lib.returns), args, (v) => {
+    const node = derive(typeFromDeclaration(lib.returns), args, (...v: unknown[]) => {
       try {
         return fn(...v);
       } catch (e) {
@@ -368,23 +367,55 @@ function constant(type: VType, value: unknown): CNode {
 }
 
 /** A node computed from others; folded to a constant when all of them are. */
-function derive(type: VType, args: CNode[], f: (v: unknown[]) => unknown): CNode {
-  if (args.every((a) => a.constant)) {
-    const value = f(args.map((a) => a.constant!.value));
-    return constant(type, value);
-  }
+function derive(type: VType, args: CNode[], f: (...v: any[]) => unknown): CNode {
+  if (args.every((a) => a.constant)) return constant(type, f(...args.map((a) => a.constant!.value)));
+  // Fixed-arity closures: no argument arrays on the hot path.
   const evs = args.map((a) => a.ev);
-  let ev: Ev;
-  if (evs.length === 1) {
-    const [e0] = evs;
-    ev = (a) => f([e0(a)]);
-  } else if (evs.length === 2) {
-    const [e0, e1] = evs;
-    ev = (a) => f([e0(a), e1(a)]);
-  } else {
-    ev = (a) => f(evs.map((e) => e(a)));
+  switch (evs.length) {
+    case 1: {
+      const [e0] = evs;
+      return { type, ev: (a) => f(e0(a)) };
+    }
+    case 2: {
+      const [e0, e1] = evs;
+      if (args[1].constant) {
+        const c = args[1].constant.value;
+        return { type, ev: (a) => f(e0(a), c) };
+      }
+      return { type, ev: (a) => f(e0(a), e1(a)) };
+    }
+    case 3: {
+      const [e0, e1, e2] = evs;
+      return { type, ev: (a) => f(e0(a), e1(a), e2(a)) };
+    }
+    default:
+      return { type, ev: (a) => f(...evs.map((e) => e(a))) };
   }
-  return { type, ev };
+}
+
+/** + − × ÷ with the operator written into the closure, and a constant operand inlined. */
+function arithmetic(op: string, type: VType, x: CNode, y: CNode): CNode {
+  if (x.constant && y.constant) {
+    const p = x.constant.value as number, q = y.constant.value as number;
+    return constant(type, op === '+' ? p + q : op === '-' ? p - q : op === '*' ? p * q : p / q);
+  }
+  const e0 = x.ev as (a: readonly unknown[]) => number;
+  const e1 = y.ev as (a: readonly unknown[]) => number;
+  if (y.constant) {
+    const c = y.constant.value as number;
+    switch (op) {
+      case '+': return { type, ev: (a) => e0(a) + c };
+      case '-': return { type, ev: (a) => e0(a) - c };
+      case '*': return { type, ev: (a) => e0(a) * c };
+      default: return { type, ev: (a) => e0(a) / c };
+    }
+  }
+  switch (op) {
+    case '+': return { type, ev: (a) => e0(a) + e1(a) };
+    case '-': return { type, ev: (a) => e0(a) - e1(a) };
+    case '*': return { type, ev: (a) => e0(a) * e1(a) };
+    default: return { type, ev: (a) => e0(a) / e1(a) };
+  }
 }
 
 function hintOf(x: CNode): string | undefined {
@@ -415,12 +446,12 @@ function pureConstant(n: any): number | undefined {
   return undefined;
 }
 
-function compareFn(op: string): (v: unknown[]) => boolean {
+function compareFn(op: string): (p: number, q: number) => boolean {
   switch (op) {
-    case '<': return (v) => (v[0] as number) < (v[1] as number);
-    case '>': return (v) => (v[0] as number) > (v[1] as number);
-    case '<=': return (v) => (v[0] as number) <= (v[1] as number);
-    default: return (v) => (v[0] as number) >= (v[1] as number);
+    case '<': return (p, q) => p < q;
+    case '>': return (p, q) => p > q;
+    case '<=': return (p, q) => p <= q;
+    default: return (p, q) => p >= q;
   }
 }
 

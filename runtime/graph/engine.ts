@@ -8,7 +8,7 @@ import type { CalcDocument, Cell } from '../document';
 import { cellName } from '../document';
 import type { CellState, Engine } from '../engine-types';
 import { CellError } from '../formula/cell-error';
-import type { CompileScope, NameInfo } from '../formula/compile';
+import { structuralProblem, type CompileScope, type NameInfo } from '../formula/compile';
 import { columnOf, parseFormula, symbolNames } from '../formula/parse';
 import { nameProblem } from '../formula/names';
 import { findCycles } from './cycles';
@@ -52,6 +52,8 @@ class DocEngine implements Engine {
   private waiting: (() => void)[] = [];
   private flushQueued = false;
   private cycleMembers = new Map<string, string>();
+  /** name → ids of the cells whose source mentions it. */
+  private readonly readers = new Map<string, Set<string>>();
   private disposed = false;
 
   constructor(doc: CalcDocument, options: EngineOptions) {
@@ -89,18 +91,38 @@ class DocEngine implements Engine {
 
   update(doc: CalcDocument): void {
     if (this.disposed) throw new Error('this engine has been disposed');
-    const prevCells = new Map(this.doc.cells.map((c) => [c.id, c]));
+    const prev = this.doc.cells;
     this.doc = doc;
     const dirty = new Set<string>();
-    const seen = new Set<string>();
     let structural = false;
 
+    // Pure edits keep unchanged cells as the same objects: compare pointers first, so
+    // an edit costs what it touches, not the size of the document.
+    const touched = samePlaces(prev, doc.cells);
+    if (touched) {
+      for (const i of touched) {
+        const cell = doc.cells[i];
+        const slot = this.slots.get(cell.id)!;
+        if (sameCell(slot.cell, cell)) {
+          slot.cell = cell;
+          continue;
+        }
+        structural = this.replaceCell(slot, cell) || structural;
+        dirty.add(cell.id);
+      }
+      this.finishUpdate(dirty, structural);
+      return;
+    }
+
+    const seen = new Set<string>();
     for (const cell of doc.cells) {
       if (seen.has(cell.id)) continue; // a repeated id is ignored: ids are the format's job
       seen.add(cell.id);
       const slot = this.slots.get(cell.id);
       if (!slot) {
-        this.slots.set(cell.id, this.newSlot(cell));
+        const slot = this.newSlot(cell);
+        this.slots.set(cell.id, slot);
+        this.indexReaders(slot);
         dirty.add(cell.id);
         structural = true;
         continue;
@@ -109,21 +131,34 @@ class DocEngine implements Engine {
         slot.cell = cell;
         continue;
       }
-      const before = slot.cell;
-      slot.cell = cell;
-      slot.refs = refsOf(cell);
+      structural = this.replaceCell(slot, cell) || structural;
       dirty.add(cell.id);
-      if (before.kind !== cell.kind || cellName(before) !== cellName(cell) || !isInputValueOnly(before, cell)) structural = true;
     }
     for (const [id, slot] of this.slots) {
       if (seen.has(id)) continue;
       this.dropVariable(slot);
+      this.unindexReaders(slot);
       this.slots.delete(id);
       this.changed.add(id);
       structural = true;
     }
-    void prevCells;
+    this.finishUpdate(dirty, structural);
+  }
 
+  /** Puts a changed cell in its slot; true when the change can alter the graph's shape. */
+  private replaceCell(slot: Slot, cell: Cell): boolean {
+    const before = slot.cell;
+    slot.cell = cell;
+    const refs = refsOf(cell);
+    if (String(refs) !== String(slot.refs)) {
+      this.unindexReaders(slot);
+      slot.refs = refs;
+      this.indexReaders(slot);
+    }
+    return before.kind !== cell.kind || cellName(before) !== cellName(cell) || !isInputValueOnly(before, cell);
+  }
+
+  private finishUpdate(dirty: Set<string>, structural: boolean): void {
     const affected = new Set(dirty);
     if (structural) {
       const before = this.owners;
@@ -132,9 +167,7 @@ class DocEngine implements Engine {
       for (const n of new Set([...before.keys(), ...this.owners.keys()])) {
         if (String(before.get(n)) !== String(this.owners.get(n))) namesChanged.add(n);
       }
-      for (const slot of this.slots.values()) {
-        if (slot.refs.some((r) => namesChanged.has(r))) affected.add(slot.cell.id);
-      }
+      for (const n of namesChanged) for (const id of this.readersOf(n)) affected.add(id);
       for (const n of namesChanged) for (const id of this.owners.get(n) ?? []) affected.add(id);
       for (const id of this.updateCycles()) affected.add(id);
     }
@@ -151,6 +184,22 @@ class DocEngine implements Engine {
       busy: false,
       state: { id: cell.id, status: cell.kind === 'section' || cell.kind === 'note' ? 'ok' : 'pending', clauses: [], reads: [] },
     };
+  }
+
+  private indexReaders(slot: Slot): void {
+    for (const r of slot.refs) {
+      let set = this.readers.get(r);
+      if (!set) this.readers.set(r, (set = new Set()));
+      set.add(slot.cell.id);
+    }
+  }
+
+  private unindexReaders(slot: Slot): void {
+    for (const r of slot.refs) this.readers.get(r)?.delete(slot.cell.id);
+  }
+
+  private readersOf(name: string): Iterable<string> {
+    return this.readers.get(name) ?? [];
   }
 
   private indexNames(): Map<string, string[]> {
@@ -174,9 +223,9 @@ class DocEngine implements Engine {
       for (const r of this.slots.get(id)?.refs ?? []) for (const o of this.owners.get(r) ?? []) out.push(o);
       return out;
     };
+    const nameOf = (id: string) => cellName(this.slots.get(id)!.cell) ?? id;
     for (const loop of findCycles([...this.slots.keys()], edges)) {
-      const names = loop.map((id) => cellName(this.slots.get(id)!.cell) ?? id);
-      const text = names.length === 1 ? `${names[0]} uses itself` : `${[...names, names[0]].join(' → ')}`;
+      const text = loop.length === 1 ? `${nameOf(loop[0])} uses itself` : describeLoop(loop, edges, nameOf);
       for (const id of loop) next.set(id, text);
     }
     const changed: string[] = [];
@@ -205,10 +254,10 @@ class DocEngine implements Engine {
       const after = slot.program?.type;
       if (!sameTypeOrBoth(before, after)) {
         const name = cellName(slot.cell);
-        if (name) for (const s of this.slots.values()) {
-          if (s.refs.includes(name) && !done.has(s.cell.id)) {
-            affected.add(s.cell.id);
-            queue.push(s.cell.id);
+        if (name) for (const id of this.readersOf(name)) {
+          if (!done.has(id)) {
+            affected.add(id);
+            queue.push(id);
           }
         }
       }
@@ -247,7 +296,11 @@ class DocEngine implements Engine {
       }
     }
     const loop = this.cycleMembers.get(cell.id);
-    if (loop) return fail(new CellError('cycle', `these cells use each other in a loop: ${loop}`));
+    if (loop) {
+      // A formula that cannot compile for its own reasons says so before the loop does.
+      const own = cell.kind === 'formula' || cell.kind === 'check' ? structuralProblem(cell.expr, this.functions) : undefined;
+      return fail(own ?? new CellError('cycle', `these cells use each other in a loop: ${loop}`));
+    }
     switch (cell.kind) {
       case 'input':
         return inputProgram(cell, slot.program);
@@ -373,7 +426,7 @@ class DocEngine implements Engine {
         const n = slot && cellName(slot.cell);
         if (n) names.add(n);
       }
-      if (names.size) for (const slot of this.slots.values()) if (slot.refs.some((r) => names.has(r))) this.changed.add(slot.cell.id);
+      for (const n of names) for (const id of this.readersOf(n)) this.changed.add(id);
       const changed = [...this.changed];
       this.changed.clear();
       for (const l of this.listeners) l(changed);
@@ -382,6 +435,35 @@ class DocEngine implements Engine {
     this.waiting = [];
     waiting.forEach((w) => w());
   }
+}
+
+/** "a reads c, c reads b, b reads a": the loop walked along what each cell reads. */
+function describeLoop(loop: string[], edges: (id: string) => string[], nameOf: (id: string) => string): string {
+  const members = new Set(loop);
+  const steps: string[] = [];
+  const visited = new Set<string>();
+  let at = loop[0];
+  while (!visited.has(at)) {
+    visited.add(at);
+    const next = edges(at).find((e) => members.has(e) && (!visited.has(e) || e === loop[0]));
+    if (!next) break;
+    steps.push(`${nameOf(at)} reads ${nameOf(next)}`);
+    at = next;
+  }
+  const missed = loop.filter((id) => !visited.has(id)).map(nameOf);
+  return steps.join(', ') + (missed.length ? `; also in the loop: ${missed.join(', ')}` : '');
+}
+
+/** Indexes of cells that are new objects, when no cell was added, removed or moved. */
+function samePlaces(prev: readonly Cell[], next: readonly Cell[]): number[] | undefined {
+  if (prev.length !== next.length) return undefined;
+  const out: number[] = [];
+  for (let i = 0; i < next.length; i++) {
+    if (prev[i] === next[i]) continue;
+    if (prev[i].id !== next[i].id) return undefined;
+    out.push(i);
+  }
+  return out;
 }
 
 function refsOf(cell: Cell): string[] {

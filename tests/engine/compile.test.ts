@@ -80,10 +80,10 @@ describe('formulas and units', () => {
   it('text choices and conditions', async () => {
     const { byName } = await run(doc(
       input('pos', 'edge', { choices: ['interior', 'edge', 'corner'] } as never),
-      formula('alpha_s', 'pos == "interior" ? 40 : (pos == "edge" ? 30 : 20)'),
+      formula('as_pos', 'pos == "interior" ? 40 : (pos == "edge" ? 30 : 20)'),
     ));
     // αs = 40 / 30 / 20 for interior / edge / corner columns: ACI 318-19 §22.6.5.3
-    expect(byName('alpha_s').value).toBe(30);
+    expect(byName('as_pos').value).toBe(30);
   });
 
   it('rounds up to a whole number of steps', async () => {
