@@ -85,7 +85,8 @@ export function quGeneral(
   const nc = ncVesic(phi);
   const ngamma = ng === 'vesic' ? ngammaVesic(phi) : ng === 'meyerhof' ? ngammaMeyerhof(phi) : ngammaHansen(phi);
   const s = shapeDeBeer(phi, b, l);
-  const d = dm === 'hansen' ? depthHansen(phi, df, b) : dm === 'meyerhof' ? depthMeyerhof(phi, df, b) : (nonNegative('Df', df), { dc: 1, dq: 1, dg: 1 });
+  nonNegative('Df', df);
+  const d = dm === 'hansen' ? depthHansen(phi, df, b) : dm === 'meyerhof' ? depthMeyerhof(phi, df, b) : { dc: 1, dq: 1, dg: 1 };
   return nonNegative('c', c) * nc * s.sc * d.dc + nonNegative('q', q) * nq * s.sq * d.dq +
     0.5 * nonNegative('gamma', gamma) * b * ngamma * s.sg * d.dg;
 }
