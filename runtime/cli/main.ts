@@ -2,7 +2,8 @@
 // headless with the same engine the browser uses.
 
 import { readFileSync } from 'node:fs';
-import type { CalcDocument } from '../document';
+import type { CalcDocument, Cell } from '../document';
+import { parseInput } from '../formula/input-value';
 import { createEngine } from '../engine';
 import { parse } from '../format/index';
 import { setInputValue } from '../edit/index';
@@ -26,7 +27,7 @@ export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s:
       err(`--set ${name}: there is no input named ${name}`);
       return 2;
     }
-    doc = setInputValue(doc, cell.id, value);
+    doc = keepDisplayUnit(setInputValue(doc, cell.id, value), cell);
   }
   const engine = createEngine(doc);
   await engine.settled();
@@ -43,6 +44,18 @@ export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s:
   out(args.json ? JSON.stringify(rows, null, 2) : table(rows, engine));
   engine.dispose();
   return errors.length ? 2 : exitCode(rows);
+}
+
+/** An override in other units keeps showing the unit the document showed (5000 psi stays psi). */
+function keepDisplayUnit(doc: CalcDocument, before: Cell): CalcDocument {
+  if (before.kind !== 'input' || before.unit || before.choices) return doc;
+  let unit = '';
+  try {
+    unit = parseInput(before).unit;
+  } catch {
+    return doc;
+  }
+  return unit ? { ...doc, cells: doc.cells.map((c) => (c.id === before.id ? { ...c, unit } as Cell : c)) } : doc;
 }
 
 async function main(): Promise<void> {
