@@ -1,0 +1,100 @@
+// Styles of the static record: a paper sheet on screen, calc sheets in print. The
+// printed title block sits in the page's top margin boxes, so it repeats on every
+// sheet with "sheet n of m"; its texts come from the document, as escaped CSS strings.
+
+import type { DocMeta } from '../document';
+import { cssString } from './escape';
+import { CAUTION } from './static-html';
+
+/** Printed title-block fields are cut to this many characters so the margin stays one or two lines. */
+const FIELD_MAX = 90;
+
+function field(label: string, value: string): string {
+  const v = value.length > FIELD_MAX ? `${value.slice(0, FIELD_MAX)}…` : value;
+  return `${cssString(`${label}  `)} ${cssString(v || '—')}`;
+}
+
+/** The @page rules for a document's title block (screen rules do not depend on the document). */
+export function pageCss(meta: DocMeta): string {
+  const box = 'font: 8pt/1.45 system-ui, "DejaVu Sans", sans-serif; white-space: pre-wrap; vertical-align: bottom; border-bottom: 1.4pt solid #000; padding: 0 1.5mm 1.6mm; color: #000;';
+  return `@page {
+  margin: 27mm 13mm 15mm 13mm;
+  @top-left { ${box} width: 46%; text-align: left; content: ${field('PROJECT', meta.project)} "\\A " ${field('SUBJECT', meta.subject)}; }
+  @top-center { ${box} width: 28%; text-align: left; content: ${field('JOB NO.', meta.job)} "\\A " ${field('PREPARED', meta.preparedBy)} "   " ${field('CHECKED', meta.checkedBy)}; }
+  @top-right { ${box} width: 26%; text-align: right; content: ${field('REV.', meta.revision)} "   " ${field('DATE', meta.date)} "\\A SHEET " counter(page) " OF " counter(pages); }
+  @bottom-center { font: 7pt system-ui, "DejaVu Sans", sans-serif; color: #000; content: ${cssString(CAUTION)}; }
+}`;
+}
+
+export const STATIC_CSS = `
+.lt-static { --lt-ink: #1b2129; --lt-soft: #59606c; --lt-rule: #d7d0bf; --lt-ok: #1d6638; --lt-fail: #a0171b;
+  max-width: 62rem; margin: 1.2rem auto; padding: 1.4rem 1.6rem 2rem; background: #fffdf7; color: var(--lt-ink);
+  font: 15px/1.45 Charter, "Bitstream Charter", "DejaVu Serif", Georgia, serif; border: 1px solid #d8d1c0;
+  box-shadow: 0 1px 2px rgba(0,0,0,.12), 0 6px 18px rgba(60,50,30,.12); }
+.lt-static * { box-sizing: border-box; }
+.lt-static .lt-warning { border: 2px solid #8a5a00; background: #fff4d6; padding: .5rem .8rem; font: 600 14px system-ui, sans-serif; margin: 0 0 1rem; }
+.lt-tb { display: grid; grid-template-columns: 3fr 1.3fr 1fr; border: 1.5px solid var(--lt-ink); margin-bottom: .8rem; }
+.lt-tb-f { display: flex; flex-direction: column; padding: .2rem .45rem; border-right: 1px solid #b9b09a; border-bottom: 1px solid #b9b09a; min-width: 0; overflow-wrap: anywhere; }
+.lt-tb-f.lt-wide { grid-column: span 1; }
+.lt-tb-k { font: 10px/1.3 system-ui, sans-serif; text-transform: uppercase; letter-spacing: .08em; color: var(--lt-soft); }
+.lt-tb-v { font-size: 14px; }
+.lt-caution { font: 13px system-ui, sans-serif; border-left: 4px solid #8a5a00; padding: .3rem .6rem; background: #fbf5e4; margin: 0 0 .4rem; }
+.lt-howto { font: 12px system-ui, sans-serif; color: var(--lt-soft); margin: 0 0 1rem; }
+.lt-summary h2, .lt-review h3 { font-size: 1.05rem; margin: .8rem 0 .4rem; }
+.lt-summary small, .lt-review small { font: 12px system-ui, sans-serif; color: var(--lt-soft); margin-left: .5rem; }
+.lt-summary table, .lt-review table { width: 100%; border-collapse: collapse; font: 13px system-ui, sans-serif; }
+.lt-summary th, .lt-summary td, .lt-review th, .lt-review td { text-align: left; padding: .15rem .4rem; border-bottom: 1px solid var(--lt-rule); vertical-align: top; overflow-wrap: anywhere; }
+.lt-summary th, .lt-review th { font-weight: 600; color: var(--lt-soft); border-bottom: 1.5px solid var(--lt-ink); }
+.lt-sum-v { white-space: nowrap; font-weight: 600; }
+.lt-sum-r { font-variant-numeric: tabular-nums; }
+.lt-st-fail .lt-sum-v, .lt-verdict.lt-fail { color: var(--lt-fail); }
+.lt-st-ok .lt-sum-v, .lt-verdict.lt-pass { color: var(--lt-ok); }
+.lt-calc { display: block; margin-top: 1rem; }
+.lt-sec { font-size: 1.15rem; margin: 1.2rem 0 .3rem; padding-bottom: .15rem; border-bottom: 1.5px solid var(--lt-ink); overflow-wrap: anywhere; }
+.lt-sec .lt-no { display: inline-block; min-width: 2.2rem; }
+.lt-sec-ref { font: 12px system-ui, sans-serif; color: var(--lt-soft); }
+.lt-sec-label { margin: 0 0 .3rem 2.2rem; color: var(--lt-soft); }
+.lt-cell { display: grid; grid-template-columns: 2.6rem minmax(0, 1fr) 8.5rem 9.5rem; gap: 0 .6rem; padding: .35rem 0; border-bottom: 1px solid #ece6d6; }
+.lt-cell > .lt-no { font: 12px system-ui, sans-serif; color: var(--lt-soft); padding-top: .2rem; }
+.lt-body { min-width: 0; overflow-wrap: anywhere; }
+.lt-label { font: 13px system-ui, sans-serif; color: var(--lt-soft); }
+.lt-eq { overflow-x: auto; overflow-y: hidden; }
+.lt-eq .katex-display { margin: .25rem 0; text-align: left; }
+.lt-eq .katex-display > .katex { text-align: left; }
+.lt-res { font: 600 14px system-ui, sans-serif; text-align: right; padding-top: .2rem; overflow-wrap: anywhere; font-variant-numeric: tabular-nums; }
+.lt-check.lt-st-ok .lt-res { color: var(--lt-ok); }
+.lt-check.lt-st-fail .lt-res { color: var(--lt-fail); }
+.lt-res-none, .lt-res-err { color: var(--lt-soft); font-weight: 400; }
+.lt-ref { font: 11.5px/1.35 system-ui, sans-serif; color: var(--lt-soft); padding-top: .2rem; overflow-wrap: anywhere; }
+.lt-ref span { display: block; }
+.lt-meta, .lt-about { font: 12px system-ui, sans-serif; color: var(--lt-soft); margin: .1rem 0; }
+.lt-verdict { font: 13px system-ui, sans-serif; margin: .1rem 0; }
+.lt-ratio, .lt-dc { color: var(--lt-ink); margin-left: .5rem; }
+.lt-err { font: 13px system-ui, sans-serif; color: #8a5a00; margin: .2rem 0; }
+.lt-note p { margin: .2rem 0; }
+.lt-tex-raw, .lt-long { font: 12px ui-monospace, "DejaVu Sans Mono", monospace; white-space: pre-wrap; overflow-wrap: anywhere; }
+.lt-review { margin-top: 1.4rem; }
+.lt-comments { font: 13px system-ui, sans-serif; padding-left: 1.2rem; }
+.lt-cstat { font-weight: 600; }
+.lt-foot { margin-top: 1.4rem; font: 11px system-ui, sans-serif; color: var(--lt-soft); overflow-wrap: anywhere; }
+
+/* A record page before (or without) its script: only the static rendering shows. */
+html.lt-record:not(.lt-live) body > :not(#lt-static) { display: none !important; }
+html.lt-record.lt-live #lt-static { display: none; }
+
+@media print {
+  html.lt-record, html.lt-record body { background: #fff !important; padding: 0 !important; margin: 0 !important; }
+  html.lt-record body > :not(#lt-static) { display: none !important; }
+  html.lt-record #lt-static { display: block !important; }
+  .lt-static { max-width: none; margin: 0; padding: 0; border: 0; box-shadow: none; background: #fff; font-size: 10pt; }
+  .lt-static > .lt-tb, .lt-howto, .lt-static .lt-warning { display: none; }
+  .lt-caution { font-size: 8.5pt; background: none; }
+  .lt-cell { grid-template-columns: 1.8rem minmax(0, 1fr) 7rem 7.5rem; break-inside: avoid; page-break-inside: avoid; }
+  .lt-eq, .katex-display, .lt-summary tr, .lt-review tr { break-inside: avoid; page-break-inside: avoid; }
+  .lt-eq { overflow: visible; }
+  .lt-sec { break-after: avoid; page-break-after: avoid; }
+  .lt-summary { break-after: page; }
+  .lt-static a { color: inherit; text-decoration: none; }
+  .lt-note a[href^="http"]::after { content: " (" attr(href) ")"; font-size: 8pt; }
+}
+`;

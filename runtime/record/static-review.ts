@@ -1,0 +1,62 @@
+// The review state in the static record: revision log, comments and sign-offs.
+// The review model (issue 7) is written elsewhere; this reads the document's
+// optional `review` field defensively, as untrusted data of unknown shape, and shows
+// whatever text it holds. Nothing here is printed when the document has no review.
+
+import type { CalcDocument } from '../document';
+import { escapeHtml } from './escape';
+
+type Obj = Record<string, unknown>;
+
+const isObj = (v: unknown): v is Obj => typeof v === 'object' && v !== null && !Array.isArray(v);
+const list = (v: unknown): Obj[] => (Array.isArray(v) ? v.filter(isObj) : []);
+
+/** A field as short text: strings as they are, numbers and yes/no as words, anything else dropped. */
+function text(v: unknown, max = 2000): string {
+  if (typeof v === 'string') return escapeHtml(v.length > max ? `${v.slice(0, max)}…` : v);
+  if (typeof v === 'number' || typeof v === 'boolean') return escapeHtml(String(v));
+  return '';
+}
+
+function revisionsHtml(revisions: Obj[]): string {
+  if (revisions.length === 0) return '';
+  const rows = revisions.map((r) => {
+    const changed = Array.isArray(r.changedInputs)
+      ? r.changedInputs.map((c) => (isObj(c) ? text(c.name ?? c.cellId ?? c.id) : text(c))).filter(Boolean).join(', ')
+      : '';
+    return `<tr><td>${text(r.label)}</td><td>${text(r.date)}</td><td>${text(r.by)}</td><td>${text(r.checkedBy)}</td><td>${
+      text(r.description)}</td><td>${changed || '—'}</td></tr>`;
+  });
+  return `<h3>Revision log</h3><table class="lt-revlog"><thead><tr><th>Rev.</th><th>Date</th><th>By</th><th>Checked</th><th>Description</th><th>Inputs changed</th></tr></thead><tbody>${
+    rows.join('')}</tbody></table>`;
+}
+
+function commentsHtml(comments: Obj[]): string {
+  if (comments.length === 0) return '';
+  const open = comments.filter((c) => c.status !== 'resolved').length;
+  const items = comments.map((c) => {
+    const replies = list(c.replies)
+      .map((r) => `<li><span class="lt-who">${text(r.author)}</span> <span class="lt-when">${text(r.time)}</span>: ${text(r.text)}</li>`)
+      .join('');
+    return `<li class="lt-comment lt-${c.status === 'resolved' ? 'resolved' : 'open'}"><span class="lt-cstat">${
+      c.status === 'resolved' ? 'resolved' : 'open'}</span> on <a href="#lt-c-${text(c.cellId)}">${text(c.cellId)}</a> — <span class="lt-who">${
+      text(c.author)}</span> <span class="lt-when">${text(c.time)}</span>: ${text(c.text)}${replies ? `<ul>${replies}</ul>` : ''}</li>`;
+  });
+  return `<h3>Comments <small>${open} open of ${comments.length}</small></h3><ul class="lt-comments">${items.join('')}</ul>`;
+}
+
+function signoffsHtml(signoffs: Obj[]): string {
+  if (signoffs.length === 0) return '';
+  const rows = signoffs.map((s) => `<tr><td>${s.scope === 'document' ? 'whole record' : `section ${text(s.scope)}`}</td><td>${
+    text(s.by)}</td><td>${text(s.date)}</td></tr>`);
+  return `<h3>Sign-offs</h3><table class="lt-signoffs"><thead><tr><th>Covers</th><th>By</th><th>Date</th></tr></thead><tbody>${
+    rows.join('')}</tbody></table>`;
+}
+
+/** HTML for the document's review state, or '' when it has none. */
+export function reviewHtml(doc: CalcDocument): string {
+  const review = (doc as { review?: unknown }).review;
+  if (!isObj(review)) return '';
+  const body = revisionsHtml(list(review.revisions)) + signoffsHtml(list(review.signoffs)) + commentsHtml(list(review.comments));
+  return body ? `<section class="lt-review" aria-label="Review">${body}</section>` : '';
+}
