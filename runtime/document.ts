@@ -1,6 +1,8 @@
 // The calc document as plain, serialisable data. Everything else (engine, view,
 // record export) reads this; all editing is a pure operation that returns a new one.
 
+import type { ReviewState } from './review/types';
+
 /** Title-block fields, printed at the top of every sheet. */
 export interface DocMeta {
   project: string;
@@ -81,6 +83,8 @@ export type CellKind = Cell['kind'];
 export interface CalcDocument {
   meta: DocMeta;
   cells: Cell[];
+  /** Issued revisions, checker's comments and sign-offs (runtime/review); absent until the first. */
+  review?: ReviewState;
 }
 
 export function emptyMeta(): DocMeta {

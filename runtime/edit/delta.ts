@@ -2,6 +2,7 @@
 // stores each step as the few cells it changed instead of a whole copy.
 
 import type { CalcDocument, Cell, DocMeta } from '../document';
+import type { ReviewState } from '../review/types';
 
 export interface SheetDelta {
   /** Title-block fields that changed (whole meta when any did). */
@@ -10,6 +11,8 @@ export interface SheetDelta {
   order?: string[];
   /** Cells whose content differs, by id (new cells included). */
   cells?: Cell[];
+  /** The whole review state when it changed; null when it was removed. */
+  review?: ReviewState | null;
 }
 
 /** What turns `from` into `to`. Cells are compared by identity first, then by content. */
@@ -24,12 +27,13 @@ export function diffSheets(from: CalcDocument, to: CalcDocument): SheetDelta {
   if (changed.length) delta.cells = changed;
   const sameOrder = from.cells.length === to.cells.length && from.cells.every((c, i) => c.id === to.cells[i].id);
   if (!sameOrder) delta.order = to.cells.map((c) => c.id);
+  if (from.review !== to.review && JSON.stringify(from.review) !== JSON.stringify(to.review)) delta.review = to.review ?? null;
   return delta;
 }
 
 /** Applies a delta made by diffSheets(from, to) to `from`, giving a sheet equal to `to`. */
 export function applyDelta(from: CalcDocument, delta: SheetDelta): CalcDocument {
-  if (!delta.meta && !delta.order && !delta.cells) return from;
+  if (!delta.meta && !delta.order && !delta.cells && delta.review === undefined) return from;
   const byId = new Map(from.cells.map((c) => [c.id, c]));
   for (const c of delta.cells ?? []) byId.set(c.id, c);
   const order = delta.order ?? from.cells.map((c) => c.id);
@@ -38,7 +42,8 @@ export function applyDelta(from: CalcDocument, delta: SheetDelta): CalcDocument 
     if (!c) throw new Error(`history step names cell "${id}" that it does not carry`);
     return c;
   });
-  return { meta: delta.meta ?? from.meta, cells };
+  const review = delta.review === undefined ? from.review : delta.review ?? undefined;
+  return review ? { meta: delta.meta ?? from.meta, cells, review } : { meta: delta.meta ?? from.meta, cells };
 }
 
 /** A list of sheets as the first one plus one delta a step. */

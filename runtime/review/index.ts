@@ -1,0 +1,13 @@
+// Checker review carried in the record: revisions, comments, sign-offs, compare.
+
+export * from './types';
+export { snapshot, changedInputs, latestRevision, nextRevisionLabel, issueRevision } from './revision';
+export type { ResultLookup, IssueOptions } from './revision';
+export { addComment, reply, resolve, openComments, type Note } from './comments';
+export { signOff, isStale, withdrawSignOff, type SignOffRequest } from './signoff';
+export { fingerprint, coverFingerprint, sectionCells, upstreamCells } from './fingerprint';
+export {
+  compare, compareBaselines, diffRecords, onlyChanged, returnToBaseline,
+  type Comparison, type InputChange, type ResultChange,
+} from './compare';
+export { diffText } from './diff-text';
