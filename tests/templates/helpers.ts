@@ -130,3 +130,32 @@ export function near(actual: number, expected: number, rel = 5e-4): void {
 export function floorTo(x: number, step: number): number {
   return Math.floor(x / step + 1e-9) * step;
 }
+
+// ---- hand-calculation helpers (first principles, US units) ----------------------
+
+/**
+ * Tension steel of a rectangular section by the Whitney block (ACI 318-19 §22.2.2.4.1,
+ * CONFIRMED in reference-values e.3), φ = 0.90: Rn = Mu/(φ b d²),
+ * ρ = 0.85f'c/fy·(1 − √(1 − 2Rn/(0.85f'c))), As = ρ b d. Mu in lb·in, lengths in in, psi.
+ */
+export function whitneyAs(MuLbIn: number, b: number, d: number, fc: number, fy: number): number {
+  const Rn = MuLbIn / (0.9 * b * d * d);
+  return ((0.85 * fc) / fy) * (1 - Math.sqrt(1 - (2 * Rn) / (0.85 * fc))) * b * d;
+}
+
+/** β1 = 0.85 to 4000 psi, −0.05 per 1000 psi, ≥ 0.65 (ACI 318-19 Table 22.2.2.4.3, CONFIRMED). */
+export function beta1(fc: number): number {
+  return Math.min(0.85, Math.max(0.65, 0.85 - (0.05 * (fc - 4000)) / 1000));
+}
+
+/**
+ * φMn of tension steel As over width b (in, psi; lb·in): a = As fy/(0.85 f'c b), steel yielding,
+ * φ = 0.90; asserts εt = 0.003(d − c)/c reaches the tension-controlled limit εty + 0.003
+ * (ACI 318-19 Table 21.2.2, from memory; 318-14: 0.005, which it then also reaches).
+ */
+export function phiMnRect(As: number, b: number, d: number, fc: number, fy: number): number {
+  const a = (As * fy) / (0.85 * fc * b);
+  const c = a / beta1(fc);
+  expect((0.003 * (d - c)) / c).toBeGreaterThan(fy / 29e6 + 0.003);
+  return 0.9 * As * fy * (d - a / 2);
+}
