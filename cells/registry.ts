@@ -7,6 +7,8 @@ import { inputKind } from './input';
 import type { BindContext, CellKindModule, CellViewBase } from './kind';
 import { noteKind } from './note';
 import { sectionKind } from './section';
+import { figureKind } from './figure';
+import { sweepKind } from './sweep';
 
 type AnyKind = CellKindModule<Cell, unknown, CellViewBase>;
 
@@ -16,6 +18,8 @@ const KINDS: Record<CellKind, AnyKind> = {
   input: inputKind as unknown as AnyKind,
   formula: formulaKind as unknown as AnyKind,
   check: checkKind as unknown as AnyKind,
+  figure: figureKind as unknown as AnyKind,
+  sweep: sweepKind as unknown as AnyKind,
 };
 
 export function kindOf(cell: Cell): AnyKind {

@@ -77,7 +77,28 @@ export interface CheckCell extends CellBase {
   expr: string;
 }
 
-export type Cell = SectionCell | NoteCell | InputCell | FormulaCell | CheckCell;
+/** A drawing computed from cell values: `expr` calls a figure function (runtime/figures). */
+export interface FigureCell extends CellBase {
+  kind: 'figure';
+  expr: string;
+}
+
+/**
+ * A what-if plot: the input cell `input` swept from `from` to `to` (quantities as typed)
+ * in `steps` equal intervals, with the named results or checks computed at each point.
+ */
+export interface SweepCell extends CellBase {
+  kind: 'sweep';
+  input: string;
+  from: string;
+  to: string;
+  /** Equal intervals between from and to (default 20, so 21 points). */
+  steps?: number;
+  /** Names of formula or check cells to plot. */
+  outputs: string[];
+}
+
+export type Cell = SectionCell | NoteCell | InputCell | FormulaCell | CheckCell | FigureCell | SweepCell;
 export type CellKind = Cell['kind'];
 
 export interface CalcDocument {

@@ -3,6 +3,7 @@
 // to the cell's display unit and formatted for people.
 
 import type { CalcDocument } from './document';
+import type { FigureSpec, SweepResult } from './figures/spec';
 
 export type CellStatus = 'pending' | 'ok' | 'fail' | 'error';
 
@@ -51,6 +52,17 @@ export interface CellState {
   clauses: string[];
   /** Names of the cells this one reads, in first-use order. */
   reads: string[];
+  /** Figure cells: the drawing's spec (render with runtime/figures/render). */
+  figure?: FigureSpec;
+  /** Sweep cells: the points swept and each plotted result. */
+  sweep?: SweepResult;
+}
+
+/** One plotted result at one what-if point: a value (a check's ratio or condition) and, for checks, pass. */
+export interface WhatIfOutcome {
+  value?: number | string | boolean;
+  pass?: boolean;
+  error?: string;
 }
 
 export interface Engine {
@@ -61,6 +73,11 @@ export interface Engine {
   state(id: string): CellState | undefined;
   /** Called after each settle with the ids whose state changed. Returns an unsubscribe function. */
   subscribe(listener: (changed: string[]) => void): () => void;
+  /**
+   * What if input `input` had each of `values` (SI numbers, texts or booleans)? The named
+   * results and checks at each point, computed without changing the document or any state.
+   */
+  whatIf?(input: string, values: readonly (number | string | boolean)[], outputs: readonly string[]): Record<string, WhatIfOutcome>[];
   /** Resolves when every cell has a final state for the current document. */
   settled(): Promise<void>;
   dispose(): void;

@@ -39,7 +39,7 @@ export function freshName(doc: CalcDocument, name: string): string {
   }
 }
 
-const STEMS: Record<CellKind, string> = { section: 's', note: 'n', input: 'i', formula: 'f', check: 'k' };
+const STEMS: Record<CellKind, string> = { section: 's', note: 'n', input: 'i', formula: 'f', check: 'k', figure: 'g', sweep: 'w' };
 
 /** A new cell of `kind` with placeholder content that computes. */
 export function blankCell(doc: CalcDocument, kind: CellKind): Cell {
@@ -50,6 +50,8 @@ export function blankCell(doc: CalcDocument, kind: CellKind): Cell {
     case 'input': return { id, kind, name: freshName(doc, 'x'), value: '1' };
     case 'formula': return { id, kind, name: freshName(doc, 'y'), expr: '1' };
     case 'check': return { id, kind, expr: '1 <= 2' };
+    case 'figure': return { id, kind, expr: 'punching_plan(12 in, 12 in, 6 in, "interior")' };
+    case 'sweep': return { id, kind, input: '', from: '', to: '', outputs: [] };
   }
 }
 
@@ -155,8 +157,8 @@ export type CellFields = Partial<{
 }>;
 
 const FIELD_KINDS: Record<keyof CellFields, CellKind[]> = {
-  label: ['section', 'note', 'input', 'formula', 'check'],
-  clause: ['section', 'note', 'input', 'formula', 'check'],
+  label: ['section', 'note', 'input', 'formula', 'check', 'figure', 'sweep'],
+  clause: ['section', 'note', 'input', 'formula', 'check', 'figure', 'sweep'],
   unit: ['input', 'formula'],
   precision: ['formula'],
   min: ['input'],
@@ -226,11 +228,18 @@ export function renameCell(doc: CalcDocument, id: string, name: string, updateRe
   if (problem) throw new EditError(problem);
   const cells = doc.cells.map((c) => {
     if (c.id === id) return { ...c, name } as Cell;
-    if (!updateReferences || !old || (c.kind !== 'formula' && c.kind !== 'check')) return c;
+    if (updateReferences && old && c.kind === 'sweep') return renameInSweep(c, old, name);
+    if (!updateReferences || !old || (c.kind !== 'formula' && c.kind !== 'check' && c.kind !== 'figure')) return c;
     const expr = renameInExpr(c.expr, old, name);
     return expr === c.expr ? c : { ...c, expr };
   });
   return withCells(doc, cells);
+}
+
+/** A sweep names its input and outputs outright: rename them as whole names. */
+function renameInSweep(c: Extract<Cell, { kind: 'sweep' }>, from: string, to: string): Cell {
+  if (c.input !== from && !c.outputs.includes(from)) return c;
+  return { ...c, input: c.input === from ? to : c.input, outputs: c.outputs.map((o) => (o === from ? to : o)) };
 }
 
 export function setMeta(doc: CalcDocument, key: keyof DocMeta, value: string): CalcDocument {

@@ -6,11 +6,14 @@ import { describeDims, DIMLESS, isDimless, sameDims, siUnitText, unitInfo, type 
 export type VType =
   | { t: 'num'; dims: Dims; /** unit to name in messages, when one is known */ hint?: string }
   | { t: 'text' }
-  | { t: 'bool' };
+  | { t: 'bool' }
+  /** A drawing spec from a figure function (runtime/figures); only a figure cell holds one. */
+  | { t: 'figure' };
 
 export const NUMBER: VType = { t: 'num', dims: DIMLESS };
 export const TEXT: VType = { t: 'text' };
 export const BOOL: VType = { t: 'bool' };
+export const FIGURE: VType = { t: 'figure' };
 
 export function numType(dims: Dims, hint?: string): VType {
   return hint ? { t: 'num', dims, hint } : { t: 'num', dims };
@@ -25,6 +28,7 @@ export function sameType(a: VType, b: VType): boolean {
 export function describeType(v: VType): string {
   if (v.t === 'text') return 'a text';
   if (v.t === 'bool') return 'a true/false value';
+  if (v.t === 'figure') return 'a figure';
   if (isDimless(v.dims)) return 'a pure number';
   const what = describeDims(v.dims);
   const si = siUnitText(v.dims);
@@ -37,5 +41,6 @@ export function describeType(v: VType): string {
 export function typeFromDeclaration(decl: string): VType {
   if (decl === 'text') return TEXT;
   if (decl === 'bool') return BOOL;
+  if (decl === 'figure') return FIGURE;
   return numType(unitInfo(decl).dims, decl === '1' ? undefined : decl);
 }

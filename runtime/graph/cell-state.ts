@@ -6,6 +6,7 @@ import type { CellState } from '../engine-types';
 import type { CellError } from '../formula/cell-error';
 import { displayNumber, displayOther } from '../formula/display';
 import type { CellProgram, CheckResult } from './cell-program';
+import type { FigureSpec, SweepResult } from '../figures/spec';
 
 export function buildState(
   cell: Cell,
@@ -39,6 +40,12 @@ export function buildState(
     state.display = typeof r.value === 'number' ? displayNumber(r.value, '', 3) : displayOther(r.value);
     return state;
   }
+  if (cell.kind === 'figure' || cell.kind === 'sweep') {
+    if (v === undefined || v === null) state.status = 'pending';
+    else if (cell.kind === 'figure') state.figure = v as FigureSpec;
+    else state.sweep = v as SweepResult;
+    return state;
+  }
   if (v === undefined || v === null) {
     state.status = 'pending';
     return state;
@@ -64,6 +71,8 @@ export function sameState(a: CellState, b: CellState): boolean {
     a.error?.message === b.error?.message &&
     a.error?.column === b.error?.column &&
     a.clauses.join('\n') === b.clauses.join('\n') &&
-    a.reads.join(',') === b.reads.join(',')
+    a.reads.join(',') === b.reads.join(',') &&
+    a.figure === b.figure &&
+    a.sweep === b.sweep
   );
 }

@@ -4,9 +4,9 @@
 // on it. Observers turn values and errors into CellStates for the view.
 
 import { Runtime, RuntimeError, type Module, type Variable } from '@observablehq/runtime';
-import type { CalcDocument, Cell } from '../document';
+import type { CalcDocument, Cell, SweepCell } from '../document';
 import { cellName } from '../document';
-import type { CellState, Engine } from '../engine-types';
+import type { CellState, Engine, WhatIfOutcome } from '../engine-types';
 import { CellError } from '../formula/cell-error';
 import { structuralProblem, type CompileScope, type NameInfo } from '../formula/compile';
 import { columnOf, parseFormula, symbolNames } from '../formula/parse';
@@ -16,6 +16,11 @@ import type { LibFunction } from '../library/types';
 import { BUILTINS } from '../formula/builtins';
 import { checkProgram, formulaProgram, inputProgram, type CellProgram } from './cell-program';
 import { buildState, sameState } from './cell-state';
+// Figure and sweep kinds (runtime/figures): their programs and the what-if evaluator.
+import { figureLibrary } from '../figures/functions';
+import { figureProgram } from './figure-program';
+import { sweepProgram, type SweepCellInfo } from './sweep-program';
+import { outcomeOf, WhatIf, type WhatIfGraph } from './what-if';
 
 export interface EngineOptions {
   functions?: readonly LibFunction[];
@@ -46,6 +51,8 @@ class DocEngine implements Engine {
   private owners = new Map<string, string[]>();
   private readonly functions: ReadonlyMap<string, LibFunction>;
   private readonly functionNames: ReadonlySet<string>;
+  /** The library plus the figure functions, which only figure cells may call. */
+  private readonly figureFunctions: ReadonlyMap<string, LibFunction>;
   private readonly listeners = new Set<(changed: string[]) => void>();
   private readonly changed = new Set<string>();
   private busyCount = 0;
@@ -59,7 +66,8 @@ class DocEngine implements Engine {
   constructor(doc: CalcDocument, options: EngineOptions) {
     const fns = options.functions ?? [];
     this.functions = new Map(fns.map((f) => [f.name, f]));
-    this.functionNames = new Set([...BUILTINS.keys(), ...this.functions.keys()]);
+    this.figureFunctions = new Map([...this.functions, ...figureLibrary.map((f) => [f.name, f] as const)]);
+    this.functionNames = new Set([...BUILTINS.keys(), ...this.figureFunctions.keys()]);
     this.doc = { meta: doc.meta, cells: [] };
     this.update(doc);
   }
@@ -308,6 +316,10 @@ class DocEngine implements Engine {
         return formulaProgram(cell, this.scopeFor(cell.expr));
       case 'check':
         return checkProgram(cell, this.scopeFor(cell.expr), (node) => this.unitOfNode(node));
+      case 'figure':
+        return figureProgram(cell, this.scopeFor(cell.expr, this.figureFunctions), (n) => this.unitOfName(n));
+      case 'sweep':
+        return sweepProgram(cell, (n) => this.sweepInfo(n), this.whatIfGraph);
       default:
         return fail(new CellError('not-allowed', 'this cell does not compute'));
     }
@@ -319,9 +331,9 @@ class DocEngine implements Engine {
     return cell?.label ? `cell ${i + 1} (${cell.label})` : `cell ${i + 1}`;
   }
 
-  private scopeFor(source: string): CompileScope {
+  private scopeFor(source: string, functions: ReadonlyMap<string, LibFunction> = this.functions): CompileScope {
     return {
-      functions: this.functions,
+      functions,
       isCell: (name) => this.owners.has(name),
       names: () => this.owners.keys(),
       lookup: (name): NameInfo | undefined => {
@@ -335,6 +347,42 @@ class DocEngine implements Engine {
         return { key: slot.cell.id, type, unwrap: slot.cell.kind === 'check' };
       },
     };
+  }
+
+  /** Display unit of the cell of this name ('' when none or unknown). */
+  private unitOfName(name: string): string {
+    const owner = this.owners.get(name)?.[0];
+    return owner ? this.slots.get(owner)?.program?.unit ?? '' : '';
+  }
+
+  private sweepInfo(name: string): SweepCellInfo | undefined {
+    const owners = this.owners.get(name);
+    if (!owners || owners.length !== 1) return undefined;
+    const slot = this.slots.get(owners[0])!;
+    return { id: slot.cell.id, kind: slot.cell.kind, program: slot.program };
+  }
+
+  private readonly whatIfGraph: WhatIfGraph = {
+    program: (id) => this.slots.get(id)?.program,
+    nameOf: (id) => {
+      const slot = this.slots.get(id);
+      return (slot && cellName(slot.cell)) ?? id;
+    },
+  };
+
+  whatIf(input: string, values: readonly (number | string | boolean)[], outputs: readonly string[]): Record<string, WhatIfOutcome>[] {
+    const inp = this.sweepInfo(input);
+    if (!inp || inp.kind !== 'input') throw new Error(`"${input}" is not the name of an input cell`);
+    const outs = outputs.map((name) => {
+      const info = this.sweepInfo(name);
+      if (!info) throw new Error(`"${name}" is not the name of any cell`);
+      return { name, info };
+    });
+    const w = new WhatIf(this.whatIfGraph, inp.id);
+    return values.map((v) => {
+      const got = w.at(v, outs.map((o) => o.info.id));
+      return Object.fromEntries(outs.map((o, k) => [o.name, outcomeOf(got[k], o.info.kind === 'check')]));
+    });
   }
 
   /** Display unit for one side of a check: the unit of the cell it names, if it is a bare name. */
@@ -467,12 +515,17 @@ function samePlaces(prev: readonly Cell[], next: readonly Cell[]): number[] | un
 }
 
 function refsOf(cell: Cell): string[] {
-  if (cell.kind !== 'formula' && cell.kind !== 'check') return [];
+  if (cell.kind === 'sweep') return sweepRefs(cell);
+  if (cell.kind !== 'formula' && cell.kind !== 'check' && cell.kind !== 'figure') return [];
   try {
     return symbolNames(parseFormula(cell.expr));
   } catch {
     return [];
   }
+}
+
+function sweepRefs(cell: SweepCell): string[] {
+  return [...new Set([cell.input, ...cell.outputs].filter((n) => n !== ''))];
 }
 
 function sameCell(a: Cell, b: Cell): boolean {

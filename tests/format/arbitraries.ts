@@ -76,7 +76,26 @@ const check = fc.record(
   { ...opts, requiredKeys: ['kind', 'expr'] },
 );
 
-const cellWithoutId = fc.oneof(section, note, input, formula, check);
+const figure = fc.record(
+  { kind: fc.constant('figure' as const), expr: anyText, label: anyText, clause: anyText },
+  { ...opts, requiredKeys: ['kind', 'expr'] },
+);
+const sweep = fc.record(
+  {
+    kind: fc.constant('sweep' as const),
+    input: cellName,
+    from: anyText,
+    to: anyText,
+    steps: fc.integer(),
+    // Always present; an empty list is written as no lines and reads back as [].
+    outputs: fc.array(cellName, { maxLength: 3 }),
+    label: anyText,
+    clause: anyText,
+  },
+  { ...opts, requiredKeys: ['kind', 'input', 'from', 'to', 'outputs'] },
+);
+
+const cellWithoutId = fc.oneof(section, note, input, formula, check, figure, sweep);
 
 export const cells: fc.Arbitrary<Cell[]> = fc
   .array(cellWithoutId, { maxLength: 8 })

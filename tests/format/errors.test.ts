@@ -79,8 +79,8 @@ describe('title block', () => {
 
 describe('block headers', () => {
   it('unknown keyword: reported, its indented lines skipped silently', () => {
-    expect(oneError(['loadtrace 1', '', 'figure f1  plan.svg', '  label Plan', '  | text'])).toEqual({
-      line: 3, column: 1, message: expect.stringMatching(/unknown keyword "figure"/),
+    expect(oneError(['loadtrace 1', '', 'diagram f1  plan.svg', '  label Plan', '  | text'])).toEqual({
+      line: 3, column: 1, message: expect.stringMatching(/unknown keyword "diagram"/),
     });
   });
 

@@ -4,10 +4,12 @@
 import type { Cell } from '../../document';
 import type { KindFormat, KindTable } from '../types';
 import { checkFormat } from './check';
+import { figureFormat } from './figure';
 import { formulaFormat } from './formula';
 import { inputFormat } from './input';
 import { noteFormat } from './note';
 import { sectionFormat } from './section';
+import { sweepFormat } from './sweep';
 
 export const KIND_FORMATS: KindTable = {
   section: sectionFormat,
@@ -15,6 +17,8 @@ export const KIND_FORMATS: KindTable = {
   input: inputFormat,
   formula: formulaFormat,
   check: checkFormat,
+  figure: figureFormat,
+  sweep: sweepFormat,
 };
 
 /** The format for a kind keyword, or undefined for a word that is no cell kind. */

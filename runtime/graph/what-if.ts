@@ -1,0 +1,89 @@
+// What if an input had another value? Evaluates the compiled cell programs directly,
+// upstream first, with the input overridden — never touching the reactive graph, so the
+// document and the running engine stay as they are. Cells that do not depend on the
+// input are computed once and shared by every point.
+
+import type { WhatIfOutcome } from '../engine-types';
+import type { CellProgram, CheckResult } from './cell-program';
+
+/** What the evaluator needs from the engine: programs by cell id, and names. */
+export interface WhatIfGraph {
+  program(id: string): CellProgram | undefined;
+  /** A cell's name for messages (its id when it has none). */
+  nameOf(id: string): string;
+}
+
+export type Outcome = { ok: true; value: unknown } | { ok: false; error: string };
+
+export type { WhatIfOutcome };
+
+export class WhatIf {
+  private readonly tainted = new Map<string, boolean>();
+  private readonly stable = new Map<string, Outcome>();
+
+  constructor(private readonly graph: WhatIfGraph, private readonly inputId: string) {}
+
+  /** The raw runtime value of each target with the input set to `value` (SI number, text or boolean). */
+  at(value: unknown, targets: readonly string[]): Outcome[] {
+    const memo = new Map<string, Outcome>([[this.inputId, { ok: true, value }]]);
+    return targets.map((id) => this.evaluate(id, memo, new Set()));
+  }
+
+  private dependsOnInput(id: string, visiting: Set<string>): boolean {
+    if (id === this.inputId) return true;
+    const known = this.tainted.get(id);
+    if (known !== undefined) return known;
+    if (visiting.has(id)) return false;
+    visiting.add(id);
+    const p = this.graph.program(id);
+    const t = !!p && p.inputs.some((i) => this.dependsOnInput(i, visiting));
+    visiting.delete(id);
+    this.tainted.set(id, t);
+    return t;
+  }
+
+  private evaluate(id: string, memo: Map<string, Outcome>, visiting: Set<string>): Outcome {
+    const store = this.dependsOnInput(id, new Set()) ? memo : this.stable;
+    const hit = store.get(id);
+    if (hit) return hit;
+    const p = this.graph.program(id);
+    let out: Outcome;
+    if (!p || visiting.has(id)) {
+      out = { ok: false, error: `${this.graph.nameOf(id)} does not compute` };
+    } else {
+      visiting.add(id);
+      const args: unknown[] = [];
+      let broken: Outcome | undefined;
+      for (const i of p.inputs) {
+        const o = this.evaluate(i, memo, visiting);
+        if (!o.ok) {
+          broken = { ok: false, error: `reads ${this.graph.nameOf(i)}, which has an error (${o.error})` };
+          break;
+        }
+        args.push(o.value);
+      }
+      visiting.delete(id);
+      out = broken ?? run(p, args);
+    }
+    store.set(id, out);
+    return out;
+  }
+}
+
+function run(p: CellProgram, args: unknown[]): Outcome {
+  try {
+    return { ok: true, value: p.definition(...args) };
+  } catch (e) {
+    return { ok: false, error: e instanceof Error ? e.message : String(e) };
+  }
+}
+
+/** A raw runtime value as people read it: a check gives its ratio (or condition) and pass. */
+export function outcomeOf(o: Outcome, isCheck: boolean): WhatIfOutcome {
+  if (!o.ok) return { error: o.error };
+  if (isCheck) {
+    const r = o.value as CheckResult;
+    return { value: r.value, pass: r.pass };
+  }
+  return { value: o.value as number | string | boolean };
+}
