@@ -5,21 +5,29 @@ import { emptyMeta, type CalcDocument, type Cell, type DocMeta } from '../docume
 import { kindFormat } from './kinds/index';
 import { FORMAT_TAG, FORMAT_VERSION, metaField } from './meta';
 import { decodeValue, isCellId } from './quote';
-import type { FormatError, KindFormat } from './types';
+import { ReviewCollector, reviewBlockFormat } from './review/index';
+import type { ReviewBlockFormat } from './review/block';
+import type { AttrSpec, BodySpec, FormatError, KindFormat } from './types';
 
 export interface ParseResult {
   doc: CalcDocument;
   errors: FormatError[];
 }
 
-/** A cell block being read. A broken one is still read to the end, to report every fault. */
+/** A block being read (a cell, or a review block). A broken one is still read to the end, to report every fault. */
 interface Draft {
-  format: KindFormat<Cell>;
+  /** Kind keyword, for messages. */
+  kind: string;
+  attrs: Pick<AttrSpec<Cell>, 'key' | 'repeatable' | 'read'>[];
+  text?: Pick<BodySpec<Cell>, 'read'>;
+  /** The cell (or review item) the lines fill in. */
   cell: Cell;
   broken: boolean;
   /** Attribute key → line it first appeared on. */
   seen: Map<string, number>;
   body: string[];
+  /** Stores the finished block. */
+  keep(): void;
 }
 
 const firstWord = (text: string): string => /^[^ \t]*/.exec(text)![0];
@@ -32,6 +40,7 @@ class Reader {
   readonly errors: FormatError[] = [];
   readonly meta: DocMeta = emptyMeta();
   readonly cells: Cell[] = [];
+  readonly review = new ReviewCollector();
   private readonly metaLines = new Map<string, number>();
   private readonly ids = new Map<string, number>();
   /** The current block: a draft, 'skip' after a header we could not read, null between blocks. */
@@ -69,7 +78,9 @@ class Reader {
     const word = firstWord(text);
     const field = metaField(word);
     const format = kindFormat(word);
+    const reviewFormat = format ? undefined : reviewBlockFormat(word);
     if (format) this.readCellHeader(n, text, word, format);
+    else if (reviewFormat) this.readReviewHeader(n, text, word, reviewFormat);
     else if (field) this.readMeta(n, text, word, field);
     else {
       this.report(n, 1, word === FORMAT_TAG
@@ -114,13 +125,34 @@ class Reader {
     const tailAt = skipBlanks(text, idAt + id.length);
     const head = format.header.read(id, text.slice(tailAt), tailAt + 1);
     if (!head.ok) return this.report(n, head.column, head.message);
-    const draft: Draft = { format, cell: head.cell, broken: false, seen: new Map(), body: [] };
+    const cell = head.cell;
+    const draft: Draft = {
+      kind: format.kind, attrs: format.attrs, text: format.body, cell, broken: false, seen: new Map(), body: [],
+      keep: () => this.cells.push(cell),
+    };
     const first = this.ids.get(id);
     if (first !== undefined) {
       this.report(n, idAt + 1, `duplicate id "${id}" (first on line ${first})`);
       draft.broken = true;
     } else this.ids.set(id, n);
     this.block = draft;
+  }
+
+  /** `issue`, `remark`, `reply`, `signoff`: same layout as a cell block, own ids (FORMAT.md, "Review"). */
+  private readReviewHeader(n: number, text: string, word: string, format: ReviewBlockFormat<unknown>): void {
+    this.cellSeen = true;
+    this.block = 'skip';
+    const idAt = skipBlanks(text, word.length);
+    if (idAt === text.length) return this.report(n, word.length + 2, `missing id after "${word}"`);
+    const id = /^[^ \t]*/.exec(text.slice(idAt))![0];
+    if (!isCellId(id)) return this.report(n, idAt + 1, `bad id "${id}" (use letters, digits, _ and -)`);
+    const tailAt = skipBlanks(text, idAt + id.length);
+    const opened = this.review.open({ keyword: word, id, idColumn: idAt + 1, tail: text.slice(tailAt), tailColumn: tailAt + 1, line: n });
+    if (!opened.ok) return this.report(n, opened.column, opened.message);
+    this.block = {
+      kind: word, attrs: format.attrs as unknown as Draft['attrs'], text: format.text as unknown as Draft['text'],
+      cell: opened.target as Cell, broken: false, seen: new Map(), body: [], keep: opened.keep,
+    };
   }
 
   private readBodyLine(n: number, text: string): void {
@@ -141,8 +173,7 @@ class Reader {
       block.broken = true;
     };
     if (content.startsWith('|')) {
-      const body = block.format.body;
-      if (!body) return fail(column, `a ${block.format.kind} has no text lines (| lines belong in a note)`);
+      if (!block.text) return fail(column, `a ${block.kind} has no text lines (| lines belong in a note)`);
       if (content === '|') {
         block.body.push('');
         return;
@@ -159,10 +190,10 @@ class Reader {
       return;
     }
     const key = firstWord(content);
-    const attr = block.format.attrs.find((a) => a.key === key);
+    const attr = block.attrs.find((a) => a.key === key);
     if (!attr) {
-      const keys = block.format.attrs.map((a) => a.key).join(', ');
-      return fail(column, `"${key}" is not an attribute of a ${block.format.kind} (expected ${keys})`);
+      const keys = block.attrs.map((a) => a.key).join(', ');
+      return fail(column, `"${key}" is not an attribute of a ${block.kind} (expected ${keys})`);
     }
     const first = block.seen.get(key);
     if (first !== undefined && !attr.repeatable) return fail(column, `duplicate "${key}" (first on line ${first})`);
@@ -178,8 +209,8 @@ class Reader {
     const block = this.block;
     this.block = null;
     if (block === null || block === 'skip' || block.broken) return;
-    block.format.body?.read(block.cell, block.body);
-    this.cells.push(block.cell);
+    block.text?.read(block.cell, block.body);
+    block.keep();
   }
 }
 
@@ -194,5 +225,6 @@ export function parse(text: string): ParseResult {
     // Last line of defence: the fuzz tests assert this message never appears.
     reader.errors.push({ line: 1, column: 1, message: `internal error in the reader: ${String(e)}` });
   }
-  return { doc: { meta: reader.meta, cells: reader.cells }, errors: reader.errors };
+  const review = reader.review.result();
+  return { doc: review ? { meta: reader.meta, cells: reader.cells, review } : { meta: reader.meta, cells: reader.cells }, errors: reader.errors };
 }

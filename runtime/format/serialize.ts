@@ -4,6 +4,7 @@ import type { CalcDocument, Cell } from '../document';
 import { keyWidth, kindFormat } from './kinds/index';
 import { FORMAT_TAG, FORMAT_VERSION, META_KEY_WIDTH, META_LINES } from './meta';
 import { encodeNoteLine, encodeValue, isCellId } from './quote';
+import { reviewBlocks } from './review/index';
 
 /** The lines of one cell block (no blank line around it). */
 export function serializeCell(cell: Cell): string[] {
@@ -28,5 +29,6 @@ export function serialize(doc: CalcDocument): string {
     if (typeof value === 'string' && value !== '') lines.push(word.padEnd(META_KEY_WIDTH) + encodeValue(value));
   }
   for (const cell of doc.cells) lines.push('', ...serializeCell(cell));
+  for (const block of reviewBlocks(doc.review)) lines.push('', ...block);
   return lines.join('\n') + '\n';
 }

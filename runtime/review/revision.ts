@@ -25,7 +25,7 @@ export function snapshot(doc: CalcDocument, results: ResultLookup): Baseline {
       if (name !== undefined) r.name = name;
       if (s?.display && s.status !== 'error') {
         r.value = s.display.value;
-        r.unit = s.display.unit;
+        if (s.display.unit !== '') r.unit = s.display.unit; // a pure number has none
         r.text = s.display.text;
       }
       if (s?.ratio !== undefined && s.status !== 'error') r.ratio = s.ratio;

@@ -4,6 +4,7 @@
 
 import fc from 'fast-check';
 import type { CalcDocument, Cell, DocMeta } from '../../runtime/document';
+import { reviewStates } from '../review/arbitraries';
 
 const tricky = fc.constantFrom(
   ' ', '  ', '"', '\\', '|', '=', ' = ', '#', '# ', '\n', '\r', '\r\n', '\t', '\u0000', '\u007f',
@@ -118,4 +119,8 @@ export const meta: fc.Arbitrary<DocMeta> = fc.record(
   opts,
 );
 
-export const documents: fc.Arbitrary<CalcDocument> = fc.record({ meta, cells }, opts);
+/** About half the documents carry a review (revisions, remarks, sign-offs: FORMAT.md "Review"). */
+export const documents: fc.Arbitrary<CalcDocument> = fc.record(
+  { meta, cells, review: reviewStates(anyText) },
+  { ...opts, requiredKeys: ['meta', 'cells'] },
+);
