@@ -87,7 +87,7 @@ export function renderPunching(spec: PunchingSpec): string {
   // Key.
   const ky = H - 38;
   body += line(14, ky, 44, ky, 'crit') + text(50, ky + 4, `critical section at d/2 (d = ${show(spec, 'd', 'length', d)}): bo = ${show(spec, 'c1', 'length', spec.bo)}`, '');
-  if (drop) body += line(14, ky + 18, 44, ky + 18, 'crit2') + text(50, ky + 22, `section at d_slab/2 outside the drop panel (d_slab = ${show(spec, 'd_slab', 'length', drop.dSlab)}): bo = ${show(spec, 'x1', 'length', drop.boOuter)}`, '');
+  if (drop) body += line(14, ky + 18, 44, ky + 18, 'crit2') + text(50, ky + 22, `section at d_slab/2 outside the drop panel (d_slab = ${show(spec, 'd_slab', 'length', drop.dSlab)}): bo = ${show(spec, 'c1', 'length', drop.boOuter)}`, '');
   else if (pos !== 'interior') body += text(14, ky + 22, 'The section stops at the slab edge: free sides are not counted.', 'small');
 
   return svgDoc(W, H, `Punching plan, ${pos} column`, body, { 'data-scale': f.scale, 'data-figure': 'punching' });

@@ -129,7 +129,7 @@ function panel(r: SweepResult, s: SweepSeries, top: number, X: (si: number) => n
     s.crossings.forEach((c, i) => {
       const cx = X(c);
       g += line(cx, top, cx, bottom, 'one', { 'data-role': 'crossing' });
-      g += text(cx + 4, top + 12 + 12 * i, `ratio = 1 at ${fmtX(r, c)}`, 'small', { 'data-role': 'crossing-label' });
+      g += text(cx + 4, top + 24 + 12 * i, `ratio = 1 at ${fmtX(r, c)}`, 'small', { 'data-role': 'crossing-label' });
     });
     if (s.firstFail !== undefined) {
       const fx0 = X(r.xs[s.firstFail]);

@@ -31,7 +31,7 @@ function factorOf(unit: string): number | undefined {
  * A quantity in SI shown for people: in the unit recorded for parameter `param`
  * when there is one, else in the system's usual unit for `q`.
  */
-export function show(spec: FigureBase, param: string, q: Quantity, si: number, sig = 3): string {
+export function show(spec: FigureBase, param: string, q: Quantity, si: number, sig = 4): string {
   const own = spec.units[param];
   const f = own ? factorOf(own) : undefined;
   if (own && f) return `${formatNumber(si / f, sig)} ${own}`;
