@@ -10,6 +10,8 @@ import type { CellState, Engine } from '../../runtime/engine-types';
 import { setInputValue } from '../../runtime/edit/index';
 import { parse, serialize } from '../../runtime/format/index';
 import { runCalc } from '../../runtime/cli/main';
+import { parseFormula } from '../../runtime/formula/parse';
+import { libraryFunctions } from '../../runtime/library/index';
 
 export const CAUTION = "Results are an aid to, not a substitute for, a licensed engineer's judgement; local codes govern.";
 
@@ -107,7 +109,38 @@ export function expectWellFormed(file: string): CalcDocument {
   const again = parse(serialize(doc));
   expect(again.errors).toEqual([]);
   expect(again.doc).toEqual(doc);
+  if (doc.cells.some((c) => c.kind === 'input' && c.name === 'edition')) {
+    expect(expectEditionPassedThrough(doc)).toBeGreaterThan(0);
+  }
   return doc;
+}
+
+/**
+ * With an `edition` input, every call of a library function that takes an edition passes
+ * that input (so switching the edition reaches every clause that depends on it).
+ * Returns the number of such calls.
+ */
+export function expectEditionPassedThrough(doc: CalcDocument): number {
+  const takesEdition = new Map<string, number>();
+  for (const f of libraryFunctions) {
+    const i = f.params.findIndex((p) => p.name === 'edition');
+    if (i >= 0) takesEdition.set(f.name, i);
+  }
+  let calls = 0;
+  const missing: string[] = [];
+  for (const cell of doc.cells) {
+    if (cell.kind !== 'formula' && cell.kind !== 'check') continue;
+    (parseFormula(cell.expr) as any).traverse((n: any) => {
+      if (n.type !== 'FunctionNode') return;
+      const i = takesEdition.get(n.fn.name);
+      if (i === undefined) return;
+      calls++;
+      const arg = n.args[i];
+      if (arg?.type !== 'SymbolNode' || arg.name !== 'edition') missing.push(`${cell.id}: ${n.fn.name}`);
+    });
+  }
+  expect(missing).toEqual([]);
+  return calls;
 }
 
 /** `npm run calc -- docs-templates/FILE --json` in-process: exit code and the JSON rows. */

@@ -61,11 +61,11 @@ describe('spread-footing.lt at its defaults (ACI 318-19)', () => {
     near(run.num('d_L'), dL);
     near(run.num('d_B'), 23.75);
     near(run.num('bo'), bo); // 168.6 in
-    near(run.num('Vu2'), Vu2 / 1000); // 317.5 kip
+    near(run.num('Vu'), Vu2 / 1000); // 317.5 kip
     // λs = √(2/(1 + 2.4156)) = 0.7653 → vc = 4·0.7653·63.25 = 193.6 psi
     near(run.num('vc'), 4 * lamS(d) * sqrtFc);
     near(run.num('vc'), 193.6);
-    near(run.num('phiVc2'), (0.75 * 4 * lamS(d) * sqrtFc * bo * d) / 1000); // 591.4 kip
+    near(run.num('phiVc'), (0.75 * 4 * lamS(d) * sqrtFc * bo * d) / 1000); // 591.4 kip
     near(run.num('Mu_L'), MuL / 1000); // 332.4 kip·ft
     near(run.num('As_L'), AsL);
     near(run.num('As_L'), 5.443); // 0.0018·108·28
@@ -106,7 +106,7 @@ describe('spread-footing.lt with edition = 318-14', () => {
     const run = await runTemplate(FILE, { edition: '318-14' });
     expectAllPass(run);
     near(run.num('vc'), 4 * sqrtFc); // 253.0 psi
-    near(run.num('phiVc2'), (0.75 * 4 * sqrtFc * bo * d) / 1000); // 772.9 kip
+    near(run.num('phiVc'), (0.75 * 4 * sqrtFc * bo * d) / 1000); // 772.9 kip
     near(run.num('phiVc_L'), phiVc1(B, dL, rhoL, '318-14') / 1000); // 251.7 kip
     near(run.num('phiVc_L'), 251.7);
     near(run.num('phiVc_B'), phiVc1(L, dB, rhoB, '318-14') / 1000); // 270.4 kip
