@@ -8,19 +8,27 @@ import { createEngine } from '../engine';
 import { parse } from '../format/index';
 import { setInputValue } from '../edit/index';
 import { parseArgs, UsageError, type CalcArgs } from './args';
+import { printDiff } from './diff';
 import { exitCode, resultRows, table } from './report';
 
-export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
+/** A file's document, its faults reported through `err`; undefined when it cannot be read at all. */
+async function loadDocument(file: string, err: (s: string) => void): Promise<{ doc: CalcDocument; broken: boolean } | undefined> {
   let text: string;
   try {
-    text = readFileSync(args.file, 'utf8');
+    text = readFileSync(file, 'utf8');
   } catch (e) {
-    err(`cannot read ${args.file}: ${(e as Error).message}`);
-    return 2;
+    err(`cannot read ${file}: ${(e as Error).message}`);
+    return undefined;
   }
-  const { doc: parsed, errors } = parse(text);
-  for (const e of errors) err(`${args.file}:${e.line}:${e.column}: ${e.message}`);
-  let doc: CalcDocument = parsed;
+  const { doc, errors } = parse(text);
+  for (const e of errors) err(`${file}:${e.line}:${e.column}: ${e.message}`);
+  return { doc, broken: errors.length > 0 };
+}
+
+export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
+  const loaded = await loadDocument(args.file, err);
+  if (!loaded) return 2;
+  let doc: CalcDocument = loaded.doc;
   for (const { name, value } of args.sets) {
     const cell = doc.cells.find((c) => c.kind === 'input' && c.name === name);
     if (!cell) {
@@ -28,6 +36,12 @@ export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s:
       return 2;
     }
     doc = keepDisplayUnit(setInputValue(doc, cell.id, value), cell);
+  }
+  if (args.diffWith !== undefined) {
+    const other = await loadDocument(args.diffWith, err);
+    if (!other) return 2;
+    await printDiff({ name: args.file, doc }, { name: args.diffWith, doc: other.doc }, args.json, out);
+    return loaded.broken || other.broken ? 2 : 0;
   }
   const engine = createEngine(doc);
   await engine.settled();
@@ -43,7 +57,7 @@ export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s:
   }
   out(args.json ? JSON.stringify(rows, null, 2) : table(rows, engine));
   engine.dispose();
-  return errors.length ? 2 : exitCode(rows);
+  return loaded.broken ? 2 : exitCode(rows);
 }
 
 /** An override in other units keeps showing the unit the document showed (5000 psi stays psi). */
