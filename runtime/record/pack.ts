@@ -3,6 +3,7 @@
 // as embedded data with its SHA-256, the print styles, and the static rendering.
 
 import type { DocMeta } from '../document';
+import { appBlock, unpackApp } from './app-payload';
 import { encodeDataBlock, escapeHtml } from './escape';
 import { DOC_ID, DOC_TYPE, FENCES, RECORD_VERSION, recordCsp, runnableScripts, shellOf } from './layout';
 import { sha256Base64, sha256Hex } from './seal';
@@ -47,7 +48,16 @@ function insertAt(html: string, tag: string, what: string, after: boolean, name:
 export async function pack(input: PackInput): Promise<string> {
   const shell = shellOf(input.shell);
   if (/<script\b[^>]*\bsrc\s*=/i.test(shell)) throw new PackError('the app shell loads a script from a file; a record needs every script inline');
-  const hashes = await Promise.all(runnableScripts(shell).map((s) => sha256Base64(s.code)));
+  const code = runnableScripts(shell).map((s) => s.code);
+  const packed = appBlock(shell);
+  if (packed !== undefined) {
+    try {
+      code.push(await unpackApp(packed));
+    } catch (e) {
+      throw new PackError(`the app code in the shell cannot be unpacked (${(e as Error).message})`);
+    }
+  }
+  const hashes = await Promise.all(code.map((c) => sha256Base64(c)));
   const digest = input.digest ?? (await sha256Hex(input.docText));
   const head = `${FENCES.head[0]}<meta charset="utf-8">
 <meta http-equiv="Content-Security-Policy" content="${escapeHtml(recordCsp([...new Set(hashes)]))}">

@@ -78,14 +78,15 @@ export const STATIC_CSS = `
 .lt-cstat { font-weight: 600; }
 .lt-foot { margin-top: 1.4rem; font: 11px system-ui, sans-serif; color: var(--lt-soft); overflow-wrap: anywhere; }
 
-/* A record page before (or without) its script: only the static rendering shows. */
-html.lt-record:not(.lt-live) body > :not(#lt-static) { display: none !important; }
-html.lt-record.lt-live #lt-static { display: none; }
+/* A record page before (or without) its script: only the static rendering shows. The
+   app marks the page lt-live once it runs; printing always prints the static sheets. */
+html:has(> body > #lt-static):not(.lt-live) body > :not(#lt-static) { display: none !important; }
+html.lt-live > body > #lt-static { display: none; }
 
 @media print {
-  html.lt-record, html.lt-record body { background: #fff !important; padding: 0 !important; margin: 0 !important; }
-  html.lt-record body > :not(#lt-static) { display: none !important; }
-  html.lt-record #lt-static { display: block !important; }
+  html:has(> body > #lt-static), html:has(> body > #lt-static) > body { background: #fff !important; padding: 0 !important; margin: 0 !important; }
+  html:has(> body > #lt-static) > body > :not(#lt-static) { display: none !important; }
+  html > body > #lt-static { display: block !important; }
   .lt-static { max-width: none; margin: 0; padding: 0; border: 0; box-shadow: none; background: #fff; font-size: 10pt; }
   .lt-static > .lt-tb, .lt-howto, .lt-static .lt-warning { display: none; }
   .lt-caution { font-size: 8.5pt; background: none; }

@@ -1,0 +1,83 @@
+// Build plugins for the record shell: the app as ONE html file that runs from file://
+// under the record's Content-Security-Policy (inline code, fonts as data: URIs).
+
+import { gzipSync } from 'node:zlib';
+import type { Plugin } from 'vite';
+import { APP_ID, APP_TYPE, LOADER } from '../../runtime/record/app-payload';
+
+/** KaTeX's CSS lists woff2, woff and ttf for every font; browsers all take woff2, so the others go. */
+export function katexWoff2Only(): Plugin {
+  return {
+    name: 'loadtrace-katex-woff2-only',
+    enforce: 'pre',
+    transform(code, id) {
+      if (!/katex(\.min)?\.css$/.test(id.split('?')[0])) return undefined;
+      return { code: code.replace(/,\s*url\([^)]*\.(?:woff|ttf)\)\s*format\(["'](?:woff|truetype)["']\)/g, ''), map: null };
+    },
+  };
+}
+
+/** The page starts from cells/record/entry.ts, which snapshots the page before the app runs. */
+export function recordEntry(): Plugin {
+  return {
+    name: 'loadtrace-record-entry',
+    transformIndexHtml: {
+      order: 'pre',
+      handler: (html) => html.replace(/(<script\b[^>]*\bsrc=["'])\/?cells\/main\.ts(["'])/, '$1/cells/record/entry.ts$2'),
+    },
+  };
+}
+
+/**
+ * Code that must not appear raw inside an inline <script>: "</script" would end it and
+ * "<!--" changes how the parser reads it. Both are only ever inside strings, regular
+ * expressions or comments in built code, where these escapes mean the same.
+ */
+export function scriptSafe(code: string): string {
+  return code.replace(/<\/(script)/gi, '<\\/$1').replace(/<!--/g, '\\x3C!--');
+}
+
+/**
+ * Puts the CSS inline, and the JS chunk as a gzip+base64 data block with a small
+ * loader that runs it (a third of the size: the record must stay under 1.5 MB), at
+ * the end of the body; names the file record-shell.html.
+ */
+export function inlineAll(): Plugin {
+  return {
+    name: 'loadtrace-inline-all',
+    enforce: 'post',
+    generateBundle(_options, bundle) {
+      const html = Object.values(bundle).find((f) => f.type === 'asset' && f.fileName.endsWith('.html'));
+      if (!html || html.type !== 'asset') return;
+      let page = String(html.source);
+      const scripts: string[] = [];
+      for (const [name, file] of Object.entries(bundle)) {
+        if (file.type === 'chunk') {
+          const tag = new RegExp(`<script\\b[^>]*\\bsrc=["'][^"']*${escapeRe(name)}["'][^>]*></script>\\s*`);
+          if (!tag.test(page)) continue;
+          page = page.replace(tag, '');
+          // Run as a classic script in an async function (Chromium may not run a large inline
+          // module added by script under a hash-only CSP; a classic script it runs every time).
+          if (/\bimport\.meta\b|^(?:import|export)\s*[{*"'`]/m.test(file.code)) this.error('the record bundle must be one chunk with no import/export');
+          const classic = `(async () => {'use strict';\n${file.code}\n})().catch((e) => console.error('Loadtrace could not start:', e));`;
+          const packed = gzipSync(Buffer.from(scriptSafe(classic), 'utf8'), { level: 9 }).toString('base64');
+          scripts.push(`<script type="${APP_TYPE}" id="${APP_ID}" data-encoding="gzip base64">${packed}</script>`);
+          scripts.push(`<script type="module">${LOADER}</script>`);
+          delete bundle[name];
+        } else if (name.endsWith('.css')) {
+          const tag = new RegExp(`<link\\b[^>]*\\bhref=["'][^"']*${escapeRe(name)}["'][^>]*>`);
+          page = page.replace(tag, () => `<style>${String(file.source).replace(/<\/(style)/gi, '<\\/$1')}</style>`);
+          delete bundle[name];
+        }
+      }
+      page = page.replace(/<link\b[^>]*rel=["']modulepreload["'][^>]*>\s*/g, '');
+      page = page.replace(/<\/body>/i, () => `${scripts.join('\n')}\n</body>`);
+      delete bundle[html.fileName];
+      this.emitFile({ type: 'asset', fileName: 'record-shell.html', source: page });
+    },
+  };
+}
+
+function escapeRe(s: string): string {
+  return s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+}

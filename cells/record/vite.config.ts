@@ -1,0 +1,24 @@
+// `npm run build:record`: the app shell for calc records, as one file
+// (dist-record/record-shell.html). The app's own config is the base; this adds
+// inlining of code, styles and woff2 fonts, and the record entry point.
+
+import { defineConfig, mergeConfig, type ConfigEnv, type UserConfig } from 'vite';
+import base from '../../vite.config';
+import { inlineAll, katexWoff2Only, recordEntry } from './vite-plugin';
+
+export default defineConfig((env) => {
+  const given = base as UserConfig | ((e: ConfigEnv) => UserConfig);
+  const app = typeof given === 'function' ? given(env) : given;
+  return mergeConfig(app, {
+    plugins: [katexWoff2Only(), recordEntry(), inlineAll()],
+    build: {
+      outDir: 'dist-record',
+      emptyOutDir: true,
+      assetsInlineLimit: () => true,
+      cssCodeSplit: false,
+      modulePreload: false,
+      reportCompressedSize: false,
+      rolldownOptions: { output: { codeSplitting: false } },
+    },
+  } satisfies UserConfig);
+});
