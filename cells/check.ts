@@ -6,15 +6,18 @@ import type { CheckCell } from '../runtime/document';
 import { renameCell, setExpr } from '../runtime/edit/index';
 import { checkTex, nameTex, ratioText } from '../runtime/handcalc/index';
 import {
-  errorOf, escapeHtml, marginRefs, orThrow, renderError, renderLabel, renderNumber, renderRefs, statusOf,
+  errorOf, escapeHtml, marginRefs, prettyUnits, orThrow, renderError, renderLabel, renderNumber, renderRefs, statusOf,
   type CellKindModule, type CellViewBase, type ParsedSource,
 } from './kind';
-import { texHtml } from './tex';
+import { handCalcHtml } from './tex';
 
 export interface CheckView extends CellViewBase {
   kind: 'check';
   name?: string;
-  tex: string;
+  /** Symbol of a named check, or ''. */
+  symbol: string;
+  /** Condition, values and ratio, each a step of the line. */
+  steps: { rel: string; tex: string }[];
   ratio?: number;
   demand?: string;
   capacity?: string;
@@ -37,19 +40,23 @@ export const checkKind: CellKindModule<CheckCell, { name?: string; expr: string 
   bind(cell, ctx) {
     const state = ctx.state(cell.id);
     const t = checkTex(cell.expr, state, ctx.scope);
-    const head = cell.name ? `${nameTex(cell.name)}:\\;` : '';
+    const steps = [
+      { rel: '', tex: t.condition },
+      ...(t.substituted ? [{ rel: '\\Rightarrow', tex: t.substituted }] : []),
+      ...(t.ratio ? [{ rel: '\\quad', tex: t.ratio }] : []),
+    ];
     const verdict = state?.status === 'ok' ? 'pass' : state?.status === 'fail' ? 'fail' : undefined;
     return {
       id: cell.id, kind: 'check', status: statusOf(state), number: ctx.number, label: cell.label,
       refs: marginRefs(cell.clause, state), error: errorOf(state, cell.expr), name: cell.name,
-      tex: head + [t.condition, t.substituted && `\\Rightarrow\\; ${t.substituted}`, t.ratio].filter(Boolean).join('\\qquad '),
+      symbol: cell.name ? `${nameTex(cell.name)}:` : '', steps,
       ratio: state?.ratio, demand: state?.demand?.text, capacity: state?.capacity?.text, verdict,
     };
   },
 
   render(v) {
     return `${renderNumber(v.number)}<div class="cell-body">${renderLabel(v.label)}<div class="cell-math" data-act="open">${
-      texHtml(v.tex, true)}</div>${renderVerdict(v)}${renderError(v.error)}</div>${renderRefs(v.refs)}`;
+      handCalcHtml(v.symbol, v.steps)}</div>${renderVerdict(v)}${renderError(v.error)}</div>${renderRefs(v.refs)}`;
   },
 
   edit(doc, id, source) {
@@ -70,7 +77,7 @@ export function renderVerdict(v: CheckView): string {
       Number.isFinite(v.ratio) ? v.ratio.toFixed(3) : '999'}"><span class="ratio-fill" style="width:${pct.toFixed(1)}%"></span><span class="ratio-one"></span></span>`;
   }
   const dc = v.demand && v.capacity
-    ? `<span class="dc">demand ${escapeHtml(v.demand)} · capacity ${escapeHtml(v.capacity)}</span>`
+    ? `<span class="dc">demand ${escapeHtml(prettyUnits(v.demand))} · capacity ${escapeHtml(prettyUnits(v.capacity))}</span>`
     : '';
   return `<div class="verdict verdict-${v.verdict}"><span class="verdict-word"><span class="glyph" aria-hidden="true">${glyph}</span> ${word}</span>${ratio}${dc}</div>`;
 }

@@ -8,17 +8,15 @@ import {
   errorOf, orThrow, marginRefs, parseAssignment, renderError, renderLabel, renderNumber, renderRefs, statusOf,
   type CellKindModule, type CellViewBase, type ParsedSource,
 } from './kind';
-import { texHtml } from './tex';
+import { handCalcHtml } from './tex';
 
 export interface FormulaView extends CellViewBase {
   kind: 'formula';
   name: string;
-  /** The hand calc as TeX: one line, or one part a row when long. */
-  tex: string;
+  /** The hand calc as TeX: the symbol, then each step after an = sign. */
+  symbol: string;
+  parts: string[];
 }
-
-/** Beyond this many characters of formula the hand calc is set one step a row. */
-const LONG_FORMULA = 38;
 
 export const formulaKind: CellKindModule<FormulaCell, { name: string; expr: string }, FormulaView> = {
   kind: 'formula',
@@ -33,17 +31,16 @@ export const formulaKind: CellKindModule<FormulaCell, { name: string; expr: stri
   bind(cell, ctx) {
     const state = ctx.state(cell.id);
     const t = formulaTex(cell.name, cell.expr, state, ctx.scope);
-    const long = cell.expr.length > LONG_FORMULA && t.parts.length > 2;
     return {
       id: cell.id, kind: 'formula', status: statusOf(state), number: ctx.number, label: cell.label,
       refs: marginRefs(cell.clause, state), error: errorOf(state, cell.expr), name: cell.name,
-      tex: long ? t.aligned : t.line,
+      symbol: t.symbol, parts: t.parts,
     };
   },
 
   render: (v) =>
     `${renderNumber(v.number)}<div class="cell-body">${renderLabel(v.label)}<div class="cell-math" data-act="open">${
-      texHtml(v.tex, true)}</div>${renderError(v.error)}</div>${renderRefs(v.refs)}`,
+      handCalcHtml(v.symbol, v.parts.map((p) => ({ rel: '=', tex: p })))}</div>${renderError(v.error)}</div>${renderRefs(v.refs)}`,
 
   edit(doc, id, source) {
     const { name, expr } = orThrow(formulaKind.parse(source));

@@ -6,7 +6,7 @@ import type { InputCell } from '../runtime/document';
 import { renameCell, setInputValue } from '../runtime/edit/index';
 import { nameTex } from '../runtime/handcalc/index';
 import {
-  errorOf, escapeHtml, marginRefs, orThrow, parseAssignment, renderError, renderLabel, renderNumber, renderRefs,
+  errorOf, escapeHtml, marginRefs, prettyUnits, orThrow, parseAssignment, renderError, renderLabel, renderNumber, renderRefs,
   statusOf, type CellKindModule, type CellViewBase, type ParsedSource,
 } from './kind';
 import { texHtml } from './tex';
@@ -19,6 +19,8 @@ export interface InputView extends CellViewBase {
   value: string;
   /** As the engine shows it in the display unit, when that reads differently from the typed text. */
   shown?: string;
+  /** The shown value is the last good one, kept while the typed text is bad. */
+  stale?: boolean;
   choices?: string[];
   description?: string;
   range?: string;
@@ -49,6 +51,7 @@ export const inputKind: CellKindModule<InputCell, { name: string; value: string 
       refs: marginRefs(cell.clause, state), error: errorOf(state, cell.value),
       name: cell.name, symbolTex: nameTex(cell.name), value: cell.value,
       shown: shownText && squash(shownText) !== squash(cell.value) && !cell.choices ? shownText : undefined,
+      stale: state?.status === 'error' && shownText !== undefined,
       choices: cell.choices, description: cell.description, range,
     };
   },
@@ -61,7 +64,9 @@ export const inputKind: CellKindModule<InputCell, { name: string; value: string 
         v.choices.includes(v.value) ? '' : `<option selected>${escapeHtml(v.value)}</option>`}</select>`
       : `<input class="value-field" data-act="value" aria-label="${aria}" spellcheck="false" autocomplete="off" value="${
         escapeHtml(v.value)}" size="${Math.max(6, Math.min(28, v.value.length + 2))}">`;
-    const shown = v.shown ? `<span class="as-shown">= ${escapeHtml(v.shown)}</span>` : '';
+    const shown = !v.shown ? ''
+      : v.stale ? `<span class="as-shown stale">still computing with ${escapeHtml(prettyUnits(v.shown))}</span>`
+        : `<span class="as-shown">= ${escapeHtml(prettyUnits(v.shown))}</span>`;
     const about = v.description || v.range
       ? `<div class="cell-about">${escapeHtml(v.description ?? '')}${v.range ? ` <span class="range">(${escapeHtml(v.range)})</span>` : ''}</div>`
       : '';

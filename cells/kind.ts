@@ -74,6 +74,11 @@ export function escapeHtml(text: string): string {
   return text.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
 }
 
+/** A value with unit as plain text reads better with ² and · than with ^2 and *. */
+export function prettyUnits(text: string): string {
+  return text.replace(/\^2(?![0-9])/g, '²').replace(/\^3(?![0-9])/g, '³').replace(/\*/g, '·');
+}
+
 /** Columns in a `name = expr` source: where the expression starts (0-based offset). */
 export function exprOffset(source: string): number {
   const m = /^\s*[A-Za-z_][A-Za-z0-9_]*\s*=(?!=)\s*/.exec(source);

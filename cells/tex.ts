@@ -21,3 +21,16 @@ export function texHtml(tex: string, display = false): string {
   cache.set(key, html);
   return html;
 }
+
+/**
+ * A hand-calc line as a row of steps (`symbol = step = step ...`). Each step is its own
+ * piece of inline math, so a long line wraps between steps, and inside a step after
+ * an operator or a comma of a long call, instead of running off the sheet.
+ */
+export function handCalcHtml(symbol: string, steps: { rel: string; tex: string }[]): string {
+  const head = symbol ? `<span class="hc-sym">${texHtml(`\\displaystyle ${symbol}`)}</span>` : '';
+  const body = steps
+    .map((s) => `<span class="hc-step">${s.rel ? `<span class="hc-rel">${texHtml(s.rel)}</span>` : ''}${texHtml(`\\displaystyle ${s.tex}`)}</span>`)
+    .join('');
+  return `<div class="hc">${head}${body}</div>`;
+}

@@ -37,27 +37,61 @@ type Mode = 'symbolic' | 'values';
 function valueTex(d: DisplayValue | undefined, bracket: boolean): string {
   if (!d) return '{?}';
   const tex = quantityTex(d);
-  return bracket && needsBrackets(d) ? `\\left(${tex}\\right)` : `{${tex}}`;
+  return bracket ? `\\left(${tex}\\right)` : `{${tex}}`;
 }
+
+/**
+ * Whether a value put in place of `node` needs brackets to read right: as a factor,
+ * a power's base or after a minus sign, when it has a unit or is negative; in a
+ * sum, only when negative. Function arguments, fractions and whole sides never do.
+ */
+function bracketFor(node: MathNode, parents: Map<MathNode, MathNode | null>, d: DisplayValue | undefined): boolean {
+  if (!d || !needsBrackets(d)) return false;
+  const parent: any = parents.get(node);
+  if (!parent || parent.type !== 'OperatorNode') return false;
+  const negative = typeof d.value === 'number' && d.value < 0;
+  switch (parent.fn) {
+    case 'multiply':
+    case 'unaryMinus':
+    case 'unaryPlus':
+      return true;
+    case 'pow':
+      return parent.args[0] === node;
+    case 'add':
+    case 'subtract':
+      return negative && (parent.fn === 'subtract' || parent.args[0] !== node);
+    default:
+      return false;
+  }
+}
+
+/** Calls set as \operatorname{f}(a, b) with plain brackets, so a long call can break after a comma. */
+const BREAKABLE_CALLS = new Set(['min', 'max']);
 
 /** mathjs toTex options with our handler: names, units upright, library calls, values. */
 function texOptions(scope: HandCalcScope, mode: Mode, root: MathNode) {
+  const parents = new Map<MathNode, MathNode | null>();
+  root.traverse((n: MathNode, _path: string, parent: MathNode | null) => {
+    parents.set(n, parent);
+  });
   const handler = (node: any, options: any): string | undefined => {
     if (node.type === 'SymbolNode') {
       const name: string = node.name;
       if (scope.isCell(name)) {
         if (mode === 'symbolic') return nameTex(name);
-        return valueTex(scope.state(name)?.display, node !== root);
+        const d = scope.state(name)?.display;
+        return valueTex(d, node !== root && bracketFor(node, parents, d));
       }
       if (name in CONSTANTS) return `{${CONSTANTS[name]}}`;
       return `{\\mathrm{${name}}}`; // a unit
     }
-    if (node.type === 'FunctionNode' && !MATHJS_TEX.has(node.fn?.name)) {
+    if (node.type === 'FunctionNode' && (BREAKABLE_CALLS.has(node.fn?.name) || !MATHJS_TEX.has(node.fn?.name))) {
       const fname = String(node.fn?.name ?? node.name ?? 'f').replace(/_/g, '\\_');
-      const args = node.args.map((a: MathNode) => a.toTex(options)).join(',\\,');
-      return `\\operatorname{${fname}}\\left(${args}\\right)`;
+      const args = node.args.map((a: MathNode) => a.toTex(options)).join(',\\allowbreak\\,');
+      return `\\operatorname{${fname}}(${args})`;
     }
     if (node.type === 'ConstantNode' && typeof node.value === 'string') return textTex(node.value);
+    if (node.type === 'ConstantNode' && typeof node.value === 'boolean') return textTex(node.value ? 'yes' : 'no');
     return undefined;
   };
   return { implicit: 'hide', parenthesis: 'keep', handler } as const;

@@ -104,6 +104,8 @@ describe('input', () => {
     expect(v.status).toBe('error');
     expect(v.error?.message).toMatch(/not a number with a unit/);
     expect(inputKind.render(v)).toContain('role="alert"');
+    expect(v.stale).toBe(true);
+    expect(inputKind.render(v)).toContain('still computing with 120 psf');
     // the dependent still has a value: 1.2 × 120 + 1.6 × 50 = 224 psf (ASCE 7-22 §2.3.1, combination 2)
     expect(e.state('f1')).toMatchObject({ status: 'ok', display: { text: '224 psf' } });
     e.dispose();
@@ -127,10 +129,16 @@ describe('formula', () => {
   it('binds the hand calc with values and the result', () => {
     const v = formulaKind.bind(cell<'formula'>('f1'), ctx('f1'));
     // 1.2 × 120 psf + 1.6 × 50 psf = 224 psf (ASCE 7-22 §2.3.1, combination 2)
-    expect(v.tex).toBe('{w_{\\mathrm{u}}} = 1.2~{D}+1.6~{L} = 1.2~\\left(120\\,\\mathrm{psf}\\right)+1.6~\\left(50\\,\\mathrm{psf}\\right) = 224\\,\\mathrm{psf}');
+    expect(v.symbol).toBe('{w_{\\mathrm{u}}}');
+    expect(v.parts).toEqual([
+      '1.2~{D}+1.6~{L}',
+      '1.2~\\left(120\\,\\mathrm{psf}\\right)+1.6~\\left(50\\,\\mathrm{psf}\\right)',
+      '224\\,\\mathrm{psf}',
+    ]);
     expect(v.refs).toEqual(['ASCE 7-22 §2.3.1']);
     const html = formulaKind.render(v);
-    expect(html).toContain('katex-display');
+    expect(html.match(/class="hc-step"/g)).toHaveLength(3);
+    expect(html).toContain('class="katex"');
     expect(html).toContain('ASCE 7-22 §2.3.1');
   });
 
@@ -174,11 +182,13 @@ describe('check', () => {
     expect(passHtml).toContain('ratio 0.75');
     expect(passHtml).toContain('aria-valuenow="0.747"');
     expect(checkKind.render(fail)).toContain('✗</span> NOT OK');
-    expect(pass.tex.startsWith('{\\mathit{chk}_{\\mathrm{w}}}:')).toBe(true);
+    expect(pass.symbol).toBe('{\\mathit{chk}_{\\mathrm{w}}}:');
+    expect(pass.steps.map((s) => s.rel)).toEqual(['', '\\Rightarrow', '\\quad']);
+    expect(pass.steps[1].tex).toBe('224\\,\\mathrm{psf} \\le 300\\,\\mathrm{psf}');
   });
 
   it('draws the bar to 1.25 at most and nothing before a verdict', () => {
-    const base: CheckView = { id: 'k', kind: 'check', status: 'fail', number: '', refs: [], tex: '', verdict: 'fail', ratio: 3 };
+    const base: CheckView = { id: 'k', kind: 'check', status: 'fail', number: '', refs: [], symbol: '', steps: [], verdict: 'fail', ratio: 3 };
     expect(renderVerdict(base)).toContain('width:100.0%');
     expect(renderVerdict({ ...base, ratio: 0.5, verdict: 'pass' })).toContain('width:40.0%');
     expect(renderVerdict({ ...base, verdict: undefined })).toBe('');

@@ -104,18 +104,23 @@ describe('formulaTex', () => {
 
   it('sets units in a formula upright and library calls as operator names', () => {
     const t = formulaTex('x', 'punch_bo(c1, c2, d) + 4 in', undefined, sc);
-    expect(t.symbolic).toContain('\\operatorname{punch\\_bo}');
+    expect(t.symbolic).toContain('\\operatorname{punch\\_bo}(');
     expect(t.symbolic).toContain('{\\mathrm{in}}');
     expect(t.result).toBeUndefined();
     renders(t.line);
   });
 
-  it('puts the value of a pure number without brackets, a negative one with', () => {
+  it('brackets a value only where it would read wrong without', () => {
     const t = formulaTex('v', '4 * lambda_s * sqrt(f_c) * T', undefined, sc);
-    expect(t.substituted).toContain('4\\cdot{1}');
-    expect(t.substituted).toContain('\\left(-3.5\\,\\mathrm{kip}\\right)');
-    expect(t.substituted).toContain('\\sqrt{\\left(5000\\,\\mathrm{psi}\\right)}');
+    expect(t.substituted).toContain('4\\cdot{1}'); // a pure number as a factor
+    expect(t.substituted).toContain('\\left(-3.5\\,\\mathrm{kip}\\right)'); // a factor with a unit
+    expect(t.substituted).toContain('\\sqrt{{5000\\,\\mathrm{psi}}}'); // a function argument
     renders(t.line);
+    const sum = formulaTex('x', 'd - D + T', undefined, sc);
+    expect(sum.substituted).toBe('{7.5\\,\\mathrm{in}}-{120\\,\\mathrm{psf}}+\\left(-3.5\\,\\mathrm{kip}\\right)');
+    const call = formulaTex('x', 'punch_bo(d, d) + max(d, D)', undefined, sc);
+    expect(call.substituted).toBe('\\operatorname{punch\\_bo}({7.5\\,\\mathrm{in}},\\allowbreak\\,{7.5\\,\\mathrm{in}})+\\operatorname{max}({7.5\\,\\mathrm{in}},\\allowbreak\\,{120\\,\\mathrm{psf}})');
+    renders(call.line);
   });
 
   it('leaves out parts that repeat', () => {

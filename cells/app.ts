@@ -1,0 +1,321 @@
+// The page shell: one open sheet with its engine, undo history, view, editors and
+// autosave. Every edit is a pure operation on the sheet, recorded in the history.
+
+import type { CalcDocument, CellKind, DocMeta } from '../runtime/document';
+import { cellName } from '../runtime/document';
+import {
+  EditError, addCell, canRedo, canUndo, deleteCell, duplicateCell, moveCell, record, redo, setCellFields,
+  setInputValue, setMeta, startHistory, undo, type CellFields, type History,
+} from '../runtime/edit/index';
+import { createEngine } from '../runtime/engine';
+import type { Engine } from '../runtime/engine-types';
+import { hasFeetInches } from '../runtime/units/feet-inches';
+import { canonicalUnit, sheetSystem, switchSystem, typedUnit, type UnitMemory } from '../runtime/units/systems';
+import { Autosave } from './autosave';
+import { CellEditor } from './cell-editor';
+import { SourceError } from './kind';
+import { cellSource, editSource } from './registry';
+import { SheetView } from './sheet-view';
+import { sheetTitle } from './templates';
+import { TitleBlock } from './title-block';
+import { functionEntries, unitNames, type Vocabulary } from './vocabulary';
+
+/** A computing state shows only when an update takes longer than this. */
+const COMPUTING_AFTER_MS = 100;
+
+export interface AppElements {
+  sheet: HTMLElement;
+  summary: HTMLElement;
+  titleBlock: HTMLElement;
+  status: HTMLElement;
+  units: HTMLButtonElement;
+  undo: HTMLButtonElement;
+  redo: HTMLButtonElement;
+}
+
+export class App {
+  key = '';
+  history: History = startHistory({ meta: {} as DocMeta, cells: [] });
+  engine?: Engine;
+  readonly view: SheetView;
+  private readonly title: TitleBlock;
+  private editor?: CellEditor;
+  private unitMemory: UnitMemory = {};
+  private unsubscribe?: () => void;
+  private computingTimer?: ReturnType<typeof setTimeout>;
+  /** Set while an edit made in the open editor is applied. */
+  private fromEditor = false;
+  /** Set by the page for tests and benchmarks: called after every re-render of engine changes. */
+  onRendered?: (changed: readonly string[]) => void;
+
+  constructor(private readonly el: AppElements, readonly autosave: Autosave | undefined) {
+    this.view = new SheetView(el.sheet, el.summary, {
+      commitValue: (id, value) => this.apply(keepDisplayUnit(setInputValue(this.doc, id, value), this.doc, id), `value:${id}`),
+      open: (id) => this.openEditor(id),
+      select: (id) => this.view.select(id, false),
+    });
+    this.title = new TitleBlock(el.titleBlock, (key, value) => this.apply(setMeta(this.doc, key, value), `meta:${key}`));
+  }
+
+  get doc(): CalcDocument {
+    return this.history.present;
+  }
+
+  /** Opens a sheet (from the store or a template) with its history and saved version. */
+  open(key: string, history: History, version: number): void {
+    this.closeEditor(false);
+    this.key = key;
+    this.history = history;
+    this.unitMemory = {};
+    this.unsubscribe?.();
+    this.engine?.dispose();
+    const engine = createEngine(this.doc);
+    this.engine = engine;
+    this.unsubscribe = engine.subscribe((changed) => this.onEngine(changed));
+    this.view.show(this.doc, engine);
+    this.title.show(this.doc.meta);
+    this.autosave?.follow(key, version);
+    this.watchComputing();
+    this.updateChrome();
+  }
+
+  /** Records a new version of the sheet and runs it. `key` merges quick successive edits of one field. */
+  apply(doc: CalcDocument, key?: string): void {
+    if (doc === this.doc) return;
+    this.history = record(this.history, doc, key);
+    this.run();
+  }
+
+  undo(): void {
+    if (!canUndo(this.history)) return;
+    this.history = undo(this.history);
+    this.run();
+  }
+
+  redo(): void {
+    if (!canRedo(this.history)) return;
+    this.history = redo(this.history);
+    this.run();
+  }
+
+  /** Pushes the present sheet to the engine, the view, the editor and the store. */
+  private run(): void {
+    this.engine!.update(this.doc);
+    this.view.sync(this.doc);
+    this.title.show(this.doc.meta);
+    // The open editor already shows what it applied; only other changes (undo) reach it.
+    if (this.editor && !this.fromEditor) {
+      const cell = this.doc.cells.find((c) => c.id === this.editor!.cell.id);
+      if (cell) this.editor.reload(cell);
+      else this.closeEditor(false);
+    }
+    this.watchComputing();
+    this.updateChrome();
+    this.autosave?.schedule(this.history, sheetTitle(this.doc, this.key));
+  }
+
+  private onEngine(changed: string[]): void {
+    this.view.refresh(changed);
+    if (this.editor && changed.includes(this.editor.cell.id)) {
+      const cell = this.doc.cells.find((c) => c.id === this.editor!.cell.id);
+      if (cell) this.editor.showState(this.engine!.state(cell.id), cellSource(cell));
+    }
+    this.onRendered?.(changed);
+  }
+
+  /** Shows "computing" only when the engine has not settled within COMPUTING_AFTER_MS. */
+  private watchComputing(): void {
+    clearTimeout(this.computingTimer);
+    const engine = this.engine!;
+    let done = false;
+    this.computingTimer = setTimeout(() => {
+      if (done) return;
+      this.view.setComputing(true);
+      this.setStatus('Computing…');
+    }, COMPUTING_AFTER_MS);
+    void engine.settled().then(() => {
+      done = true;
+      clearTimeout(this.computingTimer);
+      this.view.setComputing(false);
+      if (this.el.status.textContent === 'Computing…') this.setStatus('');
+    });
+  }
+
+  setStatus(text: string): void {
+    this.el.status.textContent = text;
+  }
+
+  private updateChrome(): void {
+    this.el.undo.disabled = !canUndo(this.history);
+    this.el.redo.disabled = !canRedo(this.history);
+    const system = sheetSystem(this.doc);
+    this.el.units.textContent = system === 'US' ? 'Units: US' : 'Units: SI';
+    this.el.units.setAttribute('aria-label', `Display units ${system}; switch to ${system === 'US' ? 'SI' : 'US'}`);
+  }
+
+  switchUnits(): void {
+    const target = sheetSystem(this.doc) === 'US' ? 'SI' : 'US';
+    const out = switchSystem(this.doc, target, this.unitMemory);
+    this.unitMemory = out.memory;
+    this.apply(out.doc);
+    this.setStatus(`Display units: ${target}`);
+  }
+
+  // ----- cell commands -----
+
+  private selectedOrLast(): string | undefined {
+    return this.view.selected ?? this.doc.cells[this.doc.cells.length - 1]?.id;
+  }
+
+  add(kind: CellKind): void {
+    const out = addCell(this.doc, kind, this.selectedOrLast());
+    this.apply(out.doc);
+    this.view.select(out.id);
+    this.openEditor(out.id);
+  }
+
+  duplicate(): void {
+    const id = this.view.selected;
+    if (!id) return;
+    const out = duplicateCell(this.doc, id);
+    this.apply(out.doc);
+    this.view.select(out.id);
+  }
+
+  move(delta: number): void {
+    const id = this.view.selected;
+    if (!id) return;
+    this.apply(moveCell(this.doc, id, delta));
+    this.view.select(id);
+  }
+
+  remove(): void {
+    const id = this.view.selected;
+    if (!id) return;
+    const order = this.view.order();
+    const i = order.indexOf(id);
+    if (this.editor?.cell.id === id) this.closeEditor(false);
+    this.apply(deleteCell(this.doc, id));
+    this.view.select(order[i + 1] ?? order[i - 1]);
+    this.setStatus('Cell deleted (Ctrl+Z brings it back)');
+  }
+
+  step(delta: number): void {
+    const order = this.view.order();
+    const i = this.view.selected ? order.indexOf(this.view.selected) : -1;
+    const next = order[Math.max(0, Math.min(order.length - 1, i + delta))];
+    if (next) this.view.select(next);
+  }
+
+  /** Enter on a cell: an input's value field, otherwise the editor panel. */
+  edit(full = false): void {
+    const id = this.view.selected;
+    if (!id) return;
+    const cell = this.doc.cells.find((c) => c.id === id);
+    if (cell?.kind === 'input' && !full) {
+      const field = this.view.element(id)?.querySelector<HTMLInputElement | HTMLSelectElement>('.value-field');
+      if (field) {
+        field.focus();
+        if (field instanceof HTMLInputElement) field.select();
+        return;
+      }
+    }
+    this.openEditor(id);
+  }
+
+  openEditor(id: string): void {
+    if (this.editor?.cell.id === id) {
+      this.editor.focus();
+      return;
+    }
+    this.closeEditor(false);
+    const cell = this.doc.cells.find((c) => c.id === id);
+    const slot = this.view.editorSlot(id);
+    if (!cell || !slot) return;
+    this.view.select(id, false);
+    this.editor = new CellEditor(cell, slot, {
+      applySource: (cid, source) => this.applySource(cid, source),
+      applyFields: (cid, fields) => this.applyFields(cid, fields),
+      close: (cid, refocus) => {
+        if (this.editor?.cell.id === cid) this.editor = undefined;
+        if (refocus) this.view.select(cid);
+      },
+      vocabulary: () => this.vocabulary(),
+    });
+    this.editor.showState(this.engine!.state(id), cellSource(cell));
+    // Focus once the key or click that opened the editor is over, so it types nothing there.
+    const editor = this.editor;
+    setTimeout(() => editor === this.editor && editor.focus(), 0);
+  }
+
+  closeEditor(refocus: boolean): void {
+    this.editor?.close(refocus);
+    this.editor = undefined;
+  }
+
+  get editing(): boolean {
+    return this.editor !== undefined;
+  }
+
+  private applySource(id: string, source: string): { message: string; column?: number } | undefined {
+    const cell = this.doc.cells.find((c) => c.id === id);
+    if (!cell) return { message: 'this cell is no longer in the sheet' };
+    try {
+      this.fromEditor = true;
+      this.apply(editSource(this.doc, cell, source), `src:${id}`);
+      return undefined;
+    } catch (e) {
+      if (e instanceof SourceError) return { message: e.message, column: e.column };
+      if (e instanceof EditError) return { message: e.message };
+      throw e;
+    } finally {
+      this.fromEditor = false;
+    }
+  }
+
+  private applyFields(id: string, fields: CellFields): string | undefined {
+    const cell = this.doc.cells.find((c) => c.id === id);
+    if (!cell) return 'this cell is no longer in the sheet';
+    const allowed: CellFields = {};
+    for (const [k, v] of Object.entries(fields)) {
+      if (k in cell || (v !== '' && v !== undefined && !(Array.isArray(v) && v.length === 0))) {
+        (allowed as Record<string, unknown>)[k] = v;
+      }
+    }
+    try {
+      this.fromEditor = true;
+      this.apply(setCellFields(this.doc, id, allowed), `fields:${id}`);
+      return undefined;
+    } catch (e) {
+      if (e instanceof EditError) return e.message;
+      throw e;
+    } finally {
+      this.fromEditor = false;
+    }
+  }
+
+  vocabulary(): Vocabulary {
+    const names = this.doc.cells.flatMap((c) => {
+      const name = cellName(c);
+      if (!name) return [];
+      const s = this.engine?.state(c.id);
+      return [{ name, value: s?.status === 'ok' || s?.status === 'fail' ? s.display?.text : undefined, label: c.label }];
+    });
+    return { names, functions: functionEntries(), units: unitNames() };
+  }
+}
+
+/**
+ * An input without a display unit shows the unit typed. When a value is typed in
+ * another unit (450 mm where 18 in stood), the unit shown before is kept as the
+ * display unit, so the sheet does not change units under the reader.
+ */
+export function keepDisplayUnit(next: CalcDocument, prev: CalcDocument, id: string): CalcDocument {
+  const before = prev.cells.find((c) => c.id === id);
+  const after = next.cells.find((c) => c.id === id);
+  if (before?.kind !== 'input' || after?.kind !== 'input' || after.unit || after.choices) return next;
+  const was = typedUnit(before.value);
+  const now = typedUnit(after.value);
+  if (!was || !now || canonicalUnit(was) === canonicalUnit(now)) return next;
+  return setCellFields(next, id, { unit: hasFeetInches(before.value) ? 'in' : was });
+}

@@ -1,0 +1,216 @@
+// The editor panel that opens under a cell: its source in CodeMirror (or a plain
+// field for a section title) plus the cell's other fields. Edits apply as you type;
+// problems are marked where they are.
+
+import type { Cell } from '../runtime/document';
+import type { CellFields } from '../runtime/edit/index';
+import type { CellState } from '../runtime/engine-types';
+import { escapeHtml, exprOffset } from './kind';
+import { cellSource } from './registry';
+import { SourceEditor } from './source-editor';
+import type { Vocabulary } from './vocabulary';
+
+export interface CellEditorHooks {
+  /** Applies the edited source; returns a problem to mark, or undefined when applied. */
+  applySource(id: string, source: string): { message: string; column?: number } | undefined;
+  applyFields(id: string, fields: CellFields): string | undefined;
+  close(id: string, refocus: boolean): void;
+  vocabulary(): Vocabulary;
+}
+
+type FieldSpec = { key: keyof CellFields; label: string; size: number; hint?: string };
+
+const FIELDS: Partial<Record<Cell['kind'], FieldSpec[]>> = {
+  section: [{ key: 'clause', label: 'Reference', size: 24 }],
+  note: [{ key: 'clause', label: 'Reference', size: 24 }],
+  input: [
+    { key: 'label', label: 'Label', size: 36 },
+    { key: 'unit', label: 'Display unit', size: 10, hint: 'e.g. in, MPa' },
+    { key: 'min', label: 'Least', size: 10 },
+    { key: 'max', label: 'Greatest', size: 10 },
+    { key: 'choices', label: 'Choices', size: 24, hint: 'comma-separated' },
+    { key: 'description', label: 'About', size: 36 },
+    { key: 'clause', label: 'Reference', size: 24 },
+  ],
+  formula: [
+    { key: 'label', label: 'Label', size: 36 },
+    { key: 'unit', label: 'Display unit', size: 10, hint: 'e.g. kip*ft' },
+    { key: 'precision', label: 'Sig. figures', size: 3 },
+    { key: 'clause', label: 'Reference', size: 24 },
+  ],
+  check: [
+    { key: 'label', label: 'Label', size: 36 },
+    { key: 'clause', label: 'Reference', size: 24 },
+  ],
+  // Figure and sweep kinds (cells/figure.ts, cells/sweep.ts): label and reference.
+  figure: [{ key: 'label', label: 'Label', size: 36 }, { key: 'clause', label: 'Reference', size: 24 }],
+  sweep: [{ key: 'label', label: 'Label', size: 36 }, { key: 'clause', label: 'Reference', size: 24 }],
+};
+
+const DEBOUNCE_MS = 180;
+
+function fieldText(cell: Cell, key: keyof CellFields): string {
+  const v = (cell as unknown as Record<string, unknown>)[key];
+  if (Array.isArray(v)) return v.join(', ');
+  return v === undefined ? '' : String(v);
+}
+
+function fieldValue(key: keyof CellFields, text: string): CellFields[keyof CellFields] {
+  if (key === 'choices') return text.split(',').map((s) => s.trim()).filter(Boolean);
+  if (key === 'precision') return text.trim() === '' ? undefined : Number(text.trim());
+  return text.trim();
+}
+
+export class CellEditor {
+  private source?: SourceEditor;
+  private titleField?: HTMLInputElement;
+  private readonly message: HTMLElement;
+  private timer?: ReturnType<typeof setTimeout>;
+  private fieldTimer?: ReturnType<typeof setTimeout>;
+  private problem?: { message: string; column?: number };
+
+  constructor(readonly cell: Cell, private readonly host: HTMLElement, private readonly hooks: CellEditorHooks) {
+    host.innerHTML = '';
+    const panel = document.createElement('div');
+    panel.className = 'cell-editor';
+    panel.setAttribute('role', 'group');
+    panel.setAttribute('aria-label', `Edit ${cell.kind}`);
+    const srcHost = document.createElement('div');
+    srcHost.className = 'src-host';
+    this.message = document.createElement('div');
+    this.message.className = 'editor-message';
+    this.message.setAttribute('aria-live', 'polite');
+    const fields = document.createElement('div');
+    fields.className = 'editor-fields';
+    fields.innerHTML = (FIELDS[cell.kind] ?? [{ key: 'label', label: 'Label', size: 36 }, { key: 'clause', label: 'Reference', size: 24 }])
+      .map((f) => `<label>${escapeHtml(f.label)} <input data-field="${f.key}" size="${f.size}" value="${
+        escapeHtml(fieldText(cell, f.key))}"${f.hint ? ` placeholder="${escapeHtml(f.hint)}"` : ''}></label>`)
+      .join('');
+    const bar = document.createElement('div');
+    bar.className = 'editor-bar';
+    bar.innerHTML = '<span class="editor-keys">Ctrl+Enter or Esc to close · Ctrl+Space completes</span><button type="button" data-editor="done">Done</button>';
+    panel.append(srcHost, this.message, fields, bar);
+    host.append(panel);
+
+    if (cell.kind === 'section') {
+      const t = document.createElement('input');
+      t.className = 'title-field';
+      t.value = cellSource(cell);
+      t.setAttribute('aria-label', 'Section title');
+      t.addEventListener('input', () => this.schedule(t.value));
+      t.addEventListener('keydown', (e) => this.onFieldKey(e));
+      srcHost.append(t);
+      this.titleField = t;
+    } else {
+      this.source = new SourceEditor({
+        parent: srcHost,
+        text: cellSource(cell),
+        mode: cell.kind === 'note' ? 'note' : 'formula',
+        vocabulary: () => hooks.vocabulary(),
+        label: cell.kind === 'note' ? 'Note text' : `${cell.kind} source`,
+        onChange: (text) => this.schedule(text),
+        onDone: () => this.close(true),
+        onCancel: () => this.close(true),
+      });
+    }
+    fields.addEventListener('input', () => this.scheduleFields(fields));
+    fields.addEventListener('keydown', (e) => this.onFieldKey(e));
+    bar.querySelector('button')!.addEventListener('click', () => this.close(true));
+  }
+
+  focus(): void {
+    if (this.source) this.source.focus();
+    else this.titleField?.focus();
+  }
+
+  /** Shows the engine's verdict on the applied source: an error marked at its column. */
+  showState(state: CellState | undefined, source: string): void {
+    if (this.problem) return; // a source problem is shown until it is fixed
+    const e = state?.status === 'error' ? state.error : undefined;
+    if (!e || e.kind === 'upstream') {
+      this.setMessage(e ? `Waiting on ${e.upstream ?? 'an input'}: ${e.message}` : '');
+      this.source?.setMarks([]);
+      return;
+    }
+    this.setMessage(e.message);
+    if (e.column !== undefined && this.source) {
+      const from = exprOffset(source) + e.column - 1;
+      this.source.setMarks([{ from, to: from + 1, message: e.message }]);
+    }
+  }
+
+  /** After undo/redo the cell may read differently: show its current source. */
+  reload(cell: Cell): void {
+    (this as { cell: Cell }).cell = cell;
+    const text = cellSource(cell);
+    if (this.source) this.source.setText(text);
+    else if (this.titleField && this.titleField.value !== text) this.titleField.value = text;
+  }
+
+  close(refocus: boolean): void {
+    this.flush();
+    this.source?.destroy();
+    this.host.innerHTML = '';
+    this.hooks.close(this.cell.id, refocus);
+  }
+
+  private onFieldKey(e: KeyboardEvent): void {
+    if (e.key === 'Escape' || (e.key === 'Enter' && (e.ctrlKey || e.metaKey)) || (e.key === 'Enter' && e.target === this.titleField)) {
+      e.preventDefault();
+      e.stopPropagation();
+      this.close(true);
+    }
+  }
+
+  private schedule(text: string): void {
+    clearTimeout(this.timer);
+    this.timer = setTimeout(() => this.apply(text), DEBOUNCE_MS);
+  }
+
+  private flush(): void {
+    if (this.timer !== undefined) {
+      clearTimeout(this.timer);
+      this.timer = undefined;
+      this.apply(this.source ? this.source.text : this.titleField?.value ?? '');
+    }
+    if (this.fieldTimer !== undefined) {
+      clearTimeout(this.fieldTimer);
+      this.fieldTimer = undefined;
+      this.applyFieldsNow(this.host.querySelector('.editor-fields')!);
+    }
+  }
+
+  private apply(text: string): void {
+    this.timer = undefined;
+    this.problem = this.hooks.applySource(this.cell.id, text);
+    if (this.problem) {
+      this.setMessage(this.problem.message);
+      const col = this.problem.column;
+      if (col !== undefined) this.source?.setMarks([{ from: col - 1, to: col, message: this.problem.message }]);
+    } else {
+      this.setMessage('');
+      this.source?.setMarks([]);
+    }
+  }
+
+  private scheduleFields(fields: HTMLElement): void {
+    clearTimeout(this.fieldTimer);
+    this.fieldTimer = setTimeout(() => this.applyFieldsNow(fields), DEBOUNCE_MS);
+  }
+
+  private applyFieldsNow(fields: HTMLElement): void {
+    this.fieldTimer = undefined;
+    const patch: CellFields = {};
+    fields.querySelectorAll<HTMLInputElement>('input[data-field]').forEach((inp) => {
+      const key = inp.dataset.field as keyof CellFields;
+      (patch as Record<string, unknown>)[key] = fieldValue(key, inp.value);
+    });
+    const problem = this.hooks.applyFields(this.cell.id, patch);
+    this.setMessage(problem ?? '');
+  }
+
+  private setMessage(text: string): void {
+    this.message.textContent = text;
+    this.message.classList.toggle('has-problem', text !== '');
+  }
+}

@@ -1,0 +1,307 @@
+// The sheet on the page: one <article> per cell, rendered from the cell's view.
+// Only cells whose state, content or number changed are rendered again; a long
+// sheet is rendered in slices so the page stays responsive.
+
+import DOMPurify from 'dompurify';
+import type { CalcDocument, Cell, CheckCell } from '../runtime/document';
+import { cellName } from '../runtime/document';
+import type { Engine } from '../runtime/engine-types';
+import type { BindContext } from './kind';
+import { bindCell, cellSource, numberCells, renderView } from './registry';
+import { summaryHtml, summaryRows } from './summary';
+
+export interface SheetEvents {
+  commitValue(id: string, value: string): void;
+  open(id: string): void;
+  select(id: string): void;
+}
+
+interface Slot {
+  cell: Cell;
+  el: HTMLElement;
+  content: HTMLElement;
+  html?: string;
+  number: string;
+}
+
+/** Cells rendered at once when a sheet opens; the rest follow in slices. */
+const FIRST_SLICE = 80;
+const SLICE_MS = 8;
+
+export class SheetView {
+  private slots = new Map<string, Slot>();
+  private doc: CalcDocument = { meta: {} as CalcDocument['meta'], cells: [] };
+  private engine?: Engine;
+  private numbers = new Map<string, string>();
+  private byName = new Map<string, string>();
+  /** name → ids of the cells whose hand calc shows that name's value. */
+  private readers = new Map<string, Set<string>>();
+  private queue: string[] = [];
+  private queued = false;
+  private restoring = false;
+  selected?: string;
+
+  constructor(
+    private readonly host: HTMLElement,
+    private readonly summaryHost: HTMLElement,
+    private readonly events: SheetEvents,
+  ) {
+    host.addEventListener('keydown', (e) => this.onKey(e));
+    host.addEventListener('focusout', (e) => this.onFocusOut(e));
+    host.addEventListener('change', (e) => this.onChange(e));
+    host.addEventListener('click', (e) => this.onClick(e));
+    // Whatever has the focus is the selected cell (Tab, Esc out of a field, a click).
+    host.addEventListener('focusin', (e) => {
+      const id = this.cellIdOf(e.target);
+      if (id && id !== this.selected && !(e.target as HTMLElement).closest('.cell-editor')) events.select(id);
+    });
+    host.addEventListener('dblclick', (e) => {
+      const id = this.cellIdOf(e.target);
+      if (id && !(e.target as HTMLElement).closest('.value-field, .cell-editor')) events.open(id);
+    });
+  }
+
+  /** Shows a whole new sheet (on open). */
+  show(doc: CalcDocument, engine: Engine): void {
+    this.engine = engine;
+    this.host.textContent = '';
+    this.slots.clear();
+    this.readers.clear();
+    this.queue = [];
+    this.doc = { meta: doc.meta, cells: [] };
+    this.sync(doc);
+  }
+
+  /** Brings the page in line with a new version of the sheet. */
+  sync(doc: CalcDocument): void {
+    const prev = this.doc;
+    this.doc = doc;
+    this.numbers = numberCells(doc.cells);
+    this.byName = new Map(doc.cells.flatMap((c) => (cellName(c) ? [[cellName(c)!, c.id] as const] : [])));
+    const live = new Set(doc.cells.map((c) => c.id));
+    for (const [id, slot] of this.slots) {
+      if (!live.has(id)) {
+        slot.el.remove();
+        this.slots.delete(id);
+      }
+    }
+    const fresh: string[] = [];
+    let before: Element | null = null;
+    // Walk backwards so each element is placed before its successor.
+    for (let i = doc.cells.length - 1; i >= 0; i--) {
+      const cell = doc.cells[i];
+      let slot = this.slots.get(cell.id);
+      if (!slot) {
+        slot = this.newSlot(cell);
+        this.slots.set(cell.id, slot);
+        fresh.push(cell.id);
+      }
+      if (slot.el.nextElementSibling !== before || slot.el.parentElement !== this.host) this.host.insertBefore(slot.el, before);
+      before = slot.el;
+    }
+    const dirty: string[] = [];
+    for (const cell of doc.cells) {
+      const slot = this.slots.get(cell.id)!;
+      const number = this.numbers.get(cell.id) ?? '';
+      if (slot.cell !== cell || slot.number !== number) {
+        slot.cell = cell;
+        slot.number = number;
+        if (slot.html !== undefined) dirty.push(cell.id);
+      }
+    }
+    if (prev.cells.length === 0 && fresh.length > FIRST_SLICE) {
+      const order = doc.cells.map((c) => c.id);
+      order.slice(0, FIRST_SLICE).forEach((id) => this.renderCell(id));
+      this.enqueue(order.slice(FIRST_SLICE));
+    } else {
+      fresh.forEach((id) => this.renderCell(id));
+    }
+    dirty.forEach((id) => this.renderCell(id));
+    this.renderSummary();
+  }
+
+  /** Renders the cells whose engine state changed, and the hand calcs that show their values. */
+  refresh(changed: readonly string[]): void {
+    const todo = new Set<string>();
+    for (const id of changed) {
+      todo.add(id);
+      const name = this.slots.get(id) && cellName(this.slots.get(id)!.cell);
+      if (name) this.readers.get(name)?.forEach((r) => todo.add(r));
+    }
+    for (const id of todo) if (this.slots.get(id)?.html !== undefined) this.renderCell(id);
+    if (changed.some((id) => this.slots.get(id)?.cell.kind === 'check')) this.renderSummary();
+  }
+
+  /** Marks pending cells while the engine takes long (called after ~100 ms). */
+  setComputing(on: boolean): void {
+    this.host.classList.toggle('computing', on);
+  }
+
+  element(id: string): HTMLElement | undefined {
+    return this.slots.get(id)?.el;
+  }
+
+  /** The article's slot for an editor panel (kept when the cell is re-rendered). */
+  editorSlot(id: string): HTMLElement | undefined {
+    return this.slots.get(id)?.el.querySelector<HTMLElement>(':scope > .cell-editor-slot') ?? undefined;
+  }
+
+  select(id: string | undefined, focus = true): void {
+    if (this.selected) this.slots.get(this.selected)?.el.classList.remove('selected');
+    this.selected = id;
+    const el = id ? this.slots.get(id)?.el : undefined;
+    if (!el) return;
+    el.classList.add('selected');
+    if (focus && !el.contains(document.activeElement)) el.focus({ preventScroll: true });
+    el.scrollIntoView({ block: 'nearest' });
+  }
+
+  /** Ids in sheet order. */
+  order(): string[] {
+    return this.doc.cells.map((c) => c.id);
+  }
+
+  /** Resolves when every queued cell is rendered (for scroll restore and print). */
+  whenRendered(): Promise<void> {
+    return new Promise((resolve) => {
+      const check = () => (this.queue.length === 0 ? resolve() : setTimeout(check, 16));
+      check();
+    });
+  }
+
+  private newSlot(cell: Cell): Slot {
+    const el = document.createElement('article');
+    el.className = `cell kind-${cell.kind} unrendered`;
+    el.id = `cell-${cell.id}`;
+    el.dataset.id = cell.id;
+    el.tabIndex = -1;
+    const content = document.createElement('div');
+    content.className = 'cell-content';
+    content.textContent = cellSource(cell); // readable until typeset
+    const editor = document.createElement('div');
+    editor.className = 'cell-editor-slot';
+    el.append(content, editor);
+    return { cell, el, content, number: this.numbers.get(cell.id) ?? '' };
+  }
+
+  private context(id: string): BindContext {
+    const engine = this.engine!;
+    return {
+      state: (i) => engine.state(i),
+      scope: { isCell: (n) => this.byName.has(n), state: (n) => engine.state(this.byName.get(n) ?? '') },
+      number: this.numbers.get(id) ?? '',
+    };
+  }
+
+  private renderCell(id: string): void {
+    const slot = this.slots.get(id);
+    if (!slot || !this.engine) return;
+    const state = this.engine.state(id);
+    for (const name of state?.reads ?? []) {
+      let set = this.readers.get(name);
+      if (!set) this.readers.set(name, (set = new Set()));
+      set.add(id);
+    }
+    const view = bindCell(slot.cell, this.context(id));
+    let html = renderView(slot.cell, view);
+    if (slot.cell.kind === 'note') {
+      // Notes come from the document: one more pass, so no markup a sheet carries can run.
+      html = DOMPurify.sanitize(html, { ALLOWED_URI_REGEXP: /^(?:https?:|#)/i, ADD_ATTR: ['target'] });
+    }
+    slot.el.className = `cell kind-${slot.cell.kind} st-${view.status}${this.selected === id ? ' selected' : ''}`;
+    if (html === slot.html) return;
+    slot.html = html;
+    this.writeContent(slot, html);
+  }
+
+  /** Replaces the cell's content, keeping a value field the person is typing in. */
+  private writeContent(slot: Slot, html: string): void {
+    const active = document.activeElement;
+    const typing = active instanceof HTMLInputElement && slot.content.contains(active) && active.classList.contains('value-field')
+      ? { value: active.value, start: active.selectionStart, end: active.selectionEnd }
+      : undefined;
+    this.restoring = !!typing;
+    slot.content.innerHTML = html;
+    if (typing) {
+      const field = slot.content.querySelector<HTMLInputElement>('input.value-field');
+      if (field) {
+        field.value = typing.value;
+        field.focus({ preventScroll: true });
+        field.setSelectionRange(typing.start, typing.end);
+      }
+    }
+    this.restoring = false;
+  }
+
+  private enqueue(ids: string[]): void {
+    this.queue.push(...ids);
+    if (this.queued) return;
+    this.queued = true;
+    const step = () => {
+      const until = performance.now() + SLICE_MS;
+      while (this.queue.length && performance.now() < until) {
+        const id = this.queue.shift()!;
+        if (this.slots.get(id)?.html === undefined) this.renderCell(id);
+      }
+      if (this.queue.length) setTimeout(step, 0);
+      else this.queued = false;
+    };
+    setTimeout(step, 0);
+  }
+
+  private renderSummary(): void {
+    if (!this.engine) return;
+    const checks = this.doc.cells.filter((c): c is CheckCell => c.kind === 'check');
+    const html = summaryHtml(summaryRows(checks, (id) => this.engine!.state(id), this.numbers));
+    if (this.summaryHost.dataset.html !== html) {
+      this.summaryHost.innerHTML = html;
+      this.summaryHost.dataset.html = html;
+    }
+  }
+
+  private cellIdOf(target: EventTarget | null): string | undefined {
+    return (target as HTMLElement | null)?.closest?.<HTMLElement>('article.cell')?.dataset.id;
+  }
+
+  private commitField(field: HTMLInputElement | HTMLSelectElement): void {
+    const id = this.cellIdOf(field);
+    const cell = id ? this.slots.get(id)?.cell : undefined;
+    if (!id || cell?.kind !== 'input') return;
+    const value = field.value.trim();
+    if (value !== cell.value) this.events.commitValue(id, value);
+  }
+
+  private onKey(e: KeyboardEvent): void {
+    const field = e.target as HTMLElement;
+    if (!(field instanceof HTMLInputElement) || !field.classList.contains('value-field')) return;
+    if (e.key === 'Enter') {
+      e.preventDefault();
+      this.commitField(field);
+    } else if (e.key === 'Escape') {
+      const cell = this.slots.get(this.cellIdOf(field) ?? '')?.cell;
+      if (cell?.kind === 'input') field.value = cell.value;
+      field.closest<HTMLElement>('article.cell')?.focus();
+      e.stopPropagation();
+    }
+  }
+
+  private onFocusOut(e: FocusEvent): void {
+    if (this.restoring) return;
+    const field = e.target;
+    if (field instanceof HTMLInputElement && field.classList.contains('value-field')) this.commitField(field);
+  }
+
+  private onChange(e: Event): void {
+    const field = e.target;
+    if (field instanceof HTMLSelectElement && field.classList.contains('value-field')) this.commitField(field);
+  }
+
+  private onClick(e: MouseEvent): void {
+    const target = e.target as HTMLElement;
+    const id = this.cellIdOf(target);
+    if (!id) return;
+    // The first click selects; a click on the math of the selected cell opens its editor.
+    if (id !== this.selected) this.events.select(id);
+    else if (target.closest('[data-act="open"]') && !target.closest('.cell-editor')) this.events.open(id);
+  }
+}

@@ -1,0 +1,60 @@
+// The check summary near the top of the sheet: every check with its ratio, the
+// governing ones first (failures, then the highest ratios), each a link to its cell.
+
+import type { CheckCell } from '../runtime/document';
+import type { CellState } from '../runtime/engine-types';
+import { ratioText } from '../runtime/handcalc/index';
+import { escapeHtml } from './kind';
+
+export interface SummaryRow {
+  id: string;
+  number: string;
+  title: string;
+  status: CellState['status'] | 'pending';
+  ratio?: number;
+}
+
+/** Order: failures, then errors, then passes; within each, highest ratio first; conditions after ratios. */
+export function summaryRows(
+  checks: readonly CheckCell[],
+  state: (id: string) => CellState | undefined,
+  numbers: ReadonlyMap<string, string>,
+): SummaryRow[] {
+  const rank = { fail: 0, error: 1, pending: 2, ok: 3 } as const;
+  return checks
+    .map((c, i) => {
+      const s = state(c.id);
+      return {
+        id: c.id, number: numbers.get(c.id) ?? '', title: c.label || c.name || c.expr,
+        status: s?.status ?? 'pending', ratio: s?.ratio, order: i,
+      };
+    })
+    .sort((a, b) =>
+      rank[a.status] - rank[b.status]
+      || (b.ratio ?? -Infinity) - (a.ratio ?? -Infinity)
+      || a.order - b.order)
+    .map(({ order: _order, ...row }) => row);
+}
+
+const WORDS: Record<SummaryRow['status'], [string, string]> = {
+  ok: ['✓', 'OK'], fail: ['✗', 'NOT OK'], error: ['⚠', 'ERROR'], pending: ['…', 'pending'],
+};
+
+export function summaryHtml(rows: SummaryRow[]): string {
+  if (rows.length === 0) return '';
+  const failing = rows.filter((r) => r.status === 'fail').length;
+  const broken = rows.filter((r) => r.status === 'error').length;
+  const head = `${rows.length} check${rows.length === 1 ? '' : 's'}: ${
+    failing ? `${failing} NOT OK` : 'all OK'}${broken ? `, ${broken} with errors` : ''}`;
+  const items = rows.map((r) => {
+    const [glyph, word] = WORDS[r.status];
+    const pct = r.ratio === undefined ? 0 : Math.max(0, Math.min(100, (r.ratio / 1.25) * 100));
+    const ratio = r.ratio === undefined
+      ? '<span class="sum-ratio">—</span><span class="sum-bar none"></span>'
+      : `<span class="sum-ratio">${escapeHtml(ratioText(r.ratio))}</span><span class="sum-bar"><span class="ratio-fill" style="width:${
+        pct.toFixed(1)}%"></span><span class="ratio-one"></span></span>`;
+    return `<li class="sum-row st-${r.status}"><a href="#cell-${escapeHtml(r.id)}" data-goto="${escapeHtml(r.id)}"><span class="sum-verdict"><span aria-hidden="true">${
+      glyph}</span> ${word}</span>${ratio}<span class="sum-no">${escapeHtml(r.number)}</span><span class="sum-title">${escapeHtml(r.title)}</span></a></li>`;
+  });
+  return `<h2 class="summary-head">Summary of checks <span class="summary-count">${escapeHtml(head)}</span></h2><ol class="summary-list">${items.join('')}</ol>`;
+}

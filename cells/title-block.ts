@@ -1,0 +1,36 @@
+// The title block: project, job number, subject, prepared by, checked by, revision
+// and date. Edited in place; printed at the top of every page.
+
+import type { DocMeta } from '../runtime/document';
+import { META_KEYS } from '../runtime/document';
+import { escapeHtml } from './kind';
+
+const LABELS: Record<keyof DocMeta, string> = {
+  project: 'Project', job: 'Job no.', subject: 'Subject', preparedBy: 'Prepared by',
+  checkedBy: 'Checked by', revision: 'Rev.', date: 'Date',
+};
+
+export class TitleBlock {
+  constructor(private readonly host: HTMLElement, onEdit: (key: keyof DocMeta, value: string) => void) {
+    host.innerHTML = `<div class="tb-grid">${META_KEYS.map((k) =>
+      `<label class="tb-field tb-${k}"><span class="tb-label">${LABELS[k]}</span><input data-meta="${k}" spellcheck="false" autocomplete="off"></label>`,
+    ).join('')}</div>`;
+    host.addEventListener('input', (e) => {
+      const t = e.target as HTMLInputElement;
+      if (t.dataset.meta) onEdit(t.dataset.meta as keyof DocMeta, t.value);
+    });
+  }
+
+  show(meta: DocMeta): void {
+    for (const k of META_KEYS) {
+      const field = this.host.querySelector<HTMLInputElement>(`input[data-meta="${k}"]`)!;
+      if (field.value !== meta[k] && document.activeElement !== field) field.value = meta[k];
+      field.title = meta[k];
+    }
+  }
+}
+
+/** A one-line running head for the printed page, e.g. "LT-26-101 · Halvorsen Street Studios". */
+export function runningHead(meta: DocMeta): string {
+  return escapeHtml([meta.job, meta.project, meta.subject].filter(Boolean).join(' · '));
+}

@@ -1,0 +1,234 @@
+// End to end in real Chromium: the demo record opens, edits recompute, undo and
+// reload restore, bad values are reported in place, notes run nothing, completion
+// offers cell names, two tabs do not overwrite each other. Screenshots go to
+// test-artifacts/ (git-ignored) for a person to look at.
+
+import { readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { parse } from '../../runtime/format/index';
+import { artifactsDir, buildApp, launch, serve, type Browser, type Served } from './harness';
+
+// A small sheet of our own, so the scenarios do not depend on the demo record's numbers.
+const fixture = parse(readFileSync(join(import.meta.dirname, 'fixtures/strip.lt'), 'utf8'));
+
+let outDir: string;
+let server: Served;
+let browser: Browser;
+let page: Page;
+const pageErrors: string[] = [];
+
+async function shot(name: string, p: Page = page): Promise<void> {
+  await p.screenshot({ path: join(artifactsDir(), `e2e-${name}.png`) });
+}
+
+async function ready(p: Page): Promise<void> {
+  await p.waitForSelector('body[data-ready="true"]', { timeout: 30_000 });
+}
+
+/** The visible text of a cell. */
+async function cellText(id: string, p: Page = page): Promise<string> {
+  return (await p.locator(`#cell-${id}`).innerText()).replace(/\s+/g, ' ');
+}
+
+async function waitStatus(id: string, status: string, p: Page = page): Promise<void> {
+  await p.waitForSelector(`#cell-${id}.st-${status}`, { timeout: 10_000 });
+}
+
+async function setValue(id: string, value: string, p: Page = page): Promise<void> {
+  const field = p.locator(`#cell-${id} input.value-field`);
+  await field.fill(value);
+  await field.press('Enter');
+  await field.press('Escape'); // leave the field, so sheet shortcuts apply
+}
+
+beforeAll(async () => {
+  outDir = buildApp();
+  server = await serve(outDir);
+  browser = await launch();
+  page = browser.context.pages()[0] ?? (await browser.context.newPage());
+  page.on('pageerror', (e) => pageErrors.push(e.message));
+  page.on('dialog', (d) => {
+    pageErrors.push(`dialog opened: ${d.message()}`);
+    void d.dismiss();
+  });
+}, 120_000);
+
+afterAll(async () => {
+  await browser?.close();
+  server?.stop();
+  if (outDir) rmSync(outDir, { recursive: true, force: true });
+});
+
+describe('the calc sheet in Chromium', () => {
+  it('opens the demo record with title block, summary, hand calcs and the caution', async () => {
+    await page.goto(server.url);
+    await ready(page);
+    expect(page.url()).toMatch(/#sheet=demo$/);
+    expect(await page.inputValue('input[data-meta="project"]')).not.toBe('');
+    const checks = await page.evaluate(() => (window as any).loadtrace.doc.cells.filter((c: any) => c.kind === 'check').length);
+    expect(checks).toBeGreaterThan(0);
+    expect(await page.locator('.sum-row').count()).toBe(checks);
+    expect(await page.locator('#cells article.cell').count()).toBe(await page.evaluate(() => (window as any).loadtrace.doc.cells.length));
+    expect(await page.locator('#cells .katex').count()).toBeGreaterThan(20);
+    const caution = page.locator('.caution-bar');
+    expect(await caution.isVisible()).toBe(true);
+    expect(await caution.innerText()).toContain("not a substitute for, a licensed engineer's judgement; local codes govern");
+    await shot('01-open-demo');
+  });
+
+  it('opens a sheet of its own through the page', async () => {
+    expect(fixture.errors).toEqual([]);
+    await page.evaluate((doc) => (window as any).loadtraceOpen('e2e-strip', doc), fixture.doc);
+    await waitStatus('k1', 'ok');
+    // d = h − cover − db = 9 − 0.75 − 0.625 = 7.625 in (the fixture's own formula)
+    expect(await cellText('f1')).toContain('7.625in');
+    // 1.2 × 132.5 psf + 1.6 × 50 psf = 239 psf (ASCE 7-22 §2.3.1, combination 2)
+    expect(await cellText('f3')).toContain('239psf');
+    expect(await cellText('k1')).toContain('✓ OK');
+    await shot('02-fixture');
+  });
+
+  it('an edited input recomputes a dependent result and flips a check from OK to NOT OK', async () => {
+    await setValue('i1', '180 mm');
+    await waitStatus('k1', 'fail');
+    // 180 mm = 7.087 in (1 in = 25.4 mm exactly, NIST SP 811 App. B); the display unit in is kept
+    expect(await cellText('i1')).toContain('= 7.087 in');
+    // d = 7.087 − 0.75 − 0.625 = 5.712 in
+    expect(await cellText('f1')).toContain('5.712in');
+    expect(await cellText('k1')).toContain('✗ NOT OK');
+    expect(await page.locator('.sum-row.st-fail').count()).toBe(1);
+    await shot('03-edited-check-fails');
+  });
+
+  it('undo restores the value and the check; redo brings the edit back', async () => {
+    await page.keyboard.press('Control+z');
+    await waitStatus('k1', 'ok');
+    expect(await page.inputValue('#cell-i1 input.value-field')).toBe('9 in');
+    expect(await cellText('f1')).toContain('7.625in');
+    await shot('04-undone');
+    await page.keyboard.press('Control+Shift+z');
+    await waitStatus('k1', 'fail');
+    expect(await page.inputValue('#cell-i1 input.value-field')).toBe('180 mm');
+  });
+
+  it('a reload keeps the edit and the undo history', async () => {
+    await page.waitForFunction(() => document.querySelector('#status')?.textContent === 'Saved');
+    await page.reload();
+    await ready(page);
+    expect(page.url()).toMatch(/#sheet=e2e-strip$/);
+    expect(await page.inputValue('#cell-i1 input.value-field')).toBe('180 mm');
+    await waitStatus('k1', 'fail');
+    await shot('05-reloaded');
+    await page.locator('#cell-k1 .cell-no').click();
+    await page.keyboard.press('Control+z');
+    await waitStatus('k1', 'ok');
+    expect(await page.inputValue('#cell-i1 input.value-field')).toBe('9 in');
+  });
+
+  it('a bad value shows its message in place while the rest keeps computing', async () => {
+    await setValue('i1', '9 inches of rain');
+    await page.waitForSelector('#cell-i1 .cell-error');
+    expect(await page.locator('#cell-i1 .cell-error').innerText()).toMatch(/not a number with a unit/);
+    // the last good value (9 in) keeps the dependents computing
+    expect(await cellText('f1')).toContain('7.625in');
+    expect(await page.locator('#cell-f1 .cell-error').count()).toBe(0);
+    await waitStatus('k1', 'ok');
+    await shot('06-bad-value');
+    await setValue('i1', `0'-9"`); // feet-inch notation is read too
+    await page.waitForSelector('#cell-i1 .cell-error', { state: 'detached' });
+    expect(await cellText('i1')).toContain('= 9 in');
+  });
+
+  it('a note with HTML and a javascript: link runs nothing', async () => {
+    await page.locator('#cell-n1 .cell-no').click();
+    await page.keyboard.press('Enter');
+    await page.locator('#cell-n1 .cm-content').waitFor();
+    await page.waitForFunction(() => document.activeElement?.closest('.cm-editor') !== null);
+    await page.keyboard.press('Control+a');
+    await page.keyboard.insertText(
+      'Hostile <img src=x onerror="window.__pwned=1"> and <script>window.__pwned=2</script>\n'
+      + '[click me](javascript:window.__pwned=3) and [ok](https://example.org) with $\\href{javascript:window.__pwned=4}{x}$',
+    );
+    await page.keyboard.press('Control+Enter');
+    await page.waitForFunction(() => document.querySelector('#cell-n1 .note-text')?.textContent?.includes('Hostile'));
+    const note = page.locator('#cell-n1 .note-text');
+    expect(await note.locator('img, script, iframe, [onerror]').count()).toBe(0);
+    expect(await note.locator('a[href^="javascript"]').count()).toBe(0);
+    expect(await note.locator('a[href="https://example.org"]').count()).toBe(1);
+    await note.getByText('[click me](javascript:window.__pwned=3)').click();
+    await page.locator('#cell-n1 .note-math').click();
+    await page.waitForTimeout(200);
+    expect(await page.evaluate(() => (window as unknown as { __pwned?: number }).__pwned)).toBeUndefined();
+    expect(pageErrors).toEqual([]);
+    await shot('07-hostile-note');
+  });
+
+  it('completion in a formula offers a cell name with its value', async () => {
+    await page.locator('#cell-f1 .cell-no').click();
+    await page.keyboard.press('Enter');
+    await page.waitForFunction(() => document.activeElement?.closest('#cell-f1 .cm-editor') !== null);
+    await page.keyboard.press('End');
+    await page.keyboard.type(' + 0 * cov');
+    const option = page.locator('.cm-tooltip-autocomplete li', { hasText: 'cover' });
+    await option.first().waitFor({ timeout: 5000 });
+    expect(await option.first().innerText()).toContain('= 0.75 in');
+    await shot('08-completion');
+    await page.keyboard.press('Enter'); // takes the completion
+    await page.waitForFunction(() => document.querySelector('#cell-f1 .cm-content')?.textContent?.endsWith('0 * cover'));
+    await page.keyboard.press('Enter'); // finishes the formula
+    await page.waitForFunction(() => document.querySelector('#cell-f1 .cell-math')?.textContent?.includes('+0⋅cover'));
+    expect(await cellText('f1')).toContain('7.625in');
+  });
+
+  it('marks a formula error at its column in the editor', async () => {
+    await page.locator('#cell-f1 .cell-no').click();
+    await page.keyboard.press('Enter');
+    await page.waitForFunction(() => document.activeElement?.closest('#cell-f1 .cm-editor') !== null);
+    await page.keyboard.press('End');
+    await page.keyboard.type(' + nosuchname');
+    await page.locator('#cell-f1 .cm-lt-error').waitFor({ timeout: 5000 });
+    expect(await page.locator('#cell-f1 .cm-lt-error').innerText()).toBe('n');
+    expect(await page.locator('#cell-f1 .cell-error').innerText()).toMatch(/nosuchname/);
+    await shot('09-error-at-column');
+    await page.keyboard.press('Escape');
+    await page.keyboard.press('Control+z');
+    await page.waitForSelector('#cell-f1.st-ok');
+  });
+
+  it('switches display units to SI and back', async () => {
+    await page.locator('#btn-units').click();
+    await page.waitForFunction(() => document.querySelector('#cell-f1 .hc')?.textContent?.includes('mm'));
+    // 7.625 in × 25.4 = 193.7 mm (1 in = 25.4 mm exactly, NIST SP 811 App. B)
+    expect(await cellText('f1')).toContain('193.7mm');
+    await shot('10-si-units');
+    await page.locator('#btn-units').click();
+    await page.waitForFunction(() => !document.querySelector('#cell-f1 .hc')?.textContent?.includes('mm'));
+  });
+
+  it('a second tab on the same sheet warns instead of overwriting', async () => {
+    const second = await browser.context.newPage();
+    await second.goto(page.url());
+    await ready(second);
+    await setValue('i5', '60 psf');
+    await second.waitForSelector('#banner:not([hidden])', { timeout: 5000 });
+    expect(await second.locator('#banner').innerText()).toMatch(/changed in another tab/);
+    await shot('11-second-tab-warns', second);
+    await second.getByText("Load the other tab's version").click();
+    await second.waitForFunction(() => (document.querySelector('#cell-i5 input') as HTMLInputElement)?.value === '60 psf');
+    await second.close();
+  });
+
+  it('prints with the title block and the caution', async () => {
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.locator('.toolbar').isVisible()).toBe(false);
+    expect(await page.locator('thead .title-block').isVisible()).toBe(true);
+    expect(await page.locator('tfoot .print-caution').isVisible()).toBe(true);
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await shot('12-print');
+    const pdf = await page.pdf({ format: 'Letter' });
+    expect(pdf.subarray(0, 4).toString()).toBe('%PDF');
+    await page.emulateMedia({ media: 'screen' });
+  });
+});
