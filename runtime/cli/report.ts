@@ -56,7 +56,7 @@ export function table(rows: ResultRow[], engine: Engine): string {
       ? s?.ratio !== undefined ? `${s.demand?.text} / ${s.capacity?.text} = ${s.display?.text}` : (s?.display?.text ?? '')
       : s?.display ? s.display.text.replace(new RegExp(` ${escape(s.display.unit)}$`), '') : '';
     const status = r.status === 'error' ? `error: ${r.error}` : r.kind === 'check' ? (r.status === 'ok' ? 'pass' : r.status) : r.status;
-    lines.push([r.name ?? (r.kind === 'check' ? '(check)' : ''), clip(r.label ?? '', 44), shown, r.kind === 'check' ? '' : (r.unit ?? ''), status]);
+    lines.push([r.name ?? (r.kind === 'check' ? '(check)' : ''), clip(r.label ?? '', 44), clip(shown, 60), r.kind === 'check' ? '' : (r.unit ?? ''), status]);
   }
   const widths = lines[0].map((_, i) => Math.max(...lines.map((l) => (i === 4 ? 0 : l[i].length))));
   return lines.map((l) => l.map((c, i) => (i === 4 ? c : c.padEnd(widths[i]))).join('  ').trimEnd()).join('\n');
