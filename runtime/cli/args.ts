@@ -10,12 +10,14 @@ export interface CalcArgs {
 
 export class UsageError extends Error {}
 
-export const USAGE = `usage: npm run calc -- FILE [--set NAME=VALUE]... [--json] [--diff OTHER]
+export const USAGE = `usage: npm run calc -- FILE [--set NAME=VALUE]... [--json] [--diff OTHER] [--export OUT.html]
   FILE              a template or record (.lt text, or an exported .html record)
   --set NAME=VALUE  override an input, e.g. --set fc="5000 psi"
   --json            print the results as JSON instead of a table
   --diff OTHER      compare with a second record (e.g. another revision): the inputs,
                     results and checks that differ, side by side; exit 0 (2 if unreadable)
+  --export OUT.html write the calc record: one self-contained, sealed HTML file
+                    (builds the app shell first if dist-record/ is missing or stale)
 exit code: 0 every check passes, 1 a check fails, 2 the document or an override is broken`;
 
 export function parseArgs(argv: string[]): CalcArgs {

@@ -1,7 +1,7 @@
 // `npm run calc -- FILE [--set NAME=VALUE]... [--json]`: run a template or record
 // headless with the same engine the browser uses.
 
-import { readFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import type { CalcDocument, Cell } from '../document';
 import { parseInput } from '../formula/input-value';
 import { createEngine } from '../engine';
@@ -10,6 +10,8 @@ import { setInputValue } from '../edit/index';
 import { parseArgs, UsageError, type CalcArgs } from './args';
 import { printDiff } from './diff';
 import { exitCode, resultRows, table } from './report';
+import { exportRecord, readDocumentSource } from '../record/index';
+import { recordShellFile } from './record-shell';
 
 /** A file's document, its faults reported through `err`; undefined when it cannot be read at all. */
 async function loadDocument(file: string, err: (s: string) => void): Promise<{ doc: CalcDocument; broken: boolean } | undefined> {
@@ -20,9 +22,12 @@ async function loadDocument(file: string, err: (s: string) => void): Promise<{ d
     err(`cannot read ${file}: ${(e as Error).message}`);
     return undefined;
   }
-  const { doc, errors } = parse(text);
+  // An exported .html record: its embedded document, checked against its seal.
+  const source = await readDocumentSource(text);
+  for (const p of source.problems) err(`${file}: ${p}`);
+  const { doc, errors } = parse(source.docText);
   for (const e of errors) err(`${file}:${e.line}:${e.column}: ${e.message}`);
-  return { doc, broken: errors.length > 0 };
+  return { doc, broken: errors.length > 0 || source.problems.length > 0 };
 }
 
 export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
@@ -51,6 +56,17 @@ export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s:
     const s = engine.state(cell.id);
     if (s?.status === 'error') {
       err(`--set ${name}=${value}: ${s.error?.message}`);
+      engine.dispose();
+      return 2;
+    }
+  }
+  if (args.exportTo !== undefined) {
+    try {
+      const record = await exportRecord(doc, (id) => engine.state(id), recordShellFile(err));
+      writeFileSync(args.exportTo, record.html);
+      err(`record written: ${args.exportTo} (${(record.html.length / 1e6).toFixed(2)} MB, SHA-256 ${record.digest})`);
+    } catch (e) {
+      err(`--export ${args.exportTo}: ${(e as Error).message}`);
       engine.dispose();
       return 2;
     }
