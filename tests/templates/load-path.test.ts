@@ -324,9 +324,9 @@ describe('load-path.lt with edition = 318-14', () => {
 describe('load-path.lt as a document', () => {
   it('is well formed and round-trips through the format', () => {
     const doc = expectWellFormed(FILE);
-    // Load-path order: loads, slab, punching, column, footing, soil.
+    // Load-path order: loads, slab, punching, column, footing, soil (figures may follow).
     const titles = doc.cells.filter((c) => c.kind === 'section').map((c) => (c.kind === 'section' ? c.title : ''));
-    expect(titles.map((t) => t.split(/[ :,]/)[0])).toEqual(['Floor', 'Slab', 'Punching', 'Column', 'Spread', 'Soil']);
+    expect(titles.slice(0, 6).map((t) => t.split(/[ :,]/)[0])).toEqual(['Floor', 'Slab', 'Punching', 'Column', 'Spread', 'Soil']);
   });
 
   it('runs through the headless runner with exit code 0', async () => {
