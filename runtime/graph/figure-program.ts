@@ -31,19 +31,33 @@ function knownUnit(u: string | undefined): string | undefined {
 
 /** Display unit per parameter of the figure function called at the top of `expr`. */
 export function argumentUnits(expr: string, unitOf: (name: string) => string): Record<string, string> {
-  let node: any = parseFormula(expr);
-  while (node?.type === 'ParenthesisNode') node = node.content;
   const units: Record<string, string> = {};
-  const fn = node?.type === 'FunctionNode' ? BY_NAME.get(node.fn?.name) : undefined;
-  if (!fn) return units;
+  // The figure call itself, or each branch of `cond ? fig(...) : fig(...)`.
+  const calls: any[] = [];
+  const visit = (n: any, depth: number) => {
+    while (n?.type === 'ParenthesisNode') n = n.content;
+    if (depth > 8 || !n) return;
+    if (n.type === 'ConditionalNode') {
+      visit(n.trueExpr, depth + 1);
+      visit(n.falseExpr, depth + 1);
+    } else if (n.type === 'FunctionNode') calls.push(n);
+  };
+  visit(parseFormula(expr), 0);
+  for (const node of calls) {
+    const fn = BY_NAME.get(node.fn?.name);
+    if (fn) addUnits(node, fn, units, unitOf);
+  }
+  return units;
+}
+
+function addUnits(node: any, fn: (typeof FIGURE_FUNCTIONS)[number], units: Record<string, string>, unitOf: (name: string) => string): void {
   (node.args as any[]).forEach((arg, i) => {
     const param = fn.params[i];
     if (!param || param.type === 'text' || param.type === '1') return;
     while (arg?.type === 'ParenthesisNode') arg = arg.content;
     const u = arg?.type === 'SymbolNode' ? knownUnit(unitOf(arg.name)) : knownUnit(typedUnit(arg.toString()));
-    if (u) units[param.name] = u;
+    if (u && !units[param.name]) units[param.name] = u;
   });
-  return units;
 }
 
 export function figureProgram(cell: FigureCell, scope: CompileScope, unitOf: (name: string) => string): CellProgram {
