@@ -11,6 +11,12 @@ import { escapeHtml } from './escape';
 import { noteHtml } from './markdown';
 import { reviewHtml } from './static-review';
 import { texHtml } from './tex';
+// Figures and sweeps: the DOM-free SVG from runtime/figures (every text in it escaped).
+import { cellSvg } from '../figures/render';
+const figureHtml = (cell: Cell, s: CellState | undefined): string => {
+  const svg = cellSvg(cell, s);
+  return svg ? `<figure class="lt-figure">${svg}</figure>` : '';
+};
 
 export const CAUTION = "Results are an aid to, not a substitute for, a licensed engineer's judgement; local codes govern.";
 
@@ -170,7 +176,7 @@ function cellHtml(cell: Cell, ctx: Ctx): string {
 function otherHtml(cell: Cell, s: CellState | undefined): string {
   const source = 'expr' in cell && typeof cell.expr === 'string' ? cell.expr : '';
   return `${labelHtml(cell.label)}<div class="lt-meta">${escapeHtml(cell.kind)}${
-    source ? `: <code>${escapeHtml(source.slice(0, 2000))}</code>` : ''}</div>${errorHtml(s)}`;
+    source ? `: <code>${escapeHtml(source.slice(0, 2000))}</code>` : ''}</div>${figureHtml(cell, s)}${errorHtml(s)}`;
 }
 
 /** Governing first: failures, errors, pending, passes; within each the highest ratio first. */

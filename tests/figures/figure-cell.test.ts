@@ -166,3 +166,18 @@ describe('figure and sweep cells in the format, the edits and the view', () => {
     engine.dispose();
   });
 });
+
+describe('figures in the static record', () => {
+  it('the static rendering embeds every figure and sweep as escaped SVG', async () => {
+    const { staticHtml } = await import('../../runtime/record/static-html');
+    const d = load();
+    const engine = createEngine(d);
+    await engine.settled();
+    const html = staticHtml(d, (id) => engine.state(id));
+    expect(html.match(/<svg [^>]*data-figure="punching"/g)).toHaveLength(1);
+    expect(html.match(/<svg [^>]*data-figure="sweep"/g)).toHaveLength(1);
+    const svg = html.slice(html.indexOf('<svg'), html.indexOf('</svg>') + 6);
+    expect(checkXml(svg).problems).toEqual([]);
+    engine.dispose();
+  });
+});
