@@ -103,7 +103,12 @@ export function formulaProgram(cell: FormulaCell, scope: CompileScope): CellProg
   };
 }
 
-export function checkProgram(cell: CheckCell, scope: CompileScope, unitOf: (source: unknown) => string): CellProgram {
+export function checkProgram(
+  cell: CheckCell,
+  scope: CompileScope,
+  unitOf: (source: unknown) => string,
+  fallbackUnit: (dims: readonly number[]) => string = () => '',
+): CellProgram {
   let compiled;
   try {
     compiled = compileCheck(cell.expr, scope);
@@ -121,7 +126,8 @@ export function checkProgram(cell: CheckCell, scope: CompileScope, unitOf: (sour
     };
   }
   const d = compiled.demand!, k = compiled.capacity!;
-  const demandUnit = unitOf(d.source) || unitOf(k.source);
+  // The unit of a cell named on either side, else the unit typed in a quantity, else the usual one.
+  const demandUnit = unitOf(d.source) || unitOf(k.source) || knownUnit(d.type) || knownUnit(k.type) || fallbackUnit((d.type as { dims: readonly number[] }).dims);
   return {
     type: NUMBER, inputs, reads, clauses, unit: '', demandUnit, form: 'ratio',
     definition: (...args: unknown[]): CheckResult => {
@@ -134,6 +140,16 @@ export function checkProgram(cell: CheckCell, scope: CompileScope, unitOf: (sour
       return { value: ratio, pass: !!pass(args), demand, capacity };
     },
   };
+}
+
+function knownUnit(t: VType): string {
+  if (t.t !== 'num' || !t.hint) return '';
+  try {
+    unitInfo(t.hint);
+    return t.hint;
+  } catch {
+    return '';
+  }
 }
 
 export function asCellError(e: unknown): CellError {

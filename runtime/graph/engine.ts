@@ -12,6 +12,8 @@ import { structuralProblem, type CompileScope, type NameInfo } from '../formula/
 import { columnOf, parseFormula, symbolNames } from '../formula/parse';
 import { nameProblem } from '../formula/names';
 import { findCycles } from './cycles';
+import { preferredUnit } from '../units/preferred';
+import { sheetSystem } from '../units/systems';
 import type { LibFunction } from '../library/types';
 import { BUILTINS } from '../formula/builtins';
 import { checkProgram, formulaProgram, inputProgram, type CellProgram } from './cell-program';
@@ -315,7 +317,7 @@ class DocEngine implements Engine {
       case 'formula':
         return formulaProgram(cell, this.scopeFor(cell.expr));
       case 'check':
-        return checkProgram(cell, this.scopeFor(cell.expr), (node) => this.unitOfNode(node));
+        return checkProgram(cell, this.scopeFor(cell.expr), (node) => this.unitOfNode(node), (dims) => preferredUnit(dims, sheetSystem(this.doc)));
       case 'figure':
         return figureProgram(cell, this.scopeFor(cell.expr, this.figureFunctions), (n) => this.unitOfName(n));
       case 'sweep':

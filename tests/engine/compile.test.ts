@@ -121,3 +121,16 @@ describe('checks', () => {
     expect(state(engine.doc.cells[2]).error?.kind).toBe('unit');
   });
 });
+
+describe('check display units', () => {
+  it('a check between expressions shows the usual unit of its dimension', async () => {
+    const { state, engine } = await run(doc(input('a', '2 in'), input('b', '3 in'), check('a * b <= 2 * b * b')));
+    // a·b = 6 in², 2b² = 18 in² (arithmetic); no cell names the unit, so the sheet's usual area unit
+    expect(state(engine.doc.cells[2]).demand?.text).toBe('6 in^2');
+    expect(state(engine.doc.cells[2]).capacity?.text).toBe('18 in^2');
+  });
+  it('a quantity typed on one side gives its unit', async () => {
+    const { state, engine } = await run(doc(input('P', '80 kN'), check('2 * P <= 200 kN')));
+    expect(state(engine.doc.cells[1]).demand?.text).toBe('160 kN');
+  });
+});
