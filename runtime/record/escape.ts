@@ -1,9 +1,14 @@
 // Escaping for the three places document text lands in a record: HTML text and
 // attributes, CSS strings (the printed title block), and the embedded data block.
 
+const HTML_ENTITIES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
+const HTML_SPECIAL = /[&<>"']/g;
+
 /** Escapes text for HTML content and attribute values (quoted with "). */
 export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
+  HTML_SPECIAL.lastIndex = 0;
+  if (!HTML_SPECIAL.test(text)) return text;
+  return text.replace(HTML_SPECIAL, (ch) => HTML_ENTITIES[ch]);
 }
 
 /**
