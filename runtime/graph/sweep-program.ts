@@ -81,8 +81,11 @@ export function sweepProgram(cell: SweepCell, lookup: (name: string) => SweepCel
       const w = new WhatIf(graph, input.id);
       const ids = outs.map((o) => o.info.id);
       const points = xs.map((x) => w.at(x, ids));
-      const series = outs.map((o, k) => seriesOf(o.name, o.info, points.map((p) => outcomeOf(p[k], o.info.kind === 'check')), xs));
-      return { input: cell.input, unit, xs, current: current as number, series };
+      // Programs as they are now (a display unit may have changed since this sweep compiled).
+      const now = (id: string, was?: CellProgram) => graph.program(id) ?? was;
+      const series = outs.map((o, k) => seriesOf(o.name, { ...o.info, program: now(o.info.id, o.info.program) },
+        points.map((p) => outcomeOf(p[k], o.info.kind === 'check')), xs));
+      return { input: cell.input, unit: now(input.id, input.program)?.unit ?? unit, xs, current: current as number, series };
     },
   };
 }

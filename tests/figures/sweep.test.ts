@@ -170,3 +170,19 @@ describe('what-if on a real template (docs-templates/figures-demo.lt)', () => {
     engine.dispose();
   });
 });
+
+describe('sweep labels follow the cells', () => {
+  it('a new display unit on a plotted result shows in the sweep without recompiling it', async () => {
+    const d = load(LINEAR);
+    const engine = createEngine(d);
+    await engine.settled();
+    expect(engine.state('w1')!.sweep!.series[1].unit).toBe('kip');
+    const next = { ...d, cells: d.cells.map((c) => (c.id === 'f1' ? { ...c, unit: 'lbf' } : c)) };
+    engine.update(next);
+    await engine.settled();
+    const s = engine.state('w1')!.sweep!;
+    expect(s.series[1].unit).toBe('lbf');
+    expect(s.series[1].values[0]! / 4448.2216152605).toBeCloseTo(5, 9); // values stay SI: 5 kip
+    engine.dispose();
+  });
+});
