@@ -29,7 +29,9 @@ function newestSource(): number {
 
 export function buildShell(): void {
   const vite = join(ROOT, 'node_modules/.bin/vite');
-  const r = spawnSync(vite, ['build', '--config', 'cells/record/vite.config.ts', '--logLevel', 'warn'], { cwd: ROOT, encoding: 'utf8' });
+  const r = spawnSync(vite, ['build', '--config', 'cells/record/vite.config.ts', '--logLevel', 'warn'], {
+    cwd: ROOT, encoding: 'utf8', env: { ...process.env, VITE_CONFIG_NATIVE_IGNORE_WARNING: 'true' },
+  });
   if (r.status !== 0) throw new Error(`building the record shell failed:\n${r.stdout}\n${r.stderr}`);
 }
 

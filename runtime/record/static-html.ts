@@ -86,11 +86,16 @@ function labelHtml(label: string | undefined): string {
   return label ? `<div class="lt-label">${escapeHtml(label)}</div>` : '';
 }
 
+/** A display text as the result column shows it: ft^2 → ft², kip*ft → kip·ft. */
+export function resultText(text: string): string {
+  return text.replace(/\^2(?![\d.])/g, '²').replace(/\^3(?![\d.])/g, '³').replace(/\s*\*\s*/g, '·');
+}
+
 /** The result column: the value as text, so every result reads without fonts or scripts. */
 function resultHtml(s: CellState | undefined): string {
   if (s?.status === 'error') return '<span class="lt-res-err">error</span>';
   if (!done(s) || !s!.display) return '<span class="lt-res-none">—</span>';
-  return escapeHtml(s!.display.text);
+  return escapeHtml(resultText(s!.display.text));
 }
 
 function inputHtml(cell: InputCell, s: CellState | undefined): string {

@@ -41,6 +41,3 @@ export const computingDocuments: fc.Arbitrary<CalcDocument> = fc
     cells.push({ id: 'K9', kind: 'check', expr: `f0 * a0 * a1 <= 1e9 kip`, clause: 'common practice' });
     return { meta, cells };
   });
-
-/** A minimal app shell: one inline script, as a single-file build has. */
-export const STUB_SHELL = '<!doctype html><html lang="en"><head><meta charset="utf-8"><title>shell</title></head><body><p id="app">app</p><script type="module">document.getElementById("app").textContent = "ran";</script></body></html>';

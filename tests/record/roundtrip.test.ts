@@ -10,7 +10,8 @@ import { createEngine } from '../../runtime/engine';
 import { parse, serialize } from '../../runtime/format/index';
 import { decodeDataBlock, encodeDataBlock, exportComputed, sha256Hex, unpack } from '../../runtime/record/index';
 import { documents } from '../format/arbitraries';
-import { STUB_SHELL, computingDocuments } from './arbitraries';
+import { computingDocuments } from './arbitraries';
+import { STUB_SHELL } from './fixtures';
 
 
 async function results(doc: CalcDocument) {
