@@ -1,12 +1,31 @@
 import { defineConfig } from 'vitest/config';
 
+// Unit and property tests run in parallel; the Chromium end-to-end tests run after
+// them, one file at a time, so two cores are not shared by several browsers at once.
 export default defineConfig({
   test: {
-    include: ['tests/**/*.test.ts'],
     testTimeout: 60_000,
-    hookTimeout: 60_000,
-    // Browser tests share one Chromium and a preview server; keep files serial there.
-    fileParallelism: true,
+    hookTimeout: 180_000,
     pool: 'forks',
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'unit',
+          include: ['tests/**/*.test.ts'],
+          exclude: ['tests/e2e/**'],
+          sequence: { groupOrder: 0 },
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'e2e',
+          include: ['tests/e2e/**/*.test.ts'],
+          fileParallelism: false,
+          sequence: { groupOrder: 1 },
+        },
+      },
+    ],
   },
 });
