@@ -14,6 +14,7 @@ import { TabGuard } from './tab-guard';
 import { sheetTitle, templateByKey, templates } from './templates';
 import { escapeHtml } from './kind';
 import { installRecord } from './record/install';
+import { installReview } from './review/install';
 
 const $ = <T extends HTMLElement>(sel: string) => document.querySelector<T>(sel)!;
 
@@ -56,6 +57,7 @@ async function boot(): Promise<void> {
   }, autosave);
   (window as unknown as { loadtrace: App }).loadtrace = app; // for the end-to-end tests and the benchmark
   const records = installRecord(app); // calc records (issue 5): export, open, a record page's own document
+  installReview(app); // checker review (issue 7): review mode, comments, sign-off, revisions, compare
 
   async function openKey(key: string): Promise<void> {
     const saved = store ? await store.load(key) : undefined;
