@@ -2,15 +2,17 @@
 // Loads: ASCE 7-22 §2.3.1 combination 2 (1.2D + 1.6L) on invented values.
 
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parseArgs } from '../../runtime/cli/args';
 import { runCalc } from '../../runtime/cli/main';
 import { setInputValue } from '../../runtime/edit/index';
-import { serialize } from '../../runtime/format/index';
+import { parse, serialize } from '../../runtime/format/index';
+import { exportComputed } from '../../runtime/record/index';
 import { issueRevision } from '../../runtime/review/index';
+import { STUB_SHELL } from '../record/fixtures';
 import { resultsOf, sheet } from './fixture';
 
 async function calc(argv: string[]) {
@@ -68,6 +70,21 @@ describe('calc --diff', () => {
     const missing = await calc([a, '--diff', join(tmpdir(), 'no-such-record.lt')]);
     expect(missing.code).toBe(2);
     expect(missing.err).toMatch(/cannot read/);
+  });
+
+  it('reads exported .html records too (A.html --diff B.html)', async () => {
+    const [a, b] = await twoRevisions();
+    const html = async (file: string) => {
+      const out = file.replace(/\.lt$/, '.html');
+      const { doc } = parse(readFileSync(file, 'utf8'));
+      writeFileSync(out, (await exportComputed(doc, STUB_SHELL, '2026-12-04T00:00:00Z')).html);
+      return out;
+    };
+    const r = await calc([await html(a), '--diff', await html(b)]);
+    expect(r.err).toBe('');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/^Inputs \(1 differs\)\n.*\n {2}L\s+50 psf\s+60 psf\n/);
+    expect(r.out).toMatch(/\n {2}q_ok\s+0\.8 pass\s+0\.864 pass\s+\+0\.064$/); // 200/250 → 216/250
   });
 
   it('runs as npm run calc does', async () => {
