@@ -166,6 +166,19 @@ describe('checker review in Chromium', () => {
     await shot('05-signed', '#cell-s2');
   });
 
+  it('a reload keeps the revision, the comment and the sign-off (autosaved with the sheet)', async () => {
+    await page.waitForFunction(() => document.querySelector('#status')?.textContent === 'Saved');
+    await page.reload();
+    await page.waitForSelector('body[data-ready="true"]', { timeout: 30_000 });
+    await settle();
+    expect(await text('#review-title-line .rv-open-count')).toBe('Open comments: 1 of 1');
+    expect(await text('#cell-s2 .rv-diff')).toBe('✓ Signed off: B. Checker, 2026-12-03 (Rev 0)');
+    expect(await page.inputValue('input[data-meta="revision"]')).toBe('0');
+    await page.click('.toolbar [data-rv="review"]'); // review mode is per visit: on again
+    await settle();
+    expect(await text('#review-panel .rv-count')).toBe('Since Rev 0: nothing changed');
+  });
+
   it('the preparer edits the signed section: the sign-off shows stale', async () => {
     await page.click('.toolbar [data-rv="review"]'); // review mode off
     await setValue('i4', '260 psf');
