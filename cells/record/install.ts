@@ -123,6 +123,7 @@ export function installRecord(app: App): RecordHooks {
     await app.engine!.settled();
     await app.view.whenRendered();
     document.documentElement.classList.add('lt-live');
+    performance.mark('loadtrace:record-live'); // every cell rendered (read by bench:record)
     showProblems('This record may not be what was issued.', problems);
     app.setStatus(checked.sealOk ? 'Record opened as issued: seal intact' : 'Record opened: seal broken (see the message above)');
     return true;

@@ -11,8 +11,9 @@ export const RUN_ID = 'lt-app-run';
 /** Runs the app; on failure leaves the static rendering in view and says why. */
 export const LOADER = `
 try {
-  const packed = document.getElementById('${APP_ID}').textContent.trim();
-  const bytes = Uint8Array.from(atob(packed), (c) => c.charCodeAt(0));
+  const bin = atob(document.getElementById('${APP_ID}').textContent.trim());
+  const bytes = new Uint8Array(bin.length);
+  for (let i = 0; i < bin.length; i++) bytes[i] = bin.charCodeAt(i);
   const code = await new Response(new Blob([bytes]).stream().pipeThrough(new DecompressionStream('gzip'))).text();
   const run = document.createElement('script');
   run.id = '${RUN_ID}';

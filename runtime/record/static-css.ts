@@ -7,7 +7,7 @@ import { cssString } from './escape';
 import { CAUTION } from './static-html';
 
 /** Printed title-block fields are cut to this many characters so the margin stays one or two lines. */
-const FIELD_MAX = 90;
+const FIELD_MAX = 80;
 
 function field(label: string, value: string): string {
   const v = value.length > FIELD_MAX ? `${value.slice(0, FIELD_MAX)}…` : value;
@@ -16,12 +16,12 @@ function field(label: string, value: string): string {
 
 /** The @page rules for a document's title block (screen rules do not depend on the document). */
 export function pageCss(meta: DocMeta): string {
-  const box = 'font: 8pt/1.45 system-ui, "DejaVu Sans", sans-serif; white-space: pre-wrap; vertical-align: bottom; border-bottom: 1.4pt solid #000; padding: 0 1.5mm 1.6mm; color: #000;';
+  const box = 'font: 8pt/1.5 system-ui, "DejaVu Sans", sans-serif; white-space: pre-wrap; vertical-align: bottom; border-bottom: 1.4pt solid #000; padding: 0 1mm 1.6mm; color: #000;';
+  // Only the left and right boxes: a centre box is always centred on the page and would overlap a long left one.
   return `@page {
   margin: 27mm 13mm 15mm 13mm;
-  @top-left { ${box} width: 46%; text-align: left; content: ${field('PROJECT', meta.project)} "\\A " ${field('SUBJECT', meta.subject)}; }
-  @top-center { ${box} width: 28%; text-align: left; content: ${field('JOB NO.', meta.job)} "\\A " ${field('PREPARED', meta.preparedBy)} "   " ${field('CHECKED', meta.checkedBy)}; }
-  @top-right { ${box} width: 26%; text-align: right; content: ${field('REV.', meta.revision)} "   " ${field('DATE', meta.date)} "\\A SHEET " counter(page) " OF " counter(pages); }
+  @top-left { ${box} width: 60%; text-align: left; content: ${field('PROJECT', meta.project)} "\\A " ${field('SUBJECT', meta.subject)}; }
+  @top-right { ${box} width: 40%; text-align: right; content: ${field('JOB NO.', meta.job)} "   " ${field('REV.', meta.revision)} "   " ${field('DATE', meta.date)} "\\A " ${field('PREPARED', meta.preparedBy)} "   " ${field('CHECKED', meta.checkedBy)} "\\A SHEET " counter(page) " OF " counter(pages); }
   @bottom-center { font: 7pt system-ui, "DejaVu Sans", sans-serif; color: #000; content: ${cssString(CAUTION)}; }
 }`;
 }
@@ -33,9 +33,10 @@ export const STATIC_CSS = `
   box-shadow: 0 1px 2px rgba(0,0,0,.12), 0 6px 18px rgba(60,50,30,.12); }
 .lt-static * { box-sizing: border-box; }
 .lt-static .lt-warning { border: 2px solid #8a5a00; background: #fff4d6; padding: .5rem .8rem; font: 600 14px system-ui, sans-serif; margin: 0 0 1rem; }
-.lt-tb { display: grid; grid-template-columns: 3fr 1.3fr 1fr; border: 1.5px solid var(--lt-ink); margin-bottom: .8rem; }
+.lt-tb { display: grid; grid-template-columns: 3fr 1.2fr 1.2fr 1fr; border: 1.5px solid var(--lt-ink); margin-bottom: .8rem; }
 .lt-tb-f { display: flex; flex-direction: column; padding: .2rem .45rem; border-right: 1px solid #b9b09a; border-bottom: 1px solid #b9b09a; min-width: 0; overflow-wrap: anywhere; }
-.lt-tb-f.lt-wide { grid-column: span 1; }
+.lt-tb-f.lt-span2 { grid-column: span 2; }
+.lt-summary a { color: inherit; }
 .lt-tb-k { font: 10px/1.3 system-ui, sans-serif; text-transform: uppercase; letter-spacing: .08em; color: var(--lt-soft); }
 .lt-tb-v { font-size: 14px; }
 .lt-caution { font: 13px system-ui, sans-serif; border-left: 4px solid #8a5a00; padding: .3rem .6rem; background: #fbf5e4; margin: 0 0 .4rem; }
@@ -59,8 +60,9 @@ export const STATIC_CSS = `
 .lt-body { min-width: 0; overflow-wrap: anywhere; }
 .lt-label { font: 13px system-ui, sans-serif; color: var(--lt-soft); }
 .lt-eq { overflow-x: auto; overflow-y: hidden; }
-.lt-eq .katex-display { margin: .25rem 0; text-align: left; }
-.lt-eq .katex-display > .katex { text-align: left; }
+.lt-eq math { font-size: 1.12em; }
+.lt-eq math[display="block"] { display: math; margin: .2rem 0 .2rem .6rem; }
+.lt-textres { margin: .1rem 0 .2rem .6rem; font-style: italic; }
 .lt-res { font: 600 14px system-ui, sans-serif; text-align: right; padding-top: .2rem; overflow-wrap: anywhere; font-variant-numeric: tabular-nums; }
 .lt-check.lt-st-ok .lt-res { color: var(--lt-ok); }
 .lt-check.lt-st-fail .lt-res { color: var(--lt-fail); }
@@ -78,6 +80,9 @@ export const STATIC_CSS = `
 .lt-cstat { font-weight: 600; }
 .lt-foot { margin-top: 1.4rem; font: 11px system-ui, sans-serif; color: var(--lt-soft); overflow-wrap: anywhere; }
 
+/* Only what is on screen is laid out (a record opens faster); printing lays out all. */
+@media screen { .lt-static .lt-cell, .lt-static .lt-sec, .lt-static .lt-summary tr { content-visibility: auto; contain-intrinsic-size: auto 3.5rem; } }
+
 /* A record page before (or without) its script: only the static rendering shows. The
    app marks the page lt-live once it runs; printing always prints the static sheets. */
 html:has(> body > #lt-static):not(.lt-live) body > :not(#lt-static) { display: none !important; }
@@ -88,10 +93,10 @@ html.lt-live > body > #lt-static { display: none; }
   html:has(> body > #lt-static) > body > :not(#lt-static) { display: none !important; }
   html > body > #lt-static { display: block !important; }
   .lt-static { max-width: none; margin: 0; padding: 0; border: 0; box-shadow: none; background: #fff; font-size: 10pt; }
-  .lt-static > .lt-tb, .lt-howto, .lt-static .lt-warning { display: none; }
+  .lt-static > .lt-tb, .lt-howto { display: none; }
   .lt-caution { font-size: 8.5pt; background: none; }
   .lt-cell { grid-template-columns: 1.8rem minmax(0, 1fr) 7rem 7.5rem; break-inside: avoid; page-break-inside: avoid; }
-  .lt-eq, .katex-display, .lt-summary tr, .lt-review tr { break-inside: avoid; page-break-inside: avoid; }
+  .lt-eq, .lt-eq math, .lt-summary tr, .lt-review tr { break-inside: avoid; page-break-inside: avoid; }
   .lt-eq { overflow: visible; }
   .lt-sec { break-after: avoid; page-break-after: avoid; }
   .lt-summary { break-after: page; }

@@ -22,8 +22,16 @@ export const CAUTION = "Results are an aid to, not a substitute for, a licensed 
 
 /** Formulas longer than this are not typeset as a hand calc (the engine refuses them too). */
 const HANDCALC_LIMIT = 2000;
-/** Beyond this many characters of formula the hand calc is set one step a row (as the app does). */
-const LONG_FORMULA = 38;
+/** Beyond this many characters of formula the hand calc is set one step a row (a printed line is narrow). */
+const LONG_FORMULA = 24;
+/** Or when the whole hand calc on one line is longer than this much TeX. */
+const LONG_LINE = 110;
+/** A text result longer than this is written under the hand calc, not in the result column. */
+const LONG_TEXT = 28;
+
+/** A text result too long for the result column. */
+const longText = (s: CellState | undefined): boolean =>
+  done(s) && typeof s!.display?.value === 'string' && s!.display.text.length > LONG_TEXT;
 
 export interface StaticOptions {
   /** SHA-256 of the embedded document, shown in the footer so a printout names its file. */
@@ -67,8 +75,8 @@ function titleBlockHtml(meta: DocMeta): string {
   const field = (k: keyof DocMeta, cls = '') =>
     `<div class="lt-tb-f${cls}"><span class="lt-tb-k">${META_LABELS[k]}</span><span class="lt-tb-v" data-meta="${k}">${
       escapeHtml(meta[k]) || '&#8212;'}</span></div>`;
-  return `<header class="lt-tb" aria-label="Title block">${field('project', ' lt-wide')}${field('job')}${field('revision')}${
-    field('subject', ' lt-wide')}${field('date')}${field('preparedBy')}${field('checkedBy')}</header>`;
+  return `<header class="lt-tb" aria-label="Title block">${field('project')}${field('job')}${field('revision')}${field('date')}${
+    field('subject')}${field('preparedBy')}${field('checkedBy', ' lt-span2')}</header>`;
 }
 
 function refsHtml(cell: Cell, s: CellState | undefined): string {
@@ -95,6 +103,7 @@ export function resultText(text: string): string {
 function resultHtml(s: CellState | undefined): string {
   if (s?.status === 'error') return '<span class="lt-res-err">error</span>';
   if (!done(s) || !s!.display) return '<span class="lt-res-none">—</span>';
+  if (longText(s)) return '<span class="lt-res-none">see left</span>';
   return escapeHtml(resultText(s!.display.text));
 }
 
@@ -114,9 +123,16 @@ function formulaHtml(cell: FormulaCell, s: CellState | undefined, ctx: Ctx): str
   let eq: string;
   if (cell.expr.length > HANDCALC_LIMIT) {
     eq = `<code class="lt-tex-raw">${escapeHtml(cell.name)} = ${escapeHtml(cell.expr.slice(0, 200))}…</code>`;
+  } else if (longText(s)) {
+    // A long text result reads as a sentence under the formula, not as typeset math.
+    const t = formulaTex(cell.name, cell.expr, undefined, ctx.scope);
+    eq = `${texHtml(t.line, true)}<p class="lt-textres">= ${escapeHtml(s!.display!.text)}</p>`;
   } else {
     const t = formulaTex(cell.name, cell.expr, s, ctx.scope);
-    eq = texHtml(cell.expr.length > LONG_FORMULA && t.parts.length > 2 ? t.aligned : t.line, true);
+    // One step a line, each its own equation (MathML Core has no column alignment for `aligned`).
+    eq = t.parts.length > 2 && (cell.expr.length > LONG_FORMULA || t.line.length > LONG_LINE)
+      ? t.parts.map((p, i) => texHtml(i === 0 ? `${t.symbol} = ${p}` : `\\qquad = ${p}`, true)).join('')
+      : texHtml(t.line, true);
   }
   return `${labelHtml(cell.label)}<div class="lt-eq">${eq}</div>${errorHtml(s)}`;
 }
