@@ -5,8 +5,8 @@
 import { appBlock, withoutRunScript } from '../../runtime/record/app-payload';
 import { loadedPage } from './capture';
 
-/** Where `npm run build:record` writes the shell, from the site root. */
-export const SHELL_PATH = '/dist-record/record-shell.html';
+/** Where `npm run build:record` writes the shell (a .txt copy, which servers hand over untouched), from the site root. */
+export const SHELL_PATH = '/dist-record/record-shell.txt';
 
 let fetched: Promise<string> | undefined;
 
@@ -20,8 +20,7 @@ export function recordShell(): Promise<string> {
   fetched ??= fetch(new URL(SHELL_PATH, location.href))
     .then(async (r) => {
       if (!r.ok) throw new Error(`status ${r.status}`);
-      // A dev server adds its own client script to any HTML it serves: not part of the shell.
-      const html = (await r.text()).replace(/<script\b[^>]*\bsrc=["'][^"']*@vite\/client["'][^>]*><\/script>\s*/g, '');
+      const html = await r.text();
       if (appBlock(html) === undefined) throw new Error('it holds no packed app');
       return html;
     })

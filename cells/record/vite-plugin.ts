@@ -74,6 +74,8 @@ export function inlineAll(): Plugin {
       page = page.replace(/<\/body>/i, () => `${scripts.join('\n')}\n</body>`);
       delete bundle[html.fileName];
       this.emitFile({ type: 'asset', fileName: 'record-shell.html', source: page });
+      // The same bytes under a name no dev server rewrites (it would inject its client into .html).
+      this.emitFile({ type: 'asset', fileName: 'record-shell.txt', source: page });
     },
   };
 }
