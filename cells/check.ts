@@ -18,6 +18,8 @@ export interface CheckView extends CellViewBase {
   symbol: string;
   /** Condition, values and ratio, each a step of the line. */
   steps: { rel: string; tex: string }[];
+  /** The condition and its values in plain words, for screen readers. */
+  reading: string;
   ratio?: number;
   demand?: string;
   capacity?: string;
@@ -50,13 +52,14 @@ export const checkKind: CellKindModule<CheckCell, { name?: string; expr: string 
       id: cell.id, kind: 'check', status: statusOf(state), number: ctx.number, label: cell.label,
       refs: marginRefs(cell.clause, state), error: errorOf(state, cell.expr), name: cell.name,
       symbol: cell.name ? `${nameTex(cell.name)}:` : '', steps,
+      reading: `${cell.expr}${state?.demand && state.capacity ? `: ${state.demand.text} against ${state.capacity.text}` : ''}`,
       ratio: state?.ratio, demand: state?.demand?.text, capacity: state?.capacity?.text, verdict,
     };
   },
 
   render(v) {
     return `${renderNumber(v.number)}<div class="cell-body">${renderLabel(v.label)}<div class="cell-math" data-act="open">${
-      handCalcHtml(v.symbol, v.steps)}</div>${renderVerdict(v)}${renderError(v.error)}</div>${renderRefs(v.refs)}`;
+      handCalcHtml(v.symbol, v.steps, v.reading)}</div>${renderVerdict(v)}${renderError(v.error)}</div>${renderRefs(v.refs)}`;
   },
 
   edit(doc, id, source) {

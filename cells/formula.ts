@@ -16,6 +16,8 @@ export interface FormulaView extends CellViewBase {
   /** The hand calc as TeX: the symbol, then each step after an = sign. */
   symbol: string;
   parts: string[];
+  /** The line in plain words for screen readers: `d = h - cover - db = 7.625 in`. */
+  reading: string;
 }
 
 export const formulaKind: CellKindModule<FormulaCell, { name: string; expr: string }, FormulaView> = {
@@ -35,12 +37,13 @@ export const formulaKind: CellKindModule<FormulaCell, { name: string; expr: stri
       id: cell.id, kind: 'formula', status: statusOf(state), number: ctx.number, label: cell.label,
       refs: marginRefs(cell.clause, state), error: errorOf(state, cell.expr), name: cell.name,
       symbol: t.symbol, parts: t.parts,
+      reading: `${cell.name} = ${cell.expr}${state?.display && (state.status === 'ok' || state.status === 'fail') ? ` = ${state.display.text}` : ''}`,
     };
   },
 
   render: (v) =>
     `${renderNumber(v.number)}<div class="cell-body">${renderLabel(v.label)}<div class="cell-math" data-act="open">${
-      handCalcHtml(v.symbol, v.parts.map((p) => ({ rel: '=', tex: p })))}</div>${renderError(v.error)}</div>${renderRefs(v.refs)}`,
+      handCalcHtml(v.symbol, v.parts.map((p) => ({ rel: '=', tex: p })), v.reading)}</div>${renderError(v.error)}</div>${renderRefs(v.refs)}`,
 
   edit(doc, id, source) {
     const { name, expr } = orThrow(formulaKind.parse(source));

@@ -70,7 +70,7 @@ export const inputKind: CellKindModule<InputCell, { name: string; value: string 
     const about = v.description || v.range
       ? `<div class="cell-about">${escapeHtml(v.description ?? '')}${v.range ? ` <span class="range">(${escapeHtml(v.range)})</span>` : ''}</div>`
       : '';
-    return `${renderNumber(v.number)}<div class="cell-body">${renderLabel(v.label)}<div class="cell-math input-line"><span class="sym">${
+    return `${renderNumber(v.number)}<div class="cell-body">${renderLabel(v.label)}<div class="cell-math input-line"><span class="sym" aria-hidden="true">${
       texHtml(v.symbolTex)}</span><span class="eq">=</span>${field}${shown}</div>${about}${renderError(v.error)}</div>${renderRefs(v.refs)}`;
   },
 

@@ -17,7 +17,7 @@ export function inlineHtml(text: string): string {
   for (let m = re.exec(text); m; m = re.exec(text)) {
     out += escapeHtml(text.slice(i, m.index));
     if (m[1] !== undefined) out += `<code>${escapeHtml(m[1])}</code>`;
-    else if (m[2] !== undefined) out += `<span class="note-math">${texHtml(m[2])}</span>`;
+    else if (m[2] !== undefined) out += `<span class="note-math" role="img" aria-label="${escapeHtml(m[2])}">${texHtml(m[2])}</span>`;
     else if (m[3] !== undefined) out += `<strong>${inlineHtml(m[3])}</strong>`;
     else if (m[4] !== undefined) out += `<em>${inlineHtml(m[4])}</em>`;
     else if (SAFE_URL.test(m[6])) {

@@ -76,6 +76,10 @@ export class SheetView {
   sync(doc: CalcDocument): void {
     const prev = this.doc;
     this.doc = doc;
+    if (prev.cells.length > 0 && sameOrder(prev.cells, doc.cells)) {
+      this.syncContent(doc);
+      return;
+    }
     this.numbers = numberCells(doc.cells);
     this.byName = new Map(doc.cells.flatMap((c) => (cellName(c) ? [[cellName(c)!, c.id] as const] : [])));
     const live = new Set(doc.cells.map((c) => c.id));
@@ -118,6 +122,25 @@ export class SheetView {
     }
     dirty.forEach((id) => this.renderCell(id));
     this.renderSummary();
+  }
+
+  /** The usual edit: same cells in the same order, a few of them changed. Numbers stay. */
+  private syncContent(doc: CalcDocument): void {
+    let checks = false;
+    for (const cell of doc.cells) {
+      const slot = this.slots.get(cell.id)!;
+      if (slot.cell === cell) continue;
+      const oldName = cellName(slot.cell);
+      const name = cellName(cell);
+      if (oldName !== name) {
+        if (oldName && this.byName.get(oldName) === cell.id) this.byName.delete(oldName);
+        if (name) this.byName.set(name, cell.id);
+      }
+      slot.cell = cell;
+      checks ||= cell.kind === 'check';
+      if (slot.html !== undefined) this.renderCell(cell.id);
+    }
+    if (checks) this.renderSummary();
   }
 
   /** Renders the cells whose engine state changed, and the hand calcs that show their values. */
@@ -214,23 +237,24 @@ export class SheetView {
     this.writeContent(slot, html);
   }
 
-  /** Replaces the cell's content, keeping a value field the person is typing in. */
+  /**
+   * Replaces the cell's content. A focused value field is kept in place (the parts around
+   * it are replaced), so the person typing keeps the focus and the page is not laid out
+   * again to restore it.
+   */
   private writeContent(slot: Slot, html: string): void {
     const active = document.activeElement;
-    const typing = active instanceof HTMLInputElement && slot.content.contains(active) && active.classList.contains('value-field')
-      ? { value: active.value, start: active.selectionStart, end: active.selectionEnd }
-      : undefined;
-    this.restoring = !!typing;
-    slot.content.innerHTML = html;
-    if (typing) {
-      const field = slot.content.querySelector<HTMLInputElement>('input.value-field');
-      if (field) {
-        field.value = typing.value;
-        field.focus({ preventScroll: true });
-        field.setSelectionRange(typing.start, typing.end);
-      }
+    if (!(active instanceof HTMLElement) || !slot.content.contains(active)) {
+      slot.content.innerHTML = html;
+      return;
     }
-    this.restoring = false;
+    const fresh = document.createElement('template');
+    fresh.innerHTML = html;
+    if (!patchAround(slot.content, fresh.content, active)) {
+      this.restoring = true; // a field swapped for another kind: let it go without committing
+      slot.content.innerHTML = html;
+      this.restoring = false;
+    }
   }
 
   private enqueue(ids: string[]): void {
@@ -304,4 +328,48 @@ export class SheetView {
     if (id !== this.selected) this.events.select(id);
     else if (target.closest('[data-act="open"]') && !target.closest('.cell-editor')) this.events.open(id);
   }
+}
+
+/**
+ * Makes `target` hold `source`'s nodes, except that the element `keep` (inside target)
+ * stays where it is; the node standing in its place in `source` is dropped. Returns
+ * false when the two trees differ in shape along the way to `keep`.
+ */
+function patchAround(target: Element, source: ParentNode, keep: Element): boolean {
+  let old: Element = keep;
+  const path: Element[] = [];
+  while (old !== target) {
+    path.unshift(old);
+    old = old.parentElement!;
+  }
+  let oldParent: Element = target;
+  let newParent: ParentNode = source;
+  for (const oldChild of path) {
+    const index = Array.prototype.indexOf.call(oldParent.children, oldChild);
+    const newChild = newParent.children[index];
+    if (!newChild || newChild.tagName !== oldChild.tagName || newChild.className !== oldChild.className) return false;
+    // Replace the siblings before and after the kept path with the new ones.
+    while (oldChild.previousSibling) oldChild.previousSibling.remove();
+    while (oldChild.nextSibling) oldChild.nextSibling.remove();
+    const before: ChildNode[] = [];
+    for (let n = newParent.firstChild; n && n !== newChild; n = n.nextSibling) before.push(n);
+    oldChild.before(...before);
+    while (newChild.nextSibling) oldParent.append(newChild.nextSibling);
+    if (oldChild === keep) {
+      for (const attr of Array.from(newChild.attributes)) {
+        if (attr.name !== 'value' && oldChild.getAttribute(attr.name) !== attr.value) oldChild.setAttribute(attr.name, attr.value);
+      }
+      return true;
+    }
+    oldParent = oldChild;
+    newParent = newChild;
+  }
+  return true;
+}
+
+/** Same ids in the same order (cell contents may differ). */
+function sameOrder(a: readonly Cell[], b: readonly Cell[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i].id !== b[i].id) return false;
+  return true;
 }

@@ -1,7 +1,10 @@
 // KaTeX with the settings every document text gets (no trust: no links or HTML
-// from TeX), and a small cache: the same equation is typeset once.
+// from TeX), and a small cache: the same equation is typeset once. Output is HTML
+// only (half the size of HTML + MathML, so re-typesetting is cheaper); screen
+// readers get a plain-text reading on the hand-calc line instead.
 
 import katex from 'katex';
+import { escapeHtml } from './kind';
 
 const cache = new Map<string, string>();
 const LIMIT = 4000;
@@ -13,9 +16,9 @@ export function texHtml(tex: string, display = false): string {
   if (hit !== undefined) return hit;
   let html: string;
   try {
-    html = katex.renderToString(tex, { displayMode: display, throwOnError: true, strict: 'ignore', trust: false, output: 'htmlAndMathml' });
+    html = katex.renderToString(tex, { displayMode: display, throwOnError: true, strict: 'ignore', trust: false, output: 'html' });
   } catch {
-    html = katex.renderToString(tex, { displayMode: display, throwOnError: false, strict: 'ignore', trust: false, errorColor: 'inherit' });
+    html = katex.renderToString(tex, { displayMode: display, throwOnError: false, strict: 'ignore', trust: false, errorColor: 'inherit', output: 'html' });
   }
   if (cache.size >= LIMIT) cache.delete(cache.keys().next().value as string);
   cache.set(key, html);
@@ -23,14 +26,17 @@ export function texHtml(tex: string, display = false): string {
 }
 
 /**
- * A hand-calc line as a row of steps (`symbol = step = step ...`). Each step is its own
- * piece of inline math, so a long line wraps between steps, and inside a step after
- * an operator or a comma of a long call, instead of running off the sheet.
+ * A hand-calc line (`symbol = step = step ...`) as two pieces of inline math: the head
+ * (symbol and the symbolic step, the same on every update, so typeset once and cached)
+ * and the tail (values and result, typeset afresh). Inline math wraps after = signs,
+ * operators and the commas of long calls, so a long line never runs off the sheet.
  */
-export function handCalcHtml(symbol: string, steps: { rel: string; tex: string }[]): string {
-  const head = symbol ? `<span class="hc-sym">${texHtml(`\\displaystyle ${symbol}`)}</span>` : '';
-  const body = steps
-    .map((s) => `<span class="hc-step">${s.rel ? `<span class="hc-rel">${texHtml(s.rel)}</span>` : ''}${texHtml(`\\displaystyle ${s.tex}`)}</span>`)
-    .join('');
-  return `<div class="hc">${head}${body}</div>`;
+export function handCalcHtml(symbol: string, steps: { rel: string; tex: string }[], reading: string): string {
+  const open = `<div class="hc" role="img" aria-label="${escapeHtml(reading)}">`;
+  if (steps.length === 0) return `${open}<span class="hc-step" aria-hidden="true">${texHtml(`\\displaystyle ${symbol}`)}</span></div>`;
+  const [first, ...rest] = steps;
+  const head = symbol ? `${symbol} ${first.rel || '\\;'} ${first.tex}` : `${first.rel} ${first.tex}`;
+  const tail = rest.map((s) => `${s.rel}\\allowbreak\\; ${s.tex}`).join(' ');
+  return `${open}<span class="hc-step" aria-hidden="true">${texHtml(`\\displaystyle ${head}`)}</span>${
+    tail ? `<span class="hc-step" aria-hidden="true">${texHtml(`\\displaystyle ${tail}`)}</span>` : ''}</div>`;
 }

@@ -23,13 +23,25 @@ const MATHJS_TEX = new Set([
 
 const CONSTANTS: Record<string, string> = { pi: '\\pi', e: 'e', tau: '\\tau', Infinity: '\\infty' };
 
-/** Parses for display only; undefined when the text does not parse (the engine reports why). */
+const parsed = new Map<string, MathNode | undefined>();
+const CACHE_LIMIT = 5000;
+
+function remember<K, V>(cache: Map<K, V>, key: K, value: V): V {
+  if (cache.size >= CACHE_LIMIT) cache.clear();
+  cache.set(key, value);
+  return value;
+}
+
+/** Parses for display only; undefined when the text does not parse (the engine reports why). Cached by text. */
 export function parseForDisplay(expr: string): MathNode | undefined {
+  if (parsed.has(expr)) return parsed.get(expr);
+  let node: MathNode | undefined;
   try {
-    return parse(expr);
+    node = parse(expr);
   } catch {
-    return undefined;
+    node = undefined;
   }
+  return remember(parsed, expr, node);
 }
 
 type Mode = 'symbolic' | 'values';
@@ -40,71 +52,116 @@ function valueTex(d: DisplayValue | undefined, bracket: boolean): string {
   return bracket ? `\\left(${tex}\\right)` : `{${tex}}`;
 }
 
+/** Where a value stands in a formula, which decides whether it needs brackets. */
+type Place = 'factor' | 'base' | 'after-sign' | 'term' | 'free';
+
 /**
- * Whether a value put in place of `node` needs brackets to read right: as a factor,
- * a power's base or after a minus sign, when it has a unit or is negative; in a
- * sum, only when negative. Function arguments, fractions and whole sides never do.
+ * Brackets for a value put in place of a name: as a factor, a power's base or after a
+ * minus sign, when it has a unit or is negative; as a later term of a sum, only when
+ * negative. Function arguments, fractions and whole sides never need them.
  */
-function bracketFor(node: MathNode, parents: Map<MathNode, MathNode | null>, d: DisplayValue | undefined): boolean {
-  if (!d || !needsBrackets(d)) return false;
-  const parent: any = parents.get(node);
-  if (!parent || parent.type !== 'OperatorNode') return false;
-  const negative = typeof d.value === 'number' && d.value < 0;
+function bracketFor(place: Place, d: DisplayValue | undefined): boolean {
+  if (!d || !needsBrackets(d) || place === 'free') return false;
+  if (place === 'term') return typeof d.value === 'number' && d.value < 0;
+  return true;
+}
+
+function placeOf(node: MathNode, parent: any, root: MathNode): Place {
+  if (node === root || !parent || parent.type !== 'OperatorNode') return 'free';
   switch (parent.fn) {
-    case 'multiply':
+    case 'multiply': return 'factor';
     case 'unaryMinus':
-    case 'unaryPlus':
-      return true;
-    case 'pow':
-      return parent.args[0] === node;
-    case 'add':
-    case 'subtract':
-      return negative && (parent.fn === 'subtract' || parent.args[0] !== node);
-    default:
-      return false;
+    case 'unaryPlus': return 'after-sign';
+    case 'pow': return parent.args[0] === node ? 'base' : 'free';
+    case 'add': return parent.args[0] === node ? 'free' : 'term';
+    case 'subtract': return parent.args[0] === node ? 'free' : 'term';
+    default: return 'free';
   }
 }
 
-/** Calls set as \operatorname{f}(a, b) with plain brackets, so a long call can break after a comma. */
+/** Calls set as \\operatorname{f}(a, b) with plain brackets, so a long call can break after a comma. */
 const BREAKABLE_CALLS = new Set(['min', 'max']);
 
-/** mathjs toTex options with our handler: names, units upright, library calls, values. */
-function texOptions(scope: HandCalcScope, mode: Mode, root: MathNode) {
+/** Marks a slot in a template; control characters never occur in TeX that mathjs writes. */
+const SLOT = /\u0001(\d+)\u0002/g;
+
+/**
+ * An expression typeset once per text and set of cell names: the symbolic form, and the
+ * form with values as numbered slots filled in at each update (no re-typesetting by mathjs).
+ */
+interface TexTemplate {
+  /** The names in the expression and whether each was a cell when typeset. */
+  names: string[];
+  cells: boolean[];
+  symbolic: string;
+  values: string;
+  slots: { name: string; place: Place }[];
+  readsCells: boolean;
+}
+
+// Parsed nodes are cached, so a node object stands for its text; a few variants per node
+// cover names that are cells in one sheet and units in another.
+const templates = new WeakMap<MathNode, TexTemplate[]>();
+
+function buildTemplate(node: MathNode, isCell: (name: string) => boolean): TexTemplate {
   const parents = new Map<MathNode, MathNode | null>();
-  root.traverse((n: MathNode, _path: string, parent: MathNode | null) => {
+  node.traverse((n: MathNode, _path: string, parent: MathNode | null) => {
     parents.set(n, parent);
   });
-  const handler = (node: any, options: any): string | undefined => {
-    if (node.type === 'SymbolNode') {
-      const name: string = node.name;
-      if (scope.isCell(name)) {
-        if (mode === 'symbolic') return nameTex(name);
-        const d = scope.state(name)?.display;
-        return valueTex(d, node !== root && bracketFor(node, parents, d));
+  const slots: TexTemplate['slots'] = [];
+  const options = (mode: Mode) => {
+    const handler = (n: any, opts: any): string | undefined => {
+      if (n.type === 'SymbolNode') {
+        const name: string = n.name;
+        if (isCell(name)) {
+          if (mode === 'symbolic') return nameTex(name);
+          slots.push({ name, place: placeOf(n, parents.get(n), node) });
+          return `\u0001${slots.length - 1}\u0002`;
+        }
+        if (name in CONSTANTS) return `{${CONSTANTS[name]}}`;
+        return `{\\mathrm{${name}}}`; // a unit
       }
-      if (name in CONSTANTS) return `{${CONSTANTS[name]}}`;
-      return `{\\mathrm{${name}}}`; // a unit
-    }
-    if (node.type === 'FunctionNode' && (BREAKABLE_CALLS.has(node.fn?.name) || !MATHJS_TEX.has(node.fn?.name))) {
-      const fname = String(node.fn?.name ?? node.name ?? 'f').replace(/_/g, '\\_');
-      const args = node.args.map((a: MathNode) => a.toTex(options)).join(',\\allowbreak\\,');
-      return `\\operatorname{${fname}}(${args})`;
-    }
-    if (node.type === 'ConstantNode' && typeof node.value === 'string') return textTex(node.value);
-    if (node.type === 'ConstantNode' && typeof node.value === 'boolean') return textTex(node.value ? 'yes' : 'no');
-    return undefined;
+      if (n.type === 'FunctionNode' && (BREAKABLE_CALLS.has(n.fn?.name) || !MATHJS_TEX.has(n.fn?.name))) {
+        const fname = String(n.fn?.name ?? n.name ?? 'f').replace(/_/g, '\\_');
+        const args = n.args.map((a: MathNode) => a.toTex(opts)).join(',\\allowbreak\\,');
+        return `\\operatorname{${fname}}(${args})`;
+      }
+      if (n.type === 'ConstantNode' && typeof n.value === 'string') return textTex(n.value);
+      if (n.type === 'ConstantNode' && typeof n.value === 'boolean') return textTex(n.value ? 'yes' : 'no');
+      return undefined;
+    };
+    return { implicit: 'hide', parenthesis: 'keep', handler } as any;
   };
-  return { implicit: 'hide', parenthesis: 'keep', handler } as const;
+  const names = [...new Set(node.filter((n: any) => n.type === 'SymbolNode').map((n: any) => n.name as string))];
+  const symbolic = node.toTex(options('symbolic'));
+  const values = node.toTex(options('values'));
+  return { names, cells: names.map(isCell), symbolic, values, slots, readsCells: slots.length > 0 };
+}
+
+/** The template for a node, cached by node and by which of its names are cells. */
+function templateFor(node: MathNode, scope: HandCalcScope): TexTemplate {
+  let list = templates.get(node);
+  const hit = list?.find((t) => t.names.every((n, i) => scope.isCell(n) === t.cells[i]));
+  if (hit) return hit;
+  const t = buildTemplate(node, (n) => scope.isCell(n));
+  if (!list) templates.set(node, (list = []));
+  if (list.length >= 4) list.shift();
+  list.push(t);
+  return t;
+}
+
+function fill(t: TexTemplate, scope: HandCalcScope): string {
+  return t.values.replace(SLOT, (_m, i: string) => {
+    const slot = t.slots[Number(i)];
+    const d = scope.state(slot.name)?.display;
+    return valueTex(d, bracketFor(slot.place, d));
+  });
 }
 
 /** The expression typeset with names (symbolic) or with the values it reads put in. */
 export function exprTex(node: MathNode, scope: HandCalcScope, mode: Mode): string {
-  return node.toTex(texOptions(scope, mode, node) as any);
-}
-
-/** Whether the expression reads any cell. */
-function readsCells(node: MathNode, scope: HandCalcScope): boolean {
-  return node.filter((n: any) => n.type === 'SymbolNode' && scope.isCell(n.name)).length > 0;
+  const t = templateFor(node, scope);
+  return mode === 'symbolic' ? t.symbolic : fill(t, scope);
 }
 
 export interface FormulaTex {
@@ -144,11 +201,12 @@ export function formulaTex(
   let symbolic: string | undefined;
   let substituted: string | undefined;
   if (node) {
-    symbolic = exprTex(node, scope, 'symbolic');
+    const t = templateFor(node, scope);
+    symbolic = t.symbolic;
     parts.push(symbolic);
     const lone = node.type === 'SymbolNode' || (node.type === 'ParenthesisNode' && (node as any).content.type === 'SymbolNode');
-    if (readsCells(node, scope) && !lone) {
-      substituted = exprTex(node, scope, 'values');
+    if (t.readsCells && !lone) {
+      substituted = fill(t, scope);
       parts.push(substituted);
     }
   } else {

@@ -92,13 +92,25 @@ function shownUnit(cell: Cell): string | undefined {
  */
 export type UnitMemory = Readonly<Record<string, string>>;
 
+// Cells are immutable: the system of each is worked out once.
+const cellSystems = new WeakMap<Cell, UnitSystem | null>();
+
+function cellSystem(cell: Cell): UnitSystem | null {
+  let s = cellSystems.get(cell);
+  if (s === undefined) {
+    const u = shownUnit(cell);
+    s = (u ? systemOf(u) : undefined) ?? null;
+    cellSystems.set(cell, s);
+  }
+  return s;
+}
+
 /** The system most display units of the sheet are in (US when none says). */
 export function sheetSystem(doc: CalcDocument): UnitSystem {
   let us = 0;
   let si = 0;
   for (const cell of doc.cells) {
-    const u = shownUnit(cell);
-    const s = u ? systemOf(u) : undefined;
+    const s = cellSystem(cell);
     if (s === 'US') us++;
     else if (s === 'SI') si++;
   }

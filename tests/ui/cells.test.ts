@@ -137,7 +137,8 @@ describe('formula', () => {
     ]);
     expect(v.refs).toEqual(['ASCE 7-22 §2.3.1']);
     const html = formulaKind.render(v);
-    expect(html.match(/class="hc-step"/g)).toHaveLength(3);
+    expect(html.match(/class="hc-step"/g)).toHaveLength(2); // symbolic head, then values and result
+    expect(html).toContain('aria-label="w_u = 1.2 D + 1.6 L = 224 psf"');
     expect(html).toContain('class="katex"');
     expect(html).toContain('ASCE 7-22 §2.3.1');
   });
@@ -188,7 +189,7 @@ describe('check', () => {
   });
 
   it('draws the bar to 1.25 at most and nothing before a verdict', () => {
-    const base: CheckView = { id: 'k', kind: 'check', status: 'fail', number: '', refs: [], symbol: '', steps: [], verdict: 'fail', ratio: 3 };
+    const base: CheckView = { id: 'k', kind: 'check', status: 'fail', number: '', refs: [], symbol: '', steps: [], reading: '', verdict: 'fail', ratio: 3 };
     expect(renderVerdict(base)).toContain('width:100.0%');
     expect(renderVerdict({ ...base, ratio: 0.5, verdict: 'pass' })).toContain('width:40.0%');
     expect(renderVerdict({ ...base, verdict: undefined })).toBe('');

@@ -12,7 +12,7 @@ describe('note Markdown subset', () => {
   it('typesets inline math with KaTeX', () => {
     const html = inlineHtml('with $\\phi V_c$ here');
     expect(html).toContain('class="katex"');
-    expect(html.startsWith('with <span class="note-math">')).toBe(true);
+    expect(html.startsWith('with <span class="note-math" role="img" aria-label="\\phi V_c">')).toBe(true);
   });
 
   it('escapes every HTML a note holds', () => {

@@ -1,0 +1,127 @@
+// npm run bench:ui — in headless Chromium, the median time from an input edit (typed
+// value + Enter) to the last of its 10 dependent cells re-typeset on the page, on the
+// demo record and on a generated 2,000-cell record with the same 10 dependents.
+// Prints medians, 90th percentiles and the ratio.
+
+import { readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import type { Page } from 'playwright-core';
+import type { CalcDocument, Cell } from '../runtime/document';
+import { parse } from '../runtime/format/index';
+import { buildApp, launch, ROOT, serve } from '../tests/e2e/harness';
+
+const EDITS = 30;
+const WARMUP = 5;
+const SIZE = 2000;
+
+/** Ten cells that read the edited input `e_bench`: eight formulas and two checks, with units. */
+function benchBlock(): Cell[] {
+  const cells: Cell[] = [
+    { kind: 'section', id: 'bench-s', title: 'Benchmark block' },
+    { kind: 'input', id: 'bench-e', name: 'e_bench', value: '2 in', label: 'Edited input' },
+  ];
+  for (let i = 0; i < 8; i++) {
+    cells.push({
+      kind: 'formula', id: `bench-t${i}`, name: `t_${i}`, unit: i % 2 ? 'in^2' : 'in',
+      expr: i % 2 ? `e_bench * ${i + 1} in + 0.5 in^2` : `${i + 1} * e_bench + sqrt(e_bench * 4 in) / 3`,
+      label: `Dependent ${i + 1}`,
+    });
+  }
+  cells.push({ kind: 'check', id: 'bench-k1', expr: 'e_bench <= 2.5 in', label: 'Dependent 9' });
+  cells.push({ kind: 'check', id: 'bench-k2', expr: '3 * e_bench >= 5 in', label: 'Dependent 10' });
+  return cells;
+}
+
+/** Unrelated input/formula pairs in sections, up to `size` cells in all. */
+function withFiller(doc: CalcDocument, size: number): CalcDocument {
+  const cells = doc.cells.slice();
+  for (let k = 0; cells.length < size; k++) {
+    if (k % 24 === 0) cells.push({ kind: 'section', id: `fill-s${k}`, title: `Filler group ${k / 24 + 1}` });
+    else if (k % 2) cells.push({ kind: 'input', id: `fill-x${k}`, name: `x_${k}`, value: `${(k % 17) + 1} ft`, label: 'Filler input' });
+    else cells.push({ kind: 'formula', id: `fill-y${k}`, name: `y_${k}`, expr: `2 * x_${k - 1} + 3 in`, unit: 'in', label: 'Filler result' });
+  }
+  return { ...doc, cells: cells.slice(0, size) };
+}
+
+function stats(xs: number[]): { median: number; p90: number } {
+  const s = [...xs].sort((a, b) => a - b);
+  const at = (q: number) => s[Math.min(s.length - 1, Math.floor(q * (s.length - 1) + 0.5))];
+  return { median: at(0.5), p90: at(0.9) };
+}
+
+/** One edit in the page: type a value into the input, press Enter, time until all 10 dependents re-render. */
+async function editOnce(page: Page, value: string): Promise<{ ms: number; seen: number }> {
+  return page.evaluate(async (v) => {
+    const ids = [...Array(8).keys()].map((i) => `bench-t${i}`).concat(['bench-k1', 'bench-k2']);
+    const field = document.querySelector<HTMLInputElement>('#cell-bench-e input.value-field')!;
+    const seen = new Set<string>();
+    let last = 0;
+    const done = new Promise<void>((resolve) => {
+      const obs = new MutationObserver((records) => {
+        const now = performance.now();
+        for (const r of records) {
+          const id = (r.target as HTMLElement).closest?.('article.cell')?.id.replace(/^cell-/, '');
+          if (id && ids.includes(id)) seen.add(id);
+        }
+        last = now;
+        if (seen.size === ids.length) {
+          obs.disconnect();
+          resolve();
+        }
+      });
+      for (const id of ids) obs.observe(document.querySelector(`#cell-${id} .cell-content`)!, { childList: true, subtree: true });
+      setTimeout(() => (obs.disconnect(), resolve()), 3000);
+    });
+    field.focus();
+    field.value = v;
+    const t0 = performance.now();
+    field.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true, cancelable: true }));
+    await done;
+    const ms = last - t0;
+    await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 60)));
+    return { ms, seen: seen.size };
+  }, value);
+}
+
+async function measure(page: Page, key: string, doc: CalcDocument): Promise<number[]> {
+  await page.evaluate(([k, d]) => (window as any).loadtraceOpen(k, d), [key, doc] as const);
+  await page.evaluate(async () => {
+    const app = (window as any).loadtrace;
+    await app.engine.settled();
+    await app.view.whenRendered();
+  });
+  const times: number[] = [];
+  for (let i = 0; i < WARMUP + EDITS; i++) {
+    const { ms, seen } = await editOnce(page, i % 2 ? '2 in' : '3 in');
+    if (seen !== 10) throw new Error(`only ${seen} of 10 dependents re-rendered on edit ${i}`);
+    if (i >= WARMUP) times.push(ms);
+  }
+  return times;
+}
+
+async function main(): Promise<void> {
+  const demo = parse(readFileSync(join(ROOT, 'docs-templates/demo.lt'), 'utf8')).doc;
+  const small: CalcDocument = { ...demo, cells: [...benchBlock(), ...demo.cells] };
+  const big = withFiller(small, SIZE);
+  const outDir = buildApp();
+  const server = await serve(outDir);
+  const browser = await launch();
+  try {
+    const page = browser.context.pages()[0] ?? (await browser.context.newPage());
+    await page.goto(server.url);
+    await page.waitForSelector('body[data-ready="true"]', { timeout: 30_000 });
+    const a = stats(await measure(page, 'bench-demo', small));
+    const b = stats(await measure(page, 'bench-2000', big));
+    const fmt = (x: number) => x.toFixed(1).padStart(6);
+    console.log(`edit → last of 10 dependents re-typeset (${EDITS} edits each, headless Chromium)`);
+    console.log(`  demo record (${small.cells.length} cells):      median ${fmt(a.median)} ms   p90 ${fmt(a.p90)} ms`);
+    console.log(`  generated record (${big.cells.length} cells): median ${fmt(b.median)} ms   p90 ${fmt(b.p90)} ms`);
+    console.log(`  ratio 2,000-cell / demo (medians): ${(b.median / a.median).toFixed(2)}`);
+  } finally {
+    await browser.close();
+    server.stop();
+    rmSync(outDir, { recursive: true, force: true });
+  }
+}
+
+await main();
