@@ -75,6 +75,8 @@ export const STATIC_CSS = `
 .lt-err { font: 13px system-ui, sans-serif; color: #8a5a00; margin: .2rem 0; }
 .lt-note p { margin: .2rem 0; }
 .lt-tex-raw, .lt-long { font: 12px ui-monospace, "DejaVu Sans Mono", monospace; white-space: pre-wrap; overflow-wrap: anywhere; }
+.lt-figure { margin: .3rem 0; }
+.lt-figure svg { max-width: 100%; height: auto; }
 .lt-review { margin-top: 1.4rem; }
 .lt-comments { font: 13px system-ui, sans-serif; padding-left: 1.2rem; }
 .lt-cstat { font-weight: 600; }
@@ -96,7 +98,7 @@ html.lt-live > body > #lt-static { display: none; }
   .lt-static > .lt-tb, .lt-howto { display: none; }
   .lt-caution { font-size: 8.5pt; background: none; }
   .lt-cell { grid-template-columns: 1.8rem minmax(0, 1fr) 7rem 7.5rem; break-inside: avoid; page-break-inside: avoid; }
-  .lt-eq, .lt-eq math, .lt-summary tr, .lt-review tr { break-inside: avoid; page-break-inside: avoid; }
+  .lt-eq, .lt-eq math, .lt-figure, .lt-summary tr, .lt-review tr { break-inside: avoid; page-break-inside: avoid; }
   .lt-eq { overflow: visible; }
   .lt-sec { break-after: avoid; page-break-after: avoid; }
   .lt-summary { break-after: page; }
