@@ -158,13 +158,13 @@ export class SourceEditor {
       Prec.high(keymap.of([
         { key: 'Mod-Enter', run: () => (opts.onDone(), true) },
         // A formula is one line: Enter (when no completion is open) finishes it.
-        // While completions are showing, Enter belongs to them (even in their first 75 ms).
+        // While completions are showing, Enter belongs to them.
         ...(opts.mode === 'formula'
           ? [{ key: 'Enter', run: (v: EditorView) => (completionStatus(v.state) === null && opts.onDone(), true) }]
           : []),
         { key: 'Escape', run: () => (opts.onCancel(), true) },
       ])),
-      autocompletion({ override: [completer(opts.mode, opts.vocabulary)], icons: false, activateOnTyping: true }),
+      autocompletion({ override: [completer(opts.mode, opts.vocabulary)], icons: false, activateOnTyping: true, interactionDelay: 0 }),
       highlighter(opts.mode, opts.vocabulary),
       marksField,
       EditorView.lineWrapping,

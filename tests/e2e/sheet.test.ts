@@ -220,13 +220,80 @@ describe('the calc sheet in Chromium', () => {
     await second.close();
   });
 
+  it('adds, duplicates, moves and deletes cells from the keyboard, each undoable', async () => {
+    const ids = () => page.evaluate(() => (window as any).loadtrace.doc.cells.map((c: any) => c.id) as string[]);
+    const start = await ids();
+    await page.locator('#cell-f2 .cell-no').click();
+    await page.keyboard.press('d');
+    const dup = await ids();
+    expect(dup.length).toBe(start.length + 1);
+    const copy = dup[dup.indexOf('f2') + 1];
+    expect(await page.evaluate((id) => (window as any).loadtrace.doc.cells.find((c: any) => c.id === id).name, copy)).toBe('D_2');
+    await page.keyboard.press('Alt+ArrowUp');
+    expect((await ids()).indexOf(copy)).toBe((await ids()).indexOf('f2') - 1);
+    await page.keyboard.press('x');
+    expect(await ids()).toEqual(start);
+    await shot('12-keyboard-edits');
+    await page.keyboard.press('Control+z');
+    expect((await ids()).length).toBe(start.length + 1);
+    await page.keyboard.press('Control+z');
+    await page.keyboard.press('Control+z');
+    expect(await ids()).toEqual(start);
+    await page.keyboard.press('f'); // a new formula below, with its editor open
+    await page.waitForFunction(() => document.activeElement?.closest('.cell-editor') !== null);
+    expect((await ids()).length).toBe(start.length + 1);
+    await page.keyboard.press('Escape');
+    await page.keyboard.press('Control+z');
+    expect(await ids()).toEqual(start);
+  });
+
+  it('lists the shortcuts in a help panel', async () => {
+    await page.locator('#cell-k1 .cell-no').click();
+    await page.keyboard.press('?');
+    const help = page.locator('#help');
+    await help.waitFor({ state: 'visible' });
+    expect(await help.innerText()).toContain('Duplicate the selected cell');
+    await shot('13-help');
+    await page.keyboard.press('Escape');
+    await help.waitFor({ state: 'hidden' });
+  });
+
+  it('restores the scroll position on reopening', async () => {
+    const y = await page.evaluate(() => {
+      window.scrollTo(0, Math.min(300, document.documentElement.scrollHeight - window.innerHeight - 20));
+      return window.scrollY;
+    });
+    expect(y).toBeGreaterThan(100);
+    await page.waitForTimeout(500); // the view is saved 200 ms after scrolling stops
+    await page.reload();
+    await ready(page);
+    await page.waitForFunction((want) => Math.abs(window.scrollY - want) < 5, y, { timeout: 5000 });
+  });
+
+  it('starts a new sheet from a template', async () => {
+    const fixtureUrl = page.url();
+    await page.locator('#cell-k1 .cell-no').click();
+    await page.keyboard.press('n');
+    const picker = page.locator('#picker');
+    await picker.waitFor({ state: 'visible' });
+    const choices = picker.locator('[data-template]');
+    expect(await choices.count()).toBeGreaterThan(1);
+    await shot('14-template-picker');
+    const name = await choices.nth(1).getAttribute('data-template');
+    await choices.nth(1).click();
+    await page.waitForFunction((n) => location.hash.startsWith(`#sheet=${n}-`), name);
+    expect(await page.locator('#cells article.cell').count()).toBeGreaterThan(3);
+    await page.goto(fixtureUrl);
+    await page.waitForFunction(() => location.hash === '#sheet=e2e-strip' && document.querySelector('#cell-k1') !== null);
+  });
+
   it('prints with the title block and the caution', async () => {
     await page.emulateMedia({ media: 'print' });
     expect(await page.locator('.toolbar').isVisible()).toBe(false);
     expect(await page.locator('thead .title-block').isVisible()).toBe(true);
     expect(await page.locator('tfoot .print-caution').isVisible()).toBe(true);
     await page.evaluate(() => window.scrollTo(0, 0));
-    await shot('12-print');
+    await shot('15-print');
     const pdf = await page.pdf({ format: 'Letter' });
     expect(pdf.subarray(0, 4).toString()).toBe('%PDF');
     await page.emulateMedia({ media: 'screen' });
