@@ -3,7 +3,8 @@
 
 import { gzipSync } from 'node:zlib';
 import type { Plugin } from 'vite';
-import { APP_ID, APP_TYPE, LOADER } from '../../runtime/record/app-payload';
+import { APP_ID, APP_TYPE } from '../../runtime/record/app-payload';
+import { LOADER } from './loader';
 
 /** KaTeX's CSS lists woff2, woff and ttf for every font; browsers all take woff2, so the others go. */
 export function katexWoff2Only(): Plugin {

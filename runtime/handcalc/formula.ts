@@ -2,7 +2,8 @@
 // it reads put in (with units) = result in the display unit. mathjs is used here only
 // to parse and typeset; nothing is evaluated.
 
-import { parse, type MathNode } from 'mathjs';
+import type { MathNode } from 'mathjs';
+import { math } from '../units/math';
 import type { CellState, DisplayValue } from '../engine-types';
 import { nameTex, textTex } from './names';
 import { needsBrackets, quantityTex } from './quantity';
@@ -37,7 +38,7 @@ export function parseForDisplay(expr: string): MathNode | undefined {
   if (parsed.has(expr)) return parsed.get(expr);
   let node: MathNode | undefined;
   try {
-    node = parse(expr);
+    node = math.parse(expr);
   } catch {
     node = undefined;
   }

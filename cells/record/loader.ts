@@ -1,0 +1,25 @@
+// The loader in a record shell: unpacks the app code (gzip + base64, see
+// runtime/record/app-payload.ts) with DecompressionStream, a web standard, and runs it
+// as an inline classic script; on failure the static rendering stays in view.
+
+import { APP_ID, RUN_ID } from '../../runtime/record/app-payload';
+
+/** Runs the app; on failure leaves the static rendering in view and says why. */
+export const LOADER = `
+try {
+  const bin = atob(document.getElementById('${APP_ID}').textContent.trim());
+  const bytes = new Uint8Array(bin.length);
+  for (let i = 0; i < bin.length; i++) bytes[i] = bin.charCodeAt(i);
+  const code = await new Response(new Blob([bytes]).stream().pipeThrough(new DecompressionStream('gzip'))).text();
+  const run = document.createElement('script');
+  run.id = '${RUN_ID}';
+  run.textContent = code;
+  document.body.append(run);
+} catch (e) {
+  const p = document.createElement('p');
+  p.setAttribute('role', 'alert');
+  p.textContent = 'The app in this record could not start (' + e + '); the record below is the issued, static copy.';
+  document.body.prepend(p);
+}
+`.trim();
+
