@@ -1,9 +1,10 @@
 // The review state in the static record: revision log, comments and sign-offs.
-// The review model (issue 7) is written elsewhere; this reads the document's
-// optional `review` field defensively, as untrusted data of unknown shape, and shows
-// whatever text it holds. Nothing here is printed when the document has no review.
+// The review model is runtime/review (issue 7); a record is untrusted data, so its
+// `review` field is read defensively here and only its texts are shown. Nothing is
+// printed when the document has no review.
 
 import type { CalcDocument } from '../document';
+import { isStale, type SignOff } from '../review/index';
 import { escapeHtml } from './escape';
 
 type Obj = Record<string, unknown>;
@@ -21,9 +22,9 @@ function text(v: unknown, max = 2000): string {
 function revisionsHtml(revisions: Obj[]): string {
   if (revisions.length === 0) return '';
   const rows = revisions.map((r) => {
-    const changed = Array.isArray(r.changedInputs)
-      ? r.changedInputs.map((c) => (isObj(c) ? text(c.name ?? c.cellId ?? c.id) : text(c))).filter(Boolean).join(', ')
-      : '';
+    const changed = list(r.changedInputs)
+      .map((c) => `${text(c.name ?? c.id)}${c.from !== undefined || c.to !== undefined ? `: ${text(c.from) || '—'} → ${text(c.to) || '—'}` : ''}`)
+      .filter(Boolean).join('; ');
     return `<tr><td>${text(r.label)}</td><td>${text(r.date)}</td><td>${text(r.by)}</td><td>${text(r.checkedBy)}</td><td>${
       text(r.description)}</td><td>${changed || '—'}</td></tr>`;
   });
@@ -45,11 +46,24 @@ function commentsHtml(comments: Obj[]): string {
   return `<h3>Comments <small>${open} open of ${comments.length}</small></h3><ul class="lt-comments">${items.join('')}</ul>`;
 }
 
-function signoffsHtml(signoffs: Obj[]): string {
+/** Whether what a sign-off covers changed since it was given; undefined when that cannot be told. */
+function stale(s: Obj, doc: CalcDocument): boolean | undefined {
+  if (typeof s.scope !== 'string' || typeof s.covered !== 'string') return undefined;
+  try {
+    return isStale(s as unknown as SignOff, doc);
+  } catch {
+    return undefined;
+  }
+}
+
+function signoffsHtml(signoffs: Obj[], doc: CalcDocument): string {
   if (signoffs.length === 0) return '';
-  const rows = signoffs.map((s) => `<tr><td>${s.scope === 'document' ? 'whole record' : `section ${text(s.scope)}`}</td><td>${
-    text(s.by)}</td><td>${text(s.date)}</td></tr>`);
-  return `<h3>Sign-offs</h3><table class="lt-signoffs"><thead><tr><th>Covers</th><th>By</th><th>Date</th></tr></thead><tbody>${
+  const rows = signoffs.map((s) => {
+    const st = stale(s, doc);
+    return `<tr><td>${s.scope === 'document' ? 'whole record' : `section ${text(s.scope)}`}</td><td>${text(s.by)}</td><td>${
+      text(s.date)}</td><td>${st === undefined ? '—' : st ? '⚠ stale: changed since signed' : '✓ current'}</td></tr>`;
+  });
+  return `<h3>Sign-offs</h3><table class="lt-signoffs"><thead><tr><th>Covers</th><th>By</th><th>Date</th><th>State</th></tr></thead><tbody>${
     rows.join('')}</tbody></table>`;
 }
 
@@ -57,6 +71,6 @@ function signoffsHtml(signoffs: Obj[]): string {
 export function reviewHtml(doc: CalcDocument): string {
   const review = (doc as { review?: unknown }).review;
   if (!isObj(review)) return '';
-  const body = revisionsHtml(list(review.revisions)) + signoffsHtml(list(review.signoffs)) + commentsHtml(list(review.comments));
+  const body = revisionsHtml(list(review.revisions)) + signoffsHtml(list(review.signoffs), doc) + commentsHtml(list(review.comments));
   return body ? `<section class="lt-review" aria-label="Review">${body}</section>` : '';
 }
