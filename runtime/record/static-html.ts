@@ -142,7 +142,7 @@ function verdictHtml(s: CellState | undefined): string {
   const ok = s!.status === 'ok';
   const ratio = s!.ratio !== undefined ? ` <span class="lt-ratio">ratio ${escapeHtml(ratioText(s!.ratio))}</span>` : '';
   const dc = s!.demand && s!.capacity
-    ? ` <span class="lt-dc">demand ${escapeHtml(s!.demand.text)} · capacity ${escapeHtml(s!.capacity.text)}</span>` : '';
+    ? ` <span class="lt-dc">demand ${escapeHtml(resultText(s!.demand.text))} · capacity ${escapeHtml(resultText(s!.capacity.text))}</span>` : '';
   return `<p class="lt-verdict lt-${ok ? 'pass' : 'fail'}"><strong>${ok ? '✓ OK' : '✗ NOT OK'}</strong>${ratio}${dc}</p>`;
 }
 

@@ -191,6 +191,36 @@ describe('the exported main template in Chromium, offline', () => {
   }, 120_000);
 });
 
+describe('opening records in the app', () => {
+  it('opens a record from the file picker and an .lt sheet dropped on the page', async () => {
+    const { context, page, blocked } = await offline();
+    await page.goto(`file://${recordFile}`);
+    await live(page);
+    // The picker: the footing template's record.
+    const footing = parse(readFileSync(join(ROOT, 'docs-templates/spread-footing.lt'), 'utf8')).doc;
+    const footingFile = write('footing.html', (await exportComputed(footing, shell)).html);
+    const chooser = page.waitForEvent('filechooser');
+    await page.keyboard.press('Control+o');
+    await (await chooser).setFiles(footingFile);
+    await page.waitForFunction((subject) => (window as any).loadtrace.doc.meta.subject === subject, footing.meta.subject);
+    await page.waitForFunction(() => !document.querySelector('#cells article.unrendered'));
+    expect(await page.$$eval('#cells article', (els) => els.length)).toBe(footing.cells.length);
+    expect(await page.locator('#lt-record-banner').isVisible()).toBe(false); // seal intact: no message
+    // Drag and drop: a .lt text file.
+    const bearing = readFileSync(join(ROOT, 'docs-templates/bearing-capacity.lt'), 'utf8');
+    const subject = parse(bearing).doc.meta.subject;
+    await page.evaluate((text) => {
+      const dt = new DataTransfer();
+      dt.items.add(new File([text], 'bearing-capacity.lt', { type: 'text/plain' }));
+      document.body.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
+    }, bearing);
+    await page.waitForFunction((s) => (window as any).loadtrace.doc.meta.subject === s, subject);
+    expect(blocked).toEqual([]);
+    await page.screenshot({ path: join(ARTIFACTS, 'record-open-dropped.png') });
+    await context.close();
+  }, 120_000);
+});
+
 describe('hostile and damaged records', () => {
   it('a record full of markup runs nothing and loses nothing', async () => {
     const hostile = hostileDocument();
