@@ -28,6 +28,8 @@ const bytes = Buffer.byteLength(record.html);
 
 const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ARGS });
 const times: number[] = [];
+const PHASES = ['loader', 'unpacked', 'app-started', 'record-open', 'record-shown', 'record-computed', 'record-live'];
+const phases = new Map<string, number[]>(PHASES.map((p) => [p, []]));
 let requests = 0;
 try {
   for (let i = 0; i < RUNS + 1; i++) {
@@ -37,9 +39,13 @@ try {
     await page.goto(`file://${file}`);
     await page.waitForFunction(() => performance.getEntriesByName('loadtrace:record-live').length > 0, null, { timeout: 60_000 });
     const ms = await page.evaluate(() => performance.getEntriesByName('loadtrace:record-live')[0].startTime);
+    const marks = await page.evaluate((names) => names.map((n) => performance.getEntriesByName(`loadtrace:${n}`)[0]?.startTime ?? NaN), PHASES);
     const cells = await page.$$eval('#cells article:not(.unrendered)', (els) => els.length);
     if (cells !== doc.cells.length) throw new Error(`only ${cells} of ${doc.cells.length} cells rendered`);
-    if (i > 0) times.push(ms); // the first run warms the disk cache
+    if (i > 0) { // the first run warms the disk cache
+      times.push(ms);
+      PHASES.forEach((p, k) => phases.get(p)!.push(marks[k]));
+    }
     await context.close();
   }
 } finally {
@@ -50,4 +56,5 @@ try {
 console.log(`record of ${TEMPLATE.replace(`${ROOT}/`, '')}: ${doc.cells.length} cells`);
 console.log(`size: ${(bytes / 1e6).toFixed(3)} MB (${bytes} bytes; app shell ${(Buffer.byteLength(shell) / 1e6).toFixed(3)} MB)   target ≤ 1.5 MB`);
 console.log(`open → every cell rendered: median ${median(times).toFixed(0)} ms (min ${Math.min(...times).toFixed(0)}, max ${Math.max(...times).toFixed(0)}, ${times.length} runs)   target ≤ 400 ms`);
+console.log(`  phases (median ms from navigation start): ${PHASES.map((p) => `${p} ${median(phases.get(p)!).toFixed(0)}`).join(', ')}`);
 console.log(`requests blocked: ${requests}; machine load (1 min): ${loadavg()[0].toFixed(1)} on ${(await import('node:os')).cpus().length} cores`);

@@ -115,12 +115,15 @@ export function installRecord(app: App): RecordHooks {
   async function openEmbedded(): Promise<boolean> {
     const el = document.getElementById(DOC_ID);
     if (!el) return false;
+    performance.mark('loadtrace:record-open');
     const checked = await checkEmbedded(el.textContent ?? '', el.dataset.sha256);
     const { doc, errors } = parse(checked.docText ?? '');
     const problems = [...checked.problems, ...errors.slice(0, 8).map((e) => `line ${e.line}: ${e.message}`)];
     sealWarning = checked.sealOk ? undefined : checked.problems[0];
     openDoc(doc, `record-${(checked.actualDigest ?? '').slice(0, 12)}-${Date.now().toString(36)}`, false);
+    performance.mark('loadtrace:record-shown');
     await app.engine!.settled();
+    performance.mark('loadtrace:record-computed');
     await app.view.whenRendered();
     document.documentElement.classList.add('lt-live');
     performance.mark('loadtrace:record-live'); // every cell rendered (read by bench:record)

@@ -7,6 +7,7 @@ import { APP_ID, RUN_ID } from '../../runtime/record/app-payload';
 /** Runs the app; on failure leaves the static rendering in view and says why. */
 export const LOADER = `
 try {
+  performance.mark('loadtrace:loader');
   const bin = atob(document.getElementById('${APP_ID}').textContent.trim());
   const bytes = new Uint8Array(bin.length);
   for (let i = 0; i < bin.length; i++) bytes[i] = bin.charCodeAt(i);
@@ -14,7 +15,9 @@ try {
   const run = document.createElement('script');
   run.id = '${RUN_ID}';
   run.textContent = code;
+  performance.mark('loadtrace:unpacked');
   document.body.append(run);
+  performance.mark('loadtrace:app-started');
 } catch (e) {
   const p = document.createElement('p');
   p.setAttribute('role', 'alert');
