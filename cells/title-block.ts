@@ -13,7 +13,7 @@ const LABELS: Record<keyof DocMeta, string> = {
 export class TitleBlock {
   constructor(private readonly host: HTMLElement, onEdit: (key: keyof DocMeta, value: string) => void) {
     host.innerHTML = `<div class="tb-grid">${META_KEYS.map((k) =>
-      `<label class="tb-field tb-${k}"><span class="tb-label">${LABELS[k]}</span><input data-meta="${k}" spellcheck="false" autocomplete="off"></label>`,
+      `<label class="tb-field tb-${k}"><span class="tb-label">${LABELS[k]}</span><input data-meta="${k}" spellcheck="false" autocomplete="off"><span class="tb-print" data-print="${k}"></span></label>`,
     ).join('')}</div>`;
     host.addEventListener('input', (e) => {
       const t = e.target as HTMLInputElement;
@@ -26,6 +26,8 @@ export class TitleBlock {
       const field = this.host.querySelector<HTMLInputElement>(`input[data-meta="${k}"]`)!;
       if (field.value !== meta[k] && document.activeElement !== field) field.value = meta[k];
       field.title = meta[k];
+      // Printed pages repeat the title block; form fields do not repeat their values, text does.
+      this.host.querySelector<HTMLElement>(`[data-print="${k}"]`)!.textContent = meta[k];
     }
   }
 }

@@ -292,6 +292,9 @@ describe('the calc sheet in Chromium', () => {
     expect(await page.locator('.toolbar').isVisible()).toBe(false);
     expect(await page.locator('thead .title-block').isVisible()).toBe(true);
     expect(await page.locator('tfoot .print-caution').isVisible()).toBe(true);
+    // the repeated title block prints text, not form fields (which would repeat empty)
+    expect(await page.locator('thead [data-print="project"]').innerText()).toBe('Ferncliff Depot (browser-test fixture)');
+    expect(await page.locator('thead input[data-meta="project"]').isVisible()).toBe(false);
     await page.evaluate(() => window.scrollTo(0, 0));
     await shot('15-print');
     const pdf = await page.pdf({ format: 'Letter' });
