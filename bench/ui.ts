@@ -99,20 +99,44 @@ async function editOnce(page: Page, value: string): Promise<EditTiming> {
   }, value);
 }
 
-async function measure(page: Page, key: string, doc: CalcDocument): Promise<EditTiming[]> {
-  await page.evaluate(([k, d]) => (window as any).loadtraceOpen(k, d), [key, doc] as const);
-  await page.evaluate(async () => {
+interface OpenTiming {
+  /** Open call to the engine settled and the first screens typeset. */
+  firstView: number;
+  /** Open call to every cell typeset (the rest is rendered in slices). */
+  allRendered: number;
+  /** The longest main-thread task while opening (a frozen page would show here). */
+  longestTask: number;
+}
+
+async function open(page: Page, key: string, doc: CalcDocument): Promise<OpenTiming> {
+  await page.evaluate(() => {
+    (window as any).__long = 0;
+    new PerformanceObserver((list) => {
+      for (const e of list.getEntries()) (window as any).__long = Math.max((window as any).__long, e.duration);
+    }).observe({ type: 'longtask' });
+  });
+  return page.evaluate(async ([k, d]) => {
+    const t0 = performance.now();
+    await (window as any).loadtraceOpen(k, d);
     const app = (window as any).loadtrace;
     await app.engine.settled();
+    const firstView = performance.now() - t0;
     await app.view.whenRendered();
-  });
+    const allRendered = performance.now() - t0;
+    await new Promise((r) => setTimeout(r, 100));
+    return { firstView, allRendered, longestTask: (window as any).__long as number };
+  }, [key, doc] as const);
+}
+
+async function measure(page: Page, key: string, doc: CalcDocument): Promise<{ edits: EditTiming[]; opened: OpenTiming }> {
+  const opened = await open(page, key, doc);
   const times: EditTiming[] = [];
   for (let i = 0; i < WARMUP + EDITS; i++) {
     const t = await editOnce(page, i % 2 ? '2 in' : '3 in');
     if (t.seen !== 10) throw new Error(`only ${t.seen} of 10 dependents re-rendered on edit ${i}`);
     if (i >= WARMUP) times.push(t);
   }
-  return times;
+  return { edits: times, opened };
 }
 
 async function main(): Promise<void> {
@@ -129,16 +153,20 @@ async function main(): Promise<void> {
     const ta = await measure(page, 'bench-demo', small);
     const tb = await measure(page, 'bench-2000', big);
     const fmt = (x: number) => x.toFixed(1).padStart(6);
-    const line = (label: string, t: EditTiming[]) => {
+    const line = (label: string, { edits: t, opened: o }: { edits: EditTiming[]; opened: OpenTiming }) => {
       const all = stats(t.map((x) => x.ms));
       const part = (f: (x: EditTiming) => number) => fmt(stats(t.map(f)).median);
       console.log(`  ${label} median ${fmt(all.median)} ms   p90 ${fmt(all.p90)} ms   (medians: handler ${part((x) => x.sync)}, to next frame ${part((x) => x.frame)}, frame start to last re-typeset ${part((x) => x.work)})`);
+      opens.push(`  ${label} first screens ${fmt(o.firstView)} ms, every cell typeset ${fmt(o.allRendered)} ms, longest task ${fmt(o.longestTask)} ms`);
       return all.median;
     };
+    const opens: string[] = [];
     console.log(`edit → last of 10 dependents re-typeset (${EDITS} edits each, headless Chromium)`);
     const a = line(`demo record (${small.cells.length} cells):     `, ta);
     const b = line(`generated record (${big.cells.length} cells):`, tb);
     console.log(`  ratio 2,000-cell / demo (medians): ${(b / a).toFixed(2)}`);
+    console.log('opening the record (one run each)');
+    for (const o of opens) console.log(o);
   } finally {
     await browser.close();
     server.stop();
