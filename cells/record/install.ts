@@ -176,9 +176,16 @@ export function installRecord(app: App): RecordHooks {
     if (k === 's') void exportNow();
     else picker.click();
   });
-  const keys = document.querySelector('#help-body table.keys');
-  keys?.insertAdjacentHTML('beforeend', '<tr><td><kbd>Ctrl + S</kbd></td><td>Export the calc record (.html)</td></tr>'
-    + '<tr><td><kbd>Ctrl + O</kbd></td><td>Open a record (.html) or sheet (.lt); or drop the file on the page</td></tr>');
+  // The help panel is filled by the page after this runs (and may be again): add our keys whenever it is.
+  const addHelpRows = () => {
+    const keys = document.querySelector('#help-body table.keys');
+    if (!keys || keys.querySelector('[data-record-keys]')) return;
+    keys.insertAdjacentHTML('beforeend', '<tr data-record-keys><td><kbd>Ctrl + S</kbd></td><td>Export the calc record (.html)</td></tr>'
+      + '<tr data-record-keys><td><kbd>Ctrl + O</kbd></td><td>Open a record (.html) or sheet (.lt); or drop the file on the page</td></tr>');
+  };
+  const helpBody = document.getElementById('help-body');
+  if (helpBody) new MutationObserver(addHelpRows).observe(helpBody, { childList: true });
+  addHelpRows();
 
   // Drag and drop a record or sheet anywhere on the page.
   document.addEventListener('dragover', (e) => {

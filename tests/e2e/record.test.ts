@@ -99,6 +99,8 @@ describe('the exported main template in Chromium, offline', () => {
     expect(cells.map((c) => c.id)).toEqual(doc.cells.map((c) => c.id));
     expect(cells.filter((c) => /unrendered|st-pending|st-error/.test(c.cls))).toEqual([]);
     expect(await page.locator('#status').textContent()).toContain('seal intact');
+    expect(await page.locator('#help-body').textContent()).toContain('Export the calc record'); // the shortcut is listed
+    expect(await page.locator('.toolbar [data-record="export"]').isVisible()).toBe(true);
     await page.screenshot({ path: join(ARTIFACTS, 'record-opened.png') });
 
     // Export again, as a person does (Ctrl+S): the embedded document is byte-identical.
