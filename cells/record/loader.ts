@@ -8,9 +8,15 @@ import { APP_ID, RUN_ID } from '../../runtime/record/app-payload';
 export const LOADER = `
 try {
   performance.mark('loadtrace:loader');
-  const bin = atob(document.getElementById('${APP_ID}').textContent.trim());
-  const bytes = new Uint8Array(bin.length);
-  for (let i = 0; i < bin.length; i++) bytes[i] = bin.charCodeAt(i);
+  const packed = document.getElementById('${APP_ID}').textContent.trim();
+  // Native base64 where the browser has it; else a loop in a function (top-level code is not optimised).
+  const decode = (text) => {
+    const bin = atob(text);
+    const out = new Uint8Array(bin.length);
+    for (let i = 0; i < bin.length; i++) out[i] = bin.charCodeAt(i);
+    return out;
+  };
+  const bytes = typeof Uint8Array.fromBase64 === 'function' ? Uint8Array.fromBase64(packed) : decode(packed);
   const code = await new Response(new Blob([bytes]).stream().pipeThrough(new DecompressionStream('gzip'))).text();
   const run = document.createElement('script');
   run.id = '${RUN_ID}';
