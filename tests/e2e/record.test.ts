@@ -95,6 +95,16 @@ describe('the exported main template in Chromium, offline', () => {
     await live(page);
     expect(requests).toEqual([`file://${recordFile}`]); // the page itself, nothing else (CSP connect-src 'none', issue 5)
     expect(blocked).toEqual([]);
+    // The app typesets cells as they come near the viewport: scroll through the whole sheet.
+    await page.evaluate(async () => {
+      const frame = () => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)));
+      for (const el of document.querySelectorAll('#cells article')) {
+        el.scrollIntoView({ block: 'center' });
+        await frame();
+      }
+      for (let i = 0; i < 200 && document.querySelector('#cells article.unrendered'); i++) await frame();
+      window.scrollTo(0, 0);
+    });
     const cells = await page.$$eval('#cells article', (els) => els.map((e) => ({ id: (e as HTMLElement).dataset.id, cls: e.className })));
     expect(cells.map((c) => c.id)).toEqual(doc.cells.map((c) => c.id));
     expect(cells.filter((c) => /unrendered|st-pending|st-error/.test(c.cls))).toEqual([]);
@@ -118,10 +128,13 @@ describe('the exported main template in Chromium, offline', () => {
     const expected = await computed(edited);
     const changed = expected.filter((r, i) => r.kind === 'formula' && r.value !== rows[i].value);
     expect(changed.length).toBeGreaterThan(0);
-    const before = await page.locator(`#cell-${changed[0].id}`).textContent();
+    const dependent = page.locator(`#cell-${changed[0].id}`);
+    await dependent.scrollIntoViewIfNeeded();
+    const before = await dependent.textContent();
     await page.locator(`#cell-${fc.id} .value-field`).fill('6000 psi');
     await page.locator(`#cell-${fc.id} .value-field`).press('Enter');
-    await expect.poll(() => page.locator(`#cell-${changed[0].id}`).textContent()).not.toBe(before);
+    await dependent.scrollIntoViewIfNeeded(); // the app re-typesets cells near the viewport
+    await expect.poll(() => dependent.textContent()).not.toBe(before);
     const engineRows = await page.evaluate(() => {
       const app = (window as any).loadtrace;
       return app.doc.cells.map((c: { id: string }) => ({ id: c.id, status: app.engine.state(c.id)?.status, value: app.engine.state(c.id)?.display?.value ?? null }));
@@ -202,10 +215,9 @@ describe('opening records in the app', () => {
     const footing = parse(readFileSync(join(ROOT, 'docs-templates/spread-footing.lt'), 'utf8')).doc;
     const footingFile = write('footing.html', (await exportComputed(footing, shell)).html);
     const chooser = page.waitForEvent('filechooser');
-    await page.keyboard.press('Control+o');
+    await page.locator('.toolbar [data-record="open"]').click();
     await (await chooser).setFiles(footingFile);
     await page.waitForFunction((subject) => (window as any).loadtrace.doc.meta.subject === subject, footing.meta.subject);
-    await page.waitForFunction(() => !document.querySelector('#cells article.unrendered'));
     expect(await page.$$eval('#cells article', (els) => els.length)).toBe(footing.cells.length);
     expect(await page.locator('#lt-record-banner').isVisible()).toBe(false); // seal intact: no message
     // Drag and drop: a .lt text file.
