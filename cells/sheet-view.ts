@@ -1,6 +1,8 @@
 // The sheet on the page: one <article> per cell, rendered from the cell's view.
-// Only cells whose state, content or number changed are rendered again; a long
-// sheet is rendered in slices so the page stays responsive.
+// Only cells whose state, content or number changed are rendered again, and a cell
+// is first typeset when it comes near the viewport: until then it shows its source
+// text (readable, searchable), so a long sheet opens quickly and stays small in
+// memory. Printing typesets every cell.
 
 import DOMPurify from 'dompurify';
 import type { CalcDocument, Cell, CheckCell } from '../runtime/document';
@@ -22,11 +24,17 @@ interface Slot {
   content: HTMLElement;
   html?: string;
   number: string;
+  /** Within NEAR of the viewport: typeset now rather than later. */
+  near: boolean;
+  /** Changed while far from view: typeset when it comes near. */
+  stale: boolean;
 }
 
-/** Cells rendered at once when a sheet opens (a screenful or two); the rest follow in slices. */
-const FIRST_SLICE = 40;
-const SLICE_MS = 8;
+/** How far beyond the viewport cells are typeset ahead of scrolling. */
+const NEAR = '1200px 0px';
+/** From this many cells on, off-screen cells also skip layout and paint (content-visibility). */
+const LONG_SHEET = 300;
+const STATUS_CLASSES = ['st-ok', 'st-fail', 'st-error', 'st-pending', 'st-plain'];
 
 export class SheetView {
   private slots = new Map<string, Slot>();
@@ -36,11 +44,11 @@ export class SheetView {
   private byName = new Map<string, string>();
   /** name → ids of the cells whose hand calc shows that name's value. */
   private readers = new Map<string, Set<string>>();
-  private queue: string[] = [];
-  private queued = false;
   private restoring = false;
-  /** Resolves when an opened sheet has its first screens typeset. */
+  /** Resolves when an opened sheet has values (cells are typeset from then on). */
   private opening: Promise<void> = Promise.resolve();
+  private ready = false;
+  private nearby?: IntersectionObserver;
   selected?: string;
 
   constructor(
@@ -61,17 +69,28 @@ export class SheetView {
       const id = this.cellIdOf(e.target);
       if (id && !(e.target as HTMLElement).closest('.value-field, .cell-editor')) events.open(id);
     });
+    // A printed sheet shows every cell typeset.
+    window.addEventListener('beforeprint', () => this.renderAll());
   }
 
   /** Shows a whole new sheet (on open). */
   show(doc: CalcDocument, engine: Engine): void {
     this.engine = engine;
+    this.nearby?.disconnect();
+    this.nearby = typeof IntersectionObserver === 'function'
+      ? new IntersectionObserver((entries) => this.onNear(entries), { rootMargin: NEAR })
+      : undefined;
     this.host.textContent = '';
     this.slots.clear();
     this.readers.clear();
-    this.queue = [];
     this.doc = { meta: doc.meta, cells: [] };
+    this.ready = false;
     this.sync(doc);
+  }
+
+  /** Typesets every cell not yet typeset or out of date (before printing). */
+  renderAll(): void {
+    for (const [id, slot] of this.slots) if (slot.html === undefined || slot.stale) this.renderCell(id, true);
   }
 
   /** Brings the page in line with a new version of the sheet. */
@@ -83,10 +102,12 @@ export class SheetView {
       return;
     }
     this.numbers = numberCells(doc.cells);
+    this.host.classList.toggle('long-sheet', doc.cells.length > LONG_SHEET);
     this.byName = new Map(doc.cells.flatMap((c) => (cellName(c) ? [[cellName(c)!, c.id] as const] : [])));
     const live = new Set(doc.cells.map((c) => c.id));
     for (const [id, slot] of this.slots) {
       if (!live.has(id)) {
+        this.nearby?.unobserve(slot.el);
         slot.el.remove();
         this.slots.delete(id);
       }
@@ -97,7 +118,10 @@ export class SheetView {
       this.host.innerHTML = doc.cells.map(placeholderHtml).join('');
       let el = this.host.firstElementChild as HTMLElement | null;
       for (const cell of doc.cells) {
-        const slot: Slot = { cell, el: el!, content: el!.firstElementChild as HTMLElement, number: this.numbers.get(cell.id) ?? '' };
+        const slot: Slot = {
+          cell, el: el!, content: el!.firstElementChild as HTMLElement, number: this.numbers.get(cell.id) ?? '', near: false, stale: true,
+        };
+        this.nearby?.observe(slot.el);
         this.slots.set(cell.id, slot);
         fresh.push(cell.id);
         el = el!.nextElementSibling as HTMLElement | null;
@@ -112,6 +136,7 @@ export class SheetView {
         slot = this.newSlot(cell);
         this.slots.set(cell.id, slot);
         fresh.push(cell.id);
+        this.nearby?.observe(slot.el);
       }
       if (slot.el.nextElementSibling !== before || slot.el.parentElement !== this.host) this.host.insertBefore(slot.el, before);
       before = slot.el;
@@ -123,22 +148,22 @@ export class SheetView {
       if (slot.cell !== cell || slot.number !== number) {
         slot.cell = cell;
         slot.number = number;
-        if (slot.html !== undefined) dirty.push(cell.id);
+        dirty.push(cell.id);
       }
     }
     if (prev.cells.length === 0 && this.engine) {
       // A sheet just opened: typeset once the engine has values, not twice (pending, then computed).
-      const order = doc.cells.map((c) => c.id);
       const engine = this.engine;
       this.opening = engine.settled().then(() => {
         if (this.engine !== engine) return;
-        order.slice(0, FIRST_SLICE).forEach((id) => this.slots.get(id)?.html === undefined && this.renderCell(id));
-        this.enqueue(order.slice(FIRST_SLICE));
+        this.ready = true;
+        for (const [id, slot] of this.slots) if (slot.near) this.renderCell(id);
         this.renderSummary();
       });
-    } else {
-      fresh.forEach((id) => this.renderCell(id));
+      return;
     }
+    // New cells (added, duplicated) are typeset at once: the person is looking at them.
+    fresh.forEach((id) => this.renderCell(id, true));
     dirty.forEach((id) => this.renderCell(id));
     this.renderSummary();
   }
@@ -157,7 +182,7 @@ export class SheetView {
       }
       slot.cell = cell;
       checks ||= cell.kind === 'check';
-      if (slot.html !== undefined) this.renderCell(cell.id);
+      this.renderCell(cell.id);
     }
     if (checks) this.renderSummary();
   }
@@ -170,7 +195,7 @@ export class SheetView {
       const name = this.slots.get(id) && cellName(this.slots.get(id)!.cell);
       if (name) this.readers.get(name)?.forEach((r) => todo.add(r));
     }
-    for (const id of todo) if (this.slots.get(id)?.html !== undefined) this.renderCell(id);
+    for (const id of todo) this.renderCell(id);
     if (changed.some((id) => this.slots.get(id)?.cell.kind === 'check')) this.renderSummary();
   }
 
@@ -193,6 +218,8 @@ export class SheetView {
     this.selected = id;
     const el = id ? this.slots.get(id)?.el : undefined;
     if (!el) return;
+    const slot = this.slots.get(id!)!;
+    if (slot.html === undefined || slot.stale) this.renderCell(id!, true); // so Enter finds its field at once
     el.classList.add('selected');
     if (focus && !el.contains(document.activeElement)) el.focus({ preventScroll: true });
     el.scrollIntoView({ block: 'nearest' });
@@ -203,20 +230,29 @@ export class SheetView {
     return this.doc.cells.map((c) => c.id);
   }
 
-  /** Resolves when every queued cell is rendered (for scroll restore and print). */
+  /** Resolves when the cells near the viewport are typeset (for scroll restore, tests, benchmarks). */
   async whenRendered(): Promise<void> {
     await this.opening;
-    await new Promise<void>((resolve) => {
-      const check = () => (this.queue.length === 0 && !this.queued ? resolve() : setTimeout(check, 16));
-      check();
-    });
+    const frame = () => new Promise<void>((r) => requestAnimationFrame(() => setTimeout(r, 0)));
+    await frame(); // the observer reports what is near after a layout
+    for (let i = 0; i < 120 && [...this.slots.values()].some((s) => s.near && (s.html === undefined || s.stale)); i++) await frame();
+  }
+
+  private onNear(entries: IntersectionObserverEntry[]): void {
+    for (const e of entries) {
+      const id = (e.target as HTMLElement).dataset.id;
+      const slot = id ? this.slots.get(id) : undefined;
+      if (!slot) continue;
+      slot.near = e.isIntersecting;
+      if (slot.near && (slot.html === undefined || slot.stale)) this.renderCell(id!);
+    }
   }
 
   private newSlot(cell: Cell): Slot {
     const t = document.createElement('template');
     t.innerHTML = placeholderHtml(cell);
     const el = t.content.firstElementChild as HTMLElement;
-    return { cell, el, content: el.firstElementChild as HTMLElement, number: this.numbers.get(cell.id) ?? '' };
+    return { cell, el, content: el.firstElementChild as HTMLElement, number: this.numbers.get(cell.id) ?? '', near: false, stale: true };
   }
 
   private context(id: string): BindContext {
@@ -228,9 +264,18 @@ export class SheetView {
     };
   }
 
-  private renderCell(id: string): void {
+  /** Typesets a cell now when it is near the viewport (or `force`), else marks it for later. */
+  private renderCell(id: string, force = false): void {
     const slot = this.slots.get(id);
     if (!slot || !this.engine) return;
+    // Never typeset yet and far from view (or the engine still opening): later. A cell
+    // once typeset is kept current wherever it is, so what the page shows is never stale.
+    const later = !this.ready || (slot.html === undefined && !slot.near);
+    if (!force && this.nearby && later) {
+      slot.stale = true;
+      return;
+    }
+    slot.stale = false;
     const state = this.engine.state(id);
     for (const name of state?.reads ?? []) {
       let set = this.readers.get(name);
@@ -243,7 +288,9 @@ export class SheetView {
       // Notes come from the document: one more pass, so no markup a sheet carries can run.
       html = DOMPurify.sanitize(html, { ALLOWED_URI_REGEXP: /^(?:https?:|#)/i, ADD_ATTR: ['target'] });
     }
-    slot.el.className = `cell kind-${slot.cell.kind} st-${view.status}${this.selected === id ? ' selected' : ''}`;
+    // Only this view's own classes change; others (selection, review marks) stay.
+    slot.el.classList.remove('unrendered', ...STATUS_CLASSES.filter((c) => c !== `st-${view.status}`));
+    slot.el.classList.add(`st-${view.status}`);
     if (html === slot.html) return;
     slot.html = html;
     this.writeContent(slot, html);
@@ -267,22 +314,6 @@ export class SheetView {
       slot.content.innerHTML = html;
       this.restoring = false;
     }
-  }
-
-  private enqueue(ids: string[]): void {
-    this.queue.push(...ids);
-    if (this.queued) return;
-    this.queued = true;
-    const step = () => {
-      const until = performance.now() + SLICE_MS;
-      while (this.queue.length && performance.now() < until) {
-        const id = this.queue.shift()!;
-        if (this.slots.get(id)?.html === undefined) this.renderCell(id);
-      }
-      if (this.queue.length) setTimeout(step, 0);
-      else this.queued = false;
-    };
-    setTimeout(step, 0);
   }
 
   private renderSummary(): void {

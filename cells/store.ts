@@ -1,6 +1,8 @@
 // Autosave in the browser's IndexedDB: each sheet with its undo history (as deltas),
 // a version stamp so two tabs never silently overwrite each other, and the view
-// state (scroll position) kept apart so scrolling never counts as an edit.
+// state (scroll position) kept apart so scrolling never counts as an edit. The
+// oldest sheet of the history (the base) is stored apart and written only when it
+// changes, so a save after one edit writes a few cells, not the whole sheet.
 
 import type { CalcDocument } from '../runtime/document';
 import { diffSheets, unpackSheets, type History, type SheetDelta } from '../runtime/edit/index';
@@ -8,7 +10,9 @@ import { diffSheets, unpackSheets, type History, type SheetDelta } from '../runt
 export interface SavedSheet {
   key: string;
   title: string;
+  /** Filled in by load(); stored in the bases store under `baseId`. */
   base: CalcDocument;
+  baseId?: string;
   steps: SheetDelta[];
   /** Position of the present sheet in base + steps. */
   present: number;
@@ -27,6 +31,7 @@ const DB_NAME = 'loadtrace';
 const SHEETS = 'sheets';
 const VIEWS = 'views';
 const SETTINGS = 'settings';
+const BASES = 'bases';
 
 function request<T>(r: IDBRequest<T>): Promise<T> {
   return new Promise((resolve, reject) => {
@@ -66,24 +71,39 @@ export function unpackHistory(saved: SavedSheet): History {
 export type SaveOutcome = { ok: true; version: number } | { ok: false; theirs: SavedSheet };
 
 export class SheetStore {
+  /** The base this tab last wrote or read for each sheet, with its id. */
+  private readonly bases = new Map<string, { doc: CalcDocument; id: string }>();
+
   private constructor(private readonly db: IDBDatabase) {}
 
   static open(): Promise<SheetStore> {
     return new Promise((resolve, reject) => {
-      const req = indexedDB.open(DB_NAME, 1);
+      const req = indexedDB.open(DB_NAME, 2);
       req.onupgradeneeded = () => {
         const db = req.result;
         if (!db.objectStoreNames.contains(SHEETS)) db.createObjectStore(SHEETS, { keyPath: 'key' });
         if (!db.objectStoreNames.contains(VIEWS)) db.createObjectStore(VIEWS);
         if (!db.objectStoreNames.contains(SETTINGS)) db.createObjectStore(SETTINGS);
+        if (!db.objectStoreNames.contains(BASES)) db.createObjectStore(BASES);
       };
       req.onsuccess = () => resolve(new SheetStore(req.result));
       req.onerror = () => reject(req.error);
     });
   }
 
-  load(key: string): Promise<SavedSheet | undefined> {
-    return request(this.db.transaction(SHEETS).objectStore(SHEETS).get(key));
+  async load(key: string): Promise<SavedSheet | undefined> {
+    const tx = this.db.transaction([SHEETS, BASES]);
+    const [record, base] = await Promise.all([
+      request(tx.objectStore(SHEETS).get(key)) as Promise<SavedSheet | undefined>,
+      request(tx.objectStore(BASES).get(key)) as Promise<{ id: string; doc: CalcDocument } | undefined>,
+    ]);
+    if (!record) return undefined;
+    if (record.baseId) {
+      if (!base || base.id !== record.baseId) throw new Error(`the saved history of "${key}" is incomplete`);
+      record.base = base.doc;
+    }
+    if (record.base && record.baseId) this.bases.set(key, { doc: record.base, id: record.baseId });
+    return record;
   }
 
   /**
@@ -91,9 +111,11 @@ export class SheetStore {
    * When another tab saved in between, nothing is written and its record comes back.
    */
   save(key: string, title: string, h: History, expected: number, writer: string): Promise<SaveOutcome> {
-    const packed = packHistory(h);
+    const { base, ...packed } = packHistory(h);
+    const known = this.bases.get(key);
+    const baseId = known?.doc === base ? known.id : `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}`;
     return new Promise((resolve, reject) => {
-      const tx = this.db.transaction(SHEETS, 'readwrite');
+      const tx = this.db.transaction([SHEETS, BASES], 'readwrite');
       const store = tx.objectStore(SHEETS);
       let outcome: SaveOutcome;
       const get = store.get(key);
@@ -104,11 +126,16 @@ export class SheetStore {
           outcome = { ok: false, theirs: current! };
           return;
         }
-        const record: SavedSheet = { key, title, ...packed, version: have + 1, writer, savedAt: Date.now() };
+        // Same version as this tab last saw, so the stored base is the one this tab knows.
+        if (known?.doc !== base || current?.baseId !== baseId) tx.objectStore(BASES).put({ id: baseId, doc: base }, key);
+        const record = { key, title, ...packed, baseId, version: have + 1, writer, savedAt: Date.now() };
         store.put(record);
         outcome = { ok: true, version: record.version };
       };
-      tx.oncomplete = () => resolve(outcome);
+      tx.oncomplete = () => {
+        if (outcome?.ok) this.bases.set(key, { doc: base, id: baseId });
+        resolve(outcome);
+      };
       tx.onerror = () => reject(tx.error);
       tx.onabort = () => reject(tx.error);
     });

@@ -72,10 +72,18 @@ describe('the calc sheet in Chromium', () => {
     expect(await page.locator('.sum-row').count()).toBe(checks);
     expect(await page.locator('#cells article.cell').count()).toBe(await page.evaluate(() => (window as any).loadtrace.doc.cells.length));
     expect(await page.locator('#cells .katex').count()).toBeGreaterThan(20);
+    // cells far below the viewport wait as source text until they come near (or the sheet is printed)
+    expect(await page.locator('#cells article.unrendered').count()).toBeGreaterThan(0);
     const caution = page.locator('.caution-bar');
     expect(await caution.isVisible()).toBe(true);
     expect(await caution.innerText()).toContain("not a substitute for, a licensed engineer's judgement; local codes govern");
     await shot('01-open-demo');
+    const last = page.locator('#cells article.cell').last();
+    await last.scrollIntoViewIfNeeded();
+    await page.waitForFunction(() => !document.querySelector('#cells article.cell:last-child')?.classList.contains('unrendered'));
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await page.pdf({ format: 'Letter' });
+    expect(await page.locator('#cells article.unrendered').count()).toBe(0);
   });
 
   it('opens a sheet of its own through the page', async () => {
