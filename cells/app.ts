@@ -5,12 +5,11 @@ import type { CalcDocument, CellKind, DocMeta } from '../runtime/document';
 import { cellName } from '../runtime/document';
 import {
   EditError, addCell, canRedo, canUndo, deleteCell, duplicateCell, moveCell, record, redo, setCellFields,
-  setInputValue, setMeta, startHistory, undo, type CellFields, type History,
+  setInputValueKeepUnit, setMeta, startHistory, undo, type CellFields, type History,
 } from '../runtime/edit/index';
 import { createEngine } from '../runtime/engine';
 import type { Engine } from '../runtime/engine-types';
-import { hasFeetInches } from '../runtime/units/feet-inches';
-import { canonicalUnit, sheetSystem, switchSystem, typedUnit, type UnitMemory } from '../runtime/units/systems';
+import { sheetSystem, switchSystem, type UnitMemory } from '../runtime/units/systems';
 import { Autosave } from './autosave';
 import { CellEditor } from './cell-editor';
 import { SourceError } from './kind';
@@ -50,7 +49,7 @@ export class App {
 
   constructor(private readonly el: AppElements, readonly autosave: Autosave | undefined) {
     this.view = new SheetView(el.sheet, el.summary, {
-      commitValue: (id, value) => this.apply(keepDisplayUnit(setInputValue(this.doc, id, value), this.doc, id), `value:${id}`),
+      commitValue: (id, value) => this.apply(setInputValueKeepUnit(this.doc, id, value), `value:${id}`),
       open: (id) => this.openEditor(id),
       select: (id) => this.view.select(id, false),
     });
@@ -303,19 +302,4 @@ export class App {
     });
     return { names, functions: functionEntries(), units: unitNames() };
   }
-}
-
-/**
- * An input without a display unit shows the unit typed. When a value is typed in
- * another unit (450 mm where 18 in stood), the unit shown before is kept as the
- * display unit, so the sheet does not change units under the reader.
- */
-export function keepDisplayUnit(next: CalcDocument, prev: CalcDocument, id: string): CalcDocument {
-  const before = prev.cells.find((c) => c.id === id);
-  const after = next.cells.find((c) => c.id === id);
-  if (before?.kind !== 'input' || after?.kind !== 'input' || after.unit || after.choices) return next;
-  const was = typedUnit(before.value);
-  const now = typedUnit(after.value);
-  if (!was || !now || canonicalUnit(was) === canonicalUnit(now)) return next;
-  return setCellFields(next, id, { unit: hasFeetInches(before.value) ? 'in' : was });
 }

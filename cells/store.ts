@@ -74,7 +74,10 @@ export class SheetStore {
   /** The base this tab last wrote or read for each sheet, with its id. */
   private readonly bases = new Map<string, { doc: CalcDocument; id: string }>();
 
-  private constructor(private readonly db: IDBDatabase) {}
+  private constructor(private readonly db: IDBDatabase) {
+    // A newer version of the app in another tab needs this connection closed to upgrade.
+    db.onversionchange = () => db.close();
+  }
 
   static open(): Promise<SheetStore> {
     return new Promise((resolve, reject) => {

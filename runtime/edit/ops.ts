@@ -3,6 +3,8 @@
 
 import type { CalcDocument, Cell, CellKind, DocMeta } from '../document';
 import { cellName } from '../document';
+import { hasFeetInches } from '../units/feet-inches';
+import { canonicalUnit, typedUnit } from '../units/systems';
 
 /** An edit that cannot be made (unknown cell, bad name). The message is for people. */
 export class EditError extends Error {
@@ -126,6 +128,22 @@ export function setInputValue(doc: CalcDocument, id: string, value: string): Cal
     const cell = expectKind(c, ['input']);
     return cell.value === value ? cell : { ...cell, value };
   });
+}
+
+/**
+ * Stores a typed value as setInputValue does, and keeps what the reader sees in the
+ * same unit: an input with no display unit shows the unit typed, so when a value is
+ * typed in another unit (450 mm where 18 in stood) the unit shown before becomes the
+ * display unit (in for feet-inch values).
+ */
+export function setInputValueKeepUnit(doc: CalcDocument, id: string, value: string): CalcDocument {
+  const next = setInputValue(doc, id, value);
+  const before = doc.cells[indexOfCell(doc, id)];
+  if (next === doc || before.kind !== 'input' || before.unit || before.choices) return next;
+  const was = typedUnit(before.value);
+  const now = typedUnit(value);
+  if (!was || !now || canonicalUnit(was) === canonicalUnit(now)) return next;
+  return setCellFields(next, id, { unit: hasFeetInches(before.value) ? 'in' : was });
 }
 
 /** Sets the expression of a formula or the condition of a check. */

@@ -4,7 +4,7 @@ import type { CalcDocument, Cell } from '../../runtime/document';
 import { emptyMeta } from '../../runtime/document';
 import {
   EditError, addCell, applyDelta, canRedo, canUndo, deleteCell, diffSheets, duplicateCell, insertCell,
-  moveCell, packSheets, record, redo, renameCell, renameInExpr, setCellFields, setExpr, setInputValue,
+  moveCell, packSheets, record, redo, renameCell, renameInExpr, setCellFields, setExpr, setInputValue, setInputValueKeepUnit,
   setMeta, setNoteText, setSectionTitle, startHistory, undo, unpackSheets,
 } from '../../runtime/edit/index';
 
@@ -50,6 +50,18 @@ describe('edit operations', () => {
     expect(setSectionTitle(d, 's1', 'Gravity loads').cells[0]).toMatchObject({ title: 'Gravity loads' });
     expect(() => setInputValue(d, 'f1', '3')).toThrow(EditError);
     expect(() => setExpr(d, 'nope', '3')).toThrow(/no cell/);
+  });
+
+  it('keep the unit shown when a value is typed in another unit', () => {
+    const d = sheet();
+    // i2 shows the unit typed (psf); a value in kPa keeps psf as its display unit
+    expect(setInputValueKeepUnit(d, 'i2', '2.4 kPa').cells[2]).toMatchObject({ value: '2.4 kPa', unit: 'psf' });
+    // same unit typed, or a display unit already set: only the value changes
+    expect(setInputValueKeepUnit(d, 'i2', '40 psf').cells[2]).not.toHaveProperty('unit');
+    expect(setInputValueKeepUnit(d, 'i1', '5 kPa').cells[1]).toMatchObject({ value: '5 kPa', unit: 'psf' });
+    const ft = setInputValue(d, 'i2', `1'-6"`);
+    expect(setInputValueKeepUnit(ft, 'i2', '450 mm').cells[2]).toMatchObject({ value: '450 mm', unit: 'in' });
+    expect(setInputValueKeepUnit(d, 'i2', '50 psf')).toBe(d);
   });
 
   it('add, duplicate, move and delete', () => {
