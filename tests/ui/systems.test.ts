@@ -9,7 +9,7 @@ import {
 // A private mathjs instance with the trade units, only to compare dimensions.
 const math = create(all);
 // kip = 1000 lbf, ksi = 1000 psi, psf = lbf/ft², ksf = kip/ft², pcf = lbf/ft³,
-// plf = lbf/ft, klf = kip/ft — definitions as in ASCE 7-22 §1.2 symbols (common practice)
+// plf = lbf/ft, klf = kip/ft (common practice)
 math.createUnit('kip', { definition: '1000 lbf' }, { override: true });
 math.createUnit('ksi', '1000 psi');
 math.createUnit('psf', '1 lbf/ft^2');
