@@ -9,7 +9,31 @@ import { CellError } from './cell-error';
 export const MAX_FORMULA_LENGTH = 2000;
 export const MAX_BRACKET_DEPTH = 40;
 
+// The engine reads each formula twice (for its names, then to compile it) and a sheet
+// often repeats one; parsing is most of the cost of opening a large sheet.
+const CACHE_SIZE = 8000;
+const cache = new Map<string, MathNode | CellError>();
+
 export function parseFormula(source: string): MathNode {
+  const hit = cache.get(source);
+  if (hit !== undefined) {
+    if (hit instanceof CellError) throw hit;
+    return hit;
+  }
+  let out: MathNode | CellError;
+  try {
+    out = parseUncached(source);
+  } catch (e) {
+    if (!(e instanceof CellError)) throw e;
+    out = e;
+  }
+  if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value as string);
+  cache.set(source, out);
+  if (out instanceof CellError) throw out;
+  return out;
+}
+
+function parseUncached(source: string): MathNode {
   if (source.length > MAX_FORMULA_LENGTH) {
     throw new CellError('syntax', `the formula is ${source.length} characters long; the limit is ${MAX_FORMULA_LENGTH}`);
   }
