@@ -41,8 +41,12 @@ async function drawnLength(cellId: string, role: string): Promise<number> {
   }, role);
 }
 
+// Cells are typeset as they come near the view: bring the cell there and wait for its text.
 async function cellText(id: string): Promise<string> {
-  return (await page.locator(`#cell-${id}`).innerText()).replace(/\s+/g, ' ');
+  const cell = page.locator(`#cell-${id}`);
+  await cell.scrollIntoViewIfNeeded();
+  await page.waitForFunction((sel) => (document.querySelector(sel) as HTMLElement | null)?.innerText.trim() !== '', `#cell-${id}`, { timeout: 10_000 });
+  return (await cell.innerText()).replace(/\s+/g, ' ');
 }
 
 describe('figures in the browser', () => {
