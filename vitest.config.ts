@@ -23,6 +23,9 @@ export default defineConfig({
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],
           fileParallelism: false,
+          // A loaded two-core CI machine can stall a headless browser once; a second try
+          // must still pass every assertion.
+          retry: 1,
           sequence: { groupOrder: 1 },
         },
       },

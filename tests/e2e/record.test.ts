@@ -97,7 +97,8 @@ describe('the exported main template in Chromium, offline', () => {
     expect(blocked).toEqual([]);
     // The app typesets cells as they come near the viewport: scroll through the whole sheet.
     await page.evaluate(async () => {
-      const frame = () => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)));
+      // A frame, or 100 ms if the page draws no frame meanwhile: the loop cannot hang.
+      const frame = () => new Promise((r) => { const t = setTimeout(r, 100); requestAnimationFrame(() => setTimeout(() => { clearTimeout(t); r(null); }, 0)); });
       for (const el of document.querySelectorAll('#cells article')) {
         el.scrollIntoView({ block: 'center' });
         await frame();
