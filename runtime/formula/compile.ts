@@ -2,11 +2,11 @@
 // cells, infer and check units once, and build a closure that evaluates on plain
 // numbers in SI base units. Nothing here evaluates text or reaches the host.
 
-import type { MathNode } from 'mathjs';
 import type { LibFunction } from '../library/types';
-import { addDims, DIMLESS, isDimless, sameDims, scaleDims, isUnitName, unitInfo } from '../units/dimension';
+import { addDims, DIMLESS, isDimless, scaleDims, isUnitName, unitInfo } from '../units/dimension';
 import { BUILTINS } from './builtins';
 import { CellError } from './cell-error';
+import { approxEqual, arithmetic, arity, compareFn, constant, derive, dimsOf, hintOf, pureConstant, type CNode, type Ev } from './closures';
 import { columnOf, parseFormula } from './parse';
 import { nearestName } from './suggest';
 import { BOOL, describeType, NUMBER, numType, sameType, TEXT, typeFromDeclaration, type VType } from './value-type';
@@ -30,14 +30,6 @@ export interface CompileScope {
   functions: ReadonlyMap<string, LibFunction>;
 }
 
-type Ev = (a: readonly unknown[]) => unknown;
-
-interface CNode {
-  type: VType;
-  ev: Ev;
-  /** Present when the node reads no cell: its value, computed once. */
-  constant?: { value: unknown };
-}
 
 export interface CompiledExpr {
   type: VType;
@@ -55,7 +47,7 @@ const MAX_DEPTH = 120;
 // (L is litres, A amperes); only these are accepted there.
 const SHORT_UNITS_AFTER_OPERATOR = new Set(['m', 'N', 'g', 's']);
 
-class Compiler {
+export class Compiler {
   readonly inputs: string[] = [];
   readonly reads: string[] = [];
   readonly clauses: string[] = [];
@@ -362,110 +354,6 @@ class Compiler {
   }
 }
 
-function constant(type: VType, value: unknown): CNode {
-  return { type, ev: () => value, constant: { value } };
-}
-
-/** A node computed from others; folded to a constant when all of them are. */
-function derive(type: VType, args: CNode[], f: (...v: any[]) => unknown): CNode {
-  if (args.every((a) => a.constant)) return constant(type, f(...args.map((a) => a.constant!.value)));
-  // Fixed-arity closures: no argument arrays on the hot path.
-  const evs = args.map((a) => a.ev);
-  switch (evs.length) {
-    case 1: {
-      const [e0] = evs;
-      return { type, ev: (a) => f(e0(a)) };
-    }
-    case 2: {
-      const [e0, e1] = evs;
-      if (args[1].constant) {
-        const c = args[1].constant.value;
-        return { type, ev: (a) => f(e0(a), c) };
-      }
-      return { type, ev: (a) => f(e0(a), e1(a)) };
-    }
-    case 3: {
-      const [e0, e1, e2] = evs;
-      return { type, ev: (a) => f(e0(a), e1(a), e2(a)) };
-    }
-    default:
-      return { type, ev: (a) => f(...evs.map((e) => e(a))) };
-  }
-}
-
-/** + − × ÷ with the operator written into the closure, and a constant operand inlined. */
-function arithmetic(op: string, type: VType, x: CNode, y: CNode): CNode {
-  if (x.constant && y.constant) {
-    const p = x.constant.value as number, q = y.constant.value as number;
-    return constant(type, op === '+' ? p + q : op === '-' ? p - q : op === '*' ? p * q : p / q);
-  }
-  const e0 = x.ev as (a: readonly unknown[]) => number;
-  const e1 = y.ev as (a: readonly unknown[]) => number;
-  if (y.constant) {
-    const c = y.constant.value as number;
-    switch (op) {
-      case '+': return { type, ev: (a) => e0(a) + c };
-      case '-': return { type, ev: (a) => e0(a) - c };
-      case '*': return { type, ev: (a) => e0(a) * c };
-      default: return { type, ev: (a) => e0(a) / c };
-    }
-  }
-  switch (op) {
-    case '+': return { type, ev: (a) => e0(a) + e1(a) };
-    case '-': return { type, ev: (a) => e0(a) - e1(a) };
-    case '*': return { type, ev: (a) => e0(a) * e1(a) };
-    default: return { type, ev: (a) => e0(a) / e1(a) };
-  }
-}
-
-function hintOf(x: CNode): string | undefined {
-  return x.type.t === 'num' ? x.type.hint : undefined;
-}
-
-function dimsOf(x: CNode): readonly number[] {
-  return (x.type as { dims: readonly number[] }).dims;
-}
-
-/** A number written without any name: `2`, `-3`, `(1/2)`, `1e3`. */
-function pureConstant(n: any): number | undefined {
-  if (n.type === 'ConstantNode') return typeof n.value === 'number' ? n.value : undefined;
-  if (n.type === 'ParenthesisNode') return pureConstant(n.content);
-  if (n.type === 'OperatorNode') {
-    const vals = n.args.map(pureConstant);
-    if (vals.some((v: number | undefined) => v === undefined)) return undefined;
-    if (n.args.length === 1) return n.fn === 'unaryMinus' ? -vals[0] : n.fn === 'unaryPlus' ? vals[0] : undefined;
-    const [a, b] = vals;
-    switch (n.fn) {
-      case 'add': return a + b;
-      case 'subtract': return a - b;
-      case 'multiply': return a * b;
-      case 'divide': return a / b;
-      case 'pow': return Math.pow(a, b);
-    }
-  }
-  return undefined;
-}
-
-function compareFn(op: string): (p: number, q: number) => boolean {
-  switch (op) {
-    case '<': return (p, q) => p < q;
-    case '>': return (p, q) => p > q;
-    case '<=': return (p, q) => p <= q;
-    default: return (p, q) => p >= q;
-  }
-}
-
-/** Numbers equal to 12 significant figures count as equal (unit conversions leave crumbs). */
-function approxEqual(a: unknown, b: unknown): boolean {
-  if (typeof a !== 'number' || typeof b !== 'number') return a === b;
-  return a === b || Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b));
-}
-
-function arity(min: number, max: number): string {
-  if (min === max) return `${min} argument${min === 1 ? '' : 's'}`;
-  return `${min} to ${max} arguments`;
-}
-
 export function signatureOf(lib: LibFunction): string {
   const req = lib.params.length - (lib.optional ?? 0);
   return `${lib.name}(${lib.params.map((p, i) => (i >= req ? `[${p.name}]` : p.name)).join(', ')})`;
@@ -481,72 +369,3 @@ export function compileExpression(source: string, scope: CompileScope): Compiled
   const c = new Compiler(source, scope);
   return finish(c, c.node(ast, 0));
 }
-
-/**
- * Syntax and forbidden constructs only, with every name taken as a pure number:
- * used where a full compile cannot run (a cell inside a loop).
- */
-export function structuralProblem(source: string, functions: ReadonlyMap<string, LibFunction>): CellError | undefined {
-  const scope: CompileScope = {
-    lookup: (name) => ({ key: name, type: NUMBER }),
-    isCell: () => true,
-    names: () => [],
-    functions,
-  };
-  try {
-    compileExpression(source, scope);
-  } catch (e) {
-    if (e instanceof CellError && (e.kind === 'syntax' || e.kind === 'not-allowed')) return e;
-  }
-  return undefined;
-}
-
-export interface CompiledCheck {
-  /** Demand/capacity form, or a plain condition. */
-  form: 'ratio' | 'condition';
-  inputs: string[];
-  reads: string[];
-  clauses: string[];
-  demand?: { type: VType; run: Ev; source: MathNode };
-  capacity?: { type: VType; run: Ev; source: MathNode };
-  /** Evaluates to true when the check passes. */
-  pass: Ev;
-}
-
-const RATIO_OPS: Record<string, 'le' | 'ge'> = { '<=': 'le', '<': 'le', '>=': 'ge', '>': 'ge' };
-
-/**
- * Compile a check. `demand <= capacity` (or `capacity >= demand`) gives a
- * demand/capacity ratio; anything else true/false is a plain condition.
- */
-export function compileCheck(source: string, scope: CompileScope): CompiledCheck {
-  const ast = parseFormula(source) as any;
-  const c = new Compiler(source, scope);
-  const top = ast.type === 'ParenthesisNode' ? ast.content : ast;
-  const dir = top.type === 'OperatorNode' && top.args.length === 2 ? RATIO_OPS[top.op] : undefined;
-  if (dir) {
-    const left = c.node(top.args[0], 1);
-    const right = c.node(top.args[1], 1);
-    if (left.type.t === 'num' && sameType(left.type, right.type)) {
-      const [d, k, dn, kn] = dir === 'le' ? [left, right, top.args[0], top.args[1]] : [right, left, top.args[1], top.args[0]];
-      const strict = top.op === '<' || top.op === '>';
-      const de = d.ev, ke = k.ev;
-      return {
-        form: 'ratio',
-        inputs: c.inputs,
-        reads: c.reads,
-        clauses: c.clauses,
-        demand: { type: d.type, run: de, source: dn },
-        capacity: { type: k.type, run: ke, source: kn },
-        pass: strict ? (v) => (de(v) as number) < (ke(v) as number) : (v) => (de(v) as number) <= (ke(v) as number),
-      };
-    }
-  }
-  const root = c.node(ast, 0);
-  if (root.type.t !== 'bool') {
-    throw new CellError('unit', `a check must be a comparison such as Vu <= phiVc, or a true/false condition; this gives ${describeType(root.type)}`);
-  }
-  return { form: 'condition', inputs: c.inputs, reads: c.reads, clauses: c.clauses, pass: root.ev };
-}
-
-export { sameDims };

@@ -3,7 +3,8 @@
 
 import type { CheckCell, FormulaCell, InputCell } from '../document';
 import { CellError } from '../formula/cell-error';
-import { compileCheck, compileExpression, type CompileScope } from '../formula/compile';
+import { compileExpression, type CompileScope } from '../formula/compile';
+import { compileCheck } from '../formula/compile-check';
 import { parseInput, type InputValue } from '../formula/input-value';
 import { unitInfo } from '../units/dimension';
 import { BOOL, describeType, NUMBER, numType, sameType, type VType } from '../formula/value-type';

@@ -1,0 +1,64 @@
+// Comparing document versions and reading what a cell mentions: the cheap
+// questions the engine asks on every update before it recompiles anything.
+
+import type { Cell, SweepCell } from '../document';
+import { parseFormula, symbolNames } from '../formula/parse';
+import type { CellProgram } from './cell-program';
+
+/** "a reads c, c reads b, b reads a": the loop walked along what each cell reads. */
+export function describeLoop(loop: string[], edges: (id: string) => string[], nameOf: (id: string) => string): string {
+  const members = new Set(loop);
+  const steps: string[] = [];
+  const visited = new Set<string>();
+  let at = loop[0];
+  while (!visited.has(at)) {
+    visited.add(at);
+    const next = edges(at).find((e) => members.has(e) && (!visited.has(e) || e === loop[0]));
+    if (!next) break;
+    steps.push(`${nameOf(at)} reads ${nameOf(next)}`);
+    at = next;
+  }
+  const missed = loop.filter((id) => !visited.has(id)).map(nameOf);
+  return steps.join(', ') + (missed.length ? `; also in the loop: ${missed.join(', ')}` : '');
+}
+
+/** Indexes of cells that are new objects, when no cell was added, removed or moved. */
+export function samePlaces(prev: readonly Cell[], next: readonly Cell[]): number[] | undefined {
+  if (prev.length !== next.length) return undefined;
+  const out: number[] = [];
+  for (let i = 0; i < next.length; i++) {
+    if (prev[i] === next[i]) continue;
+    if (prev[i].id !== next[i].id) return undefined;
+    out.push(i);
+  }
+  return out;
+}
+
+export function refsOf(cell: Cell): string[] {
+  if (cell.kind === 'sweep') return sweepRefs(cell);
+  if (cell.kind !== 'formula' && cell.kind !== 'check' && cell.kind !== 'figure') return [];
+  try {
+    return symbolNames(parseFormula(cell.expr));
+  } catch {
+    return [];
+  }
+}
+
+function sweepRefs(cell: SweepCell): string[] {
+  return [...new Set([cell.input, ...cell.outputs].filter((n) => n !== ''))];
+}
+
+export function sameCell(a: Cell, b: Cell): boolean {
+  return JSON.stringify(a) === JSON.stringify(b);
+}
+
+/** An input whose value (not its name or kind) changed cannot change the graph's shape. */
+export function isInputValueOnly(a: Cell, b: Cell): boolean {
+  return a.kind === 'input' && b.kind === 'input' && a.name === b.name;
+}
+
+export function sameTypeOrBoth(a: CellProgram['type'], b: CellProgram['type']): boolean {
+  if (!a || !b) return a === b;
+  if (a.t !== b.t) return false;
+  return a.t !== 'num' || String(a.dims) === String((b as { dims: readonly number[] }).dims);
+}
