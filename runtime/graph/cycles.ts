@@ -54,3 +54,33 @@ export function findCycles<T>(nodes: Iterable<T>, edges: (v: T) => Iterable<T>):
   }
   return out;
 }
+
+/**
+ * Every cell in a loop, with a sentence naming the loop ("a reads c, c reads b, b reads a"
+ * or "a uses itself"). `edges(id)` lists the ids a cell reads.
+ */
+export function loopMessages(ids: string[], edges: (id: string) => string[], nameOf: (id: string) => string): Map<string, string> {
+  const out = new Map<string, string>();
+  for (const loop of findCycles(ids, edges)) {
+    const text = loop.length === 1 ? `${nameOf(loop[0])} uses itself` : describeLoop(loop, edges, nameOf);
+    for (const id of loop) out.set(id, text);
+  }
+  return out;
+}
+
+/** "a reads c, c reads b, b reads a": the loop walked along what each cell reads. */
+function describeLoop(loop: string[], edges: (id: string) => string[], nameOf: (id: string) => string): string {
+  const members = new Set(loop);
+  const steps: string[] = [];
+  const visited = new Set<string>();
+  let at = loop[0];
+  while (!visited.has(at)) {
+    visited.add(at);
+    const next = edges(at).find((e) => members.has(e) && (!visited.has(e) || e === loop[0]));
+    if (!next) break;
+    steps.push(`${nameOf(at)} reads ${nameOf(next)}`);
+    at = next;
+  }
+  const missed = loop.filter((id) => !visited.has(id)).map(nameOf);
+  return steps.join(', ') + (missed.length ? `; also in the loop: ${missed.join(', ')}` : '');
+}

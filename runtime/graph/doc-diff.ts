@@ -5,23 +5,6 @@ import type { Cell, SweepCell } from '../document';
 import { parseFormula, symbolNames } from '../formula/parse';
 import type { CellProgram } from './cell-program';
 
-/** "a reads c, c reads b, b reads a": the loop walked along what each cell reads. */
-export function describeLoop(loop: string[], edges: (id: string) => string[], nameOf: (id: string) => string): string {
-  const members = new Set(loop);
-  const steps: string[] = [];
-  const visited = new Set<string>();
-  let at = loop[0];
-  while (!visited.has(at)) {
-    visited.add(at);
-    const next = edges(at).find((e) => members.has(e) && (!visited.has(e) || e === loop[0]));
-    if (!next) break;
-    steps.push(`${nameOf(at)} reads ${nameOf(next)}`);
-    at = next;
-  }
-  const missed = loop.filter((id) => !visited.has(id)).map(nameOf);
-  return steps.join(', ') + (missed.length ? `; also in the loop: ${missed.join(', ')}` : '');
-}
-
 /** Indexes of cells that are new objects, when no cell was added, removed or moved. */
 export function samePlaces(prev: readonly Cell[], next: readonly Cell[]): number[] | undefined {
   if (prev.length !== next.length) return undefined;

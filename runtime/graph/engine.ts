@@ -12,8 +12,10 @@ import type { CompileScope, NameInfo } from '../formula/compile';
 import { structuralProblem } from '../formula/compile-check';
 import { columnOf } from '../formula/parse';
 import { nameProblem } from '../formula/names';
-import { findCycles } from './cycles';
-import { describeLoop, isInputValueOnly, refsOf, sameCell, samePlaces, sameTypeOrBoth } from './doc-diff';
+import { loopMessages } from './cycles';
+import { ReadersIndex } from './readers';
+import { Notifier } from './notifier';
+import { isInputValueOnly, refsOf, sameCell, samePlaces, sameTypeOrBoth } from './doc-diff';
 import { preferredUnit } from '../units/preferred';
 import { sheetSystem } from '../units/systems';
 import type { LibFunction } from '../library/types';
@@ -38,8 +40,6 @@ interface Slot {
   variable?: Variable;
   observer?: { dead: boolean };
   state: CellState;
-  /** Set while the runtime computes this cell. */
-  busy: boolean;
 }
 
 // The runtime must never see host globals: any name it cannot resolve is an error.
@@ -57,14 +57,10 @@ class DocEngine implements Engine {
   private readonly functionNames: ReadonlySet<string>;
   /** The library plus the figure functions, which only figure cells may call. */
   private readonly figureFunctions: ReadonlyMap<string, LibFunction>;
-  private readonly listeners = new Set<(changed: string[]) => void>();
-  private readonly changed = new Set<string>();
-  private busyCount = 0;
-  private waiting: (() => void)[] = [];
-  private flushQueued = false;
+  private readonly notifier = new Notifier((changed) => this.addReaders(changed));
   private cycleMembers = new Map<string, string>();
   /** name → ids of the cells whose source mentions it. */
-  private readonly readers = new Map<string, Set<string>>();
+  private readonly readers = new ReadersIndex();
   private disposed = false;
 
   constructor(doc: CalcDocument, options: EngineOptions) {
@@ -81,13 +77,11 @@ class DocEngine implements Engine {
   }
 
   subscribe(listener: (changed: string[]) => void): () => void {
-    this.listeners.add(listener);
-    return () => this.listeners.delete(listener);
+    return this.notifier.subscribe(listener);
   }
 
   settled(): Promise<void> {
-    if (this.busyCount === 0 && !this.flushQueued) return Promise.resolve();
-    return new Promise((resolve) => this.waiting.push(resolve));
+    return this.notifier.settled();
   }
 
   dispose(): void {
@@ -96,9 +90,7 @@ class DocEngine implements Engine {
     for (const slot of this.slots.values()) this.dropVariable(slot);
     this.slots.clear();
     this.runtime.dispose();
-    this.listeners.clear();
-    this.waiting.forEach((w) => w());
-    this.waiting = [];
+    this.notifier.close();
   }
 
   update(doc: CalcDocument): void {
@@ -134,7 +126,7 @@ class DocEngine implements Engine {
       if (!slot) {
         const slot = this.newSlot(cell);
         this.slots.set(cell.id, slot);
-        this.indexReaders(slot);
+        this.readers.add(slot.cell.id, slot.refs);
         dirty.add(cell.id);
         structural = true;
         continue;
@@ -149,9 +141,9 @@ class DocEngine implements Engine {
     for (const [id, slot] of this.slots) {
       if (seen.has(id)) continue;
       this.dropVariable(slot);
-      this.unindexReaders(slot);
+      this.readers.remove(slot.cell.id, slot.refs);
       this.slots.delete(id);
-      this.changed.add(id);
+      this.notifier.markChanged(id);
       structural = true;
     }
     this.finishUpdate(dirty, structural);
@@ -163,9 +155,9 @@ class DocEngine implements Engine {
     slot.cell = cell;
     const refs = refsOf(cell);
     if (String(refs) !== String(slot.refs)) {
-      this.unindexReaders(slot);
+      this.readers.remove(slot.cell.id, slot.refs);
       slot.refs = refs;
-      this.indexReaders(slot);
+      this.readers.add(slot.cell.id, slot.refs);
     }
     return before.kind !== cell.kind || cellName(before) !== cellName(cell) || !isInputValueOnly(before, cell);
   }
@@ -179,12 +171,12 @@ class DocEngine implements Engine {
       for (const n of new Set([...before.keys(), ...this.owners.keys()])) {
         if (String(before.get(n)) !== String(this.owners.get(n))) namesChanged.add(n);
       }
-      for (const n of namesChanged) for (const id of this.readersOf(n)) affected.add(id);
+      for (const n of namesChanged) for (const id of this.readers.of(n)) affected.add(id);
       for (const n of namesChanged) for (const id of this.owners.get(n) ?? []) affected.add(id);
       for (const id of this.updateCycles()) affected.add(id);
     }
     this.recompile(affected);
-    this.queueFlush();
+    this.notifier.queue();
   }
 
   // ---- compiling -------------------------------------------------------
@@ -193,25 +185,8 @@ class DocEngine implements Engine {
     return {
       cell,
       refs: refsOf(cell),
-      busy: false,
       state: { id: cell.id, status: cell.kind === 'section' || cell.kind === 'note' ? 'ok' : 'pending', clauses: [], reads: [] },
     };
-  }
-
-  private indexReaders(slot: Slot): void {
-    for (const r of slot.refs) {
-      let set = this.readers.get(r);
-      if (!set) this.readers.set(r, (set = new Set()));
-      set.add(slot.cell.id);
-    }
-  }
-
-  private unindexReaders(slot: Slot): void {
-    for (const r of slot.refs) this.readers.get(r)?.delete(slot.cell.id);
-  }
-
-  private readersOf(name: string): Iterable<string> {
-    return this.readers.get(name) ?? [];
   }
 
   private indexNames(): Map<string, string[]> {
@@ -229,17 +204,12 @@ class DocEngine implements Engine {
 
   /** Finds loops; returns the cells whose membership in a loop changed. */
   private updateCycles(): string[] {
-    const next = new Map<string, string>();
     const edges = (id: string) => {
       const out: string[] = [];
       for (const r of this.slots.get(id)?.refs ?? []) for (const o of this.owners.get(r) ?? []) out.push(o);
       return out;
     };
-    const nameOf = (id: string) => cellName(this.slots.get(id)!.cell) ?? id;
-    for (const loop of findCycles([...this.slots.keys()], edges)) {
-      const text = loop.length === 1 ? `${nameOf(loop[0])} uses itself` : describeLoop(loop, edges, nameOf);
-      for (const id of loop) next.set(id, text);
-    }
+    const next = loopMessages([...this.slots.keys()], edges, (id) => cellName(this.slots.get(id)!.cell) ?? id);
     const changed: string[] = [];
     for (const id of new Set([...next.keys(), ...this.cycleMembers.keys()])) {
       if (next.get(id) !== this.cycleMembers.get(id)) changed.push(id);
@@ -266,7 +236,7 @@ class DocEngine implements Engine {
       const after = slot.program?.type;
       if (!sameTypeOrBoth(before, after)) {
         const name = cellName(slot.cell);
-        if (name) for (const id of this.readersOf(name)) {
+        if (name) for (const id of this.readers.of(name)) {
           if (!done.has(id)) {
             affected.add(id);
             queue.push(id);
@@ -279,7 +249,7 @@ class DocEngine implements Engine {
 
   private compileSlot(slot: Slot): void {
     const cell = slot.cell;
-    this.changed.add(cell.id);
+    this.notifier.markChanged(cell.id);
     if (cell.kind === 'section' || cell.kind === 'note') {
       slot.state = { id: cell.id, status: 'ok', clauses: [], reads: [] };
       return;
@@ -406,7 +376,7 @@ class DocEngine implements Engine {
       slot.observer = observer;
       slot.variable = this.module.variable(observer);
     }
-    this.markBusy(slot);
+    this.notifier.busy(slot.cell.id);
     slot.variable.define(id, program.inputs, program.definition);
   }
 
@@ -416,13 +386,13 @@ class DocEngine implements Engine {
       if (handle.dead || this.disposed) return;
       if (!sameState(slot.state, next)) {
         slot.state = next;
-        this.changed.add(slot.cell.id);
+        this.notifier.markChanged(slot.cell.id);
       }
-      this.markIdle(slot);
+      this.notifier.idle(slot.cell.id);
     };
     return Object.assign(handle, {
       pending: () => {
-        if (!handle.dead) this.markBusy(slot);
+        if (!handle.dead) this.notifier.busy(slot.cell.id);
       },
       fulfilled: (value: unknown) => settle(buildState(slot.cell, slot.program, { value })),
       rejected: (error: unknown) => settle(buildState(slot.cell, slot.program, { error: this.explain(error) })),
@@ -439,53 +409,22 @@ class DocEngine implements Engine {
     return new CellError('library', error instanceof Error ? error.message : String(error));
   }
 
-  private markBusy(slot: Slot): void {
-    if (slot.busy) return;
-    slot.busy = true;
-    this.busyCount++;
-  }
-
-  private markIdle(slot: Slot): void {
-    if (!slot.busy) return;
-    slot.busy = false;
-    this.busyCount--;
-    if (this.busyCount === 0) this.queueFlush();
-  }
-
   private dropVariable(slot: Slot): void {
     if (slot.observer) slot.observer.dead = true;
-    if (slot.busy) this.markIdle(slot);
+    this.notifier.idle(slot.cell.id);
     slot.variable?.delete();
     slot.variable = undefined;
   }
 
-  private queueFlush(): void {
-    if (this.flushQueued) return;
-    this.flushQueued = true;
-    queueMicrotask(() => {
-      this.flushQueued = false;
-      if (this.busyCount > 0 || this.disposed) return;
-      this.flush();
-    });
-  }
-
-  private flush(): void {
-    if (this.changed.size) {
-      // Readers of a changed cell re-show their substituted values too.
-      const names = new Set<string>();
-      for (const id of this.changed) {
-        const slot = this.slots.get(id);
-        const n = slot && cellName(slot.cell);
-        if (n) names.add(n);
-      }
-      for (const n of names) for (const id of this.readersOf(n)) this.changed.add(id);
-      const changed = [...this.changed];
-      this.changed.clear();
-      for (const l of this.listeners) l(changed);
+  /** Readers of a changed cell re-show their substituted values too. */
+  private addReaders(changed: Set<string>): void {
+    const names = new Set<string>();
+    for (const id of changed) {
+      const slot = this.slots.get(id);
+      const n = slot && cellName(slot.cell);
+      if (n) names.add(n);
     }
-    const waiting = this.waiting;
-    this.waiting = [];
-    waiting.forEach((w) => w());
+    for (const n of names) for (const id of this.readers.of(n)) changed.add(id);
   }
 }
 
