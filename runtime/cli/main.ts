@@ -2,11 +2,10 @@
 // headless with the same engine the browser uses.
 
 import { readFileSync, writeFileSync } from 'node:fs';
-import type { CalcDocument, Cell } from '../document';
-import { parseInput } from '../formula/input-value';
+import type { CalcDocument } from '../document';
 import { createEngine } from '../engine';
 import { parse } from '../format/index';
-import { setInputValue } from '../edit/index';
+import { setInputValueKeepUnit } from '../edit/index';
 import { parseArgs, UsageError, type CalcArgs } from './args';
 import { printDiff } from './diff';
 import { exitCode, resultRows, table } from './report';
@@ -40,7 +39,7 @@ export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s:
       err(`--set ${name}: there is no input named ${name}`);
       return 2;
     }
-    doc = keepDisplayUnit(setInputValue(doc, cell.id, value), cell);
+    doc = setInputValueKeepUnit(doc, cell.id, value);
   }
   if (args.diffWith !== undefined) {
     const other = await loadDocument(args.diffWith, err);
@@ -74,18 +73,6 @@ export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s:
   out(args.json ? JSON.stringify(rows, null, 2) : table(rows, engine));
   engine.dispose();
   return loaded.broken ? 2 : exitCode(rows);
-}
-
-/** An override in other units keeps showing the unit the document showed (5000 psi stays psi). */
-function keepDisplayUnit(doc: CalcDocument, before: Cell): CalcDocument {
-  if (before.kind !== 'input' || before.unit || before.choices) return doc;
-  let unit = '';
-  try {
-    unit = parseInput(before).unit;
-  } catch {
-    return doc;
-  }
-  return unit ? { ...doc, cells: doc.cells.map((c) => (c.id === before.id ? { ...c, unit } as Cell : c)) } : doc;
 }
 
 async function main(): Promise<void> {
