@@ -47,9 +47,29 @@ const strictGlobal = (name: string) => {
   throw new CellError('unknown-name', `"${name}" is not the name of any cell`);
 };
 
+/** The runtime's internal scheduling hooks (writable prototype properties in 6.0.1). */
+interface RuntimeScheduling {
+  _disposed: boolean;
+  _computeNow(): Promise<void>;
+  _computeSoon(): Promise<void>;
+}
+
+/**
+ * The runtime waits for the next animation frame before it recomputes, so an edit's
+ * results would land a frame late and their work would delay that frame's paint. A
+ * microtask computes right after the edit's task instead (in Node too, where it used
+ * setImmediate). Edits made in one task still make one compute: `_compute` reuses the
+ * pending `_computing` promise until the compute starts.
+ */
+function computeAfterThisTask(runtime: Runtime): Runtime {
+  const r = runtime as unknown as RuntimeScheduling;
+  r._computeSoon = () => Promise.resolve().then(() => (r._disposed ? undefined : r._computeNow()));
+  return runtime;
+}
+
 class DocEngine implements Engine {
   doc: CalcDocument;
-  private readonly runtime = new Runtime({}, strictGlobal);
+  private readonly runtime = computeAfterThisTask(new Runtime({}, strictGlobal));
   private readonly module: Module = this.runtime.module();
   private readonly slots = new Map<string, Slot>();
   private owners = new Map<string, string[]>();
