@@ -1,9 +1,29 @@
-import { defineConfig } from 'vite';
+import { defineConfig, type Plugin } from 'vite';
+
+/**
+ * mathjs gives three error classes their prototype with `new RangeError()` / `new Error()`
+ * while its modules load. When a debugger or test driver is attached to the page, every
+ * Error made captures a detailed stack, and with all app code in one function (as in a
+ * record) V8 then re-parses the whole bundle for source positions: ~0.5 s more to open.
+ * `Object.create(...)` gives the same prototype chain without making an Error.
+ */
+function mathjsErrorPrototypes(): Plugin {
+  return {
+    name: 'loadtrace-mathjs-error-prototypes',
+    enforce: 'pre',
+    transform(code, id) {
+      if (!/mathjs[\\/]lib[\\/]esm[\\/]error[\\/]\w+Error\.js$/.test(id.split('?')[0])) return undefined;
+      const out = code.replace(/\.prototype = new (RangeError|Error)\(\);/g, '.prototype = Object.create($1.prototype);');
+      return out === code ? undefined : { code: out, map: null };
+    },
+  };
+}
 
 // The app is index.html + cells/ (page) + runtime/ (engine). Templates in
 // docs-templates/ are imported as text at build time.
 export default defineConfig({
   root: '.',
+  plugins: [mathjsErrorPrototypes()],
   build: {
     outDir: 'dist',
     target: 'es2022',
