@@ -27,6 +27,7 @@ import { figureLibrary } from '../figures/functions';
 import { figureProgram } from './figure-program';
 import { sweepProgram, type SweepCellInfo } from './sweep-program';
 import { outcomeOf, WhatIf, type WhatIfGraph } from './what-if';
+import { Pacer } from './pacer';
 
 export interface EngineOptions {
   functions?: readonly LibFunction[];
@@ -61,15 +62,21 @@ interface RuntimeScheduling {
  * setImmediate). Edits made in one task still make one compute: `_compute` reuses the
  * pending `_computing` promise until the compute starts.
  */
-function computeAfterThisTask(runtime: Runtime): Runtime {
+function computeAfterThisTask(runtime: Runtime, pacer: Pacer): Runtime {
   const r = runtime as unknown as RuntimeScheduling;
-  r._computeSoon = () => Promise.resolve().then(() => (r._disposed ? undefined : r._computeNow()));
+  r._computeSoon = () => Promise.resolve().then(() => {
+    if (r._disposed) return undefined;
+    pacer.begin();
+    return r._computeNow();
+  });
   return runtime;
 }
 
 class DocEngine implements Engine {
   doc: CalcDocument;
-  private readonly runtime = computeAfterThisTask(new Runtime({}, strictGlobal));
+  /** Splits a long recompute into slices of tasks (see pacer.ts). */
+  private readonly pacer = new Pacer();
+  private readonly runtime = computeAfterThisTask(new Runtime({}, strictGlobal), this.pacer);
   private readonly module: Module = this.runtime.module();
   private readonly slots = new Map<string, Slot>();
   private owners = new Map<string, string[]>();
@@ -397,7 +404,8 @@ class DocEngine implements Engine {
       slot.variable = this.module.variable(observer);
     }
     this.notifier.busy(slot.cell.id);
-    slot.variable.define(id, program.inputs, program.definition);
+    const run = program.definition;
+    slot.variable.define(id, program.inputs, (...args: unknown[]) => this.pacer.pace(() => run(...args)));
   }
 
   private observer(slot: Slot) {
