@@ -12,15 +12,13 @@ import type { Engine } from '../runtime/engine-types';
 import { sheetSystem, switchSystem, type UnitMemory } from '../runtime/units/systems';
 import { Autosave } from './autosave';
 import { CellEditor } from './cell-editor';
+import { ComputingState } from './computing';
 import { SourceError } from './kind';
 import { cellSource, editSource } from './registry';
 import { SheetView } from './sheet-view';
 import { sheetTitle } from './templates';
 import { TitleBlock } from './title-block';
 import { functionEntries, unitNames, type Vocabulary } from './vocabulary';
-
-/** A computing state shows only when an update takes longer than this. */
-const COMPUTING_AFTER_MS = 100;
 
 export interface AppElements {
   sheet: HTMLElement;
@@ -41,7 +39,7 @@ export class App {
   private editor?: CellEditor;
   private unitMemory: UnitMemory = {};
   private unsubscribe?: () => void;
-  private computingTimer?: ReturnType<typeof setTimeout>;
+  private readonly computing: ComputingState;
   /** Set while an edit made in the open editor is applied. */
   private fromEditor = false;
   /** Set by the page for tests and benchmarks: called after every re-render of engine changes. */
@@ -54,6 +52,11 @@ export class App {
       select: (id) => this.view.select(id, false),
     });
     this.title = new TitleBlock(el.titleBlock, (key, value) => this.apply(setMeta(this.doc, key, value), `meta:${key}`));
+    this.computing = new ComputingState({
+      said: () => el.status.textContent ?? '',
+      say: (text) => (el.status.textContent = text),
+      mark: (on) => this.view.setComputing(on),
+    });
   }
 
   get doc(): CalcDocument {
@@ -122,26 +125,13 @@ export class App {
     this.onRendered?.(changed);
   }
 
-  /** Shows "computing" only when the engine has not settled within COMPUTING_AFTER_MS. */
+  /** Shows "computing" only when the engine has not settled within about 100 ms (computing.ts). */
   private watchComputing(): void {
-    clearTimeout(this.computingTimer);
-    const engine = this.engine!;
-    let done = false;
-    this.computingTimer = setTimeout(() => {
-      if (done) return;
-      this.view.setComputing(true);
-      this.setStatus('Computing…');
-    }, COMPUTING_AFTER_MS);
-    void engine.settled().then(() => {
-      done = true;
-      clearTimeout(this.computingTimer);
-      this.view.setComputing(false);
-      if (this.el.status.textContent === 'Computing…') this.setStatus('');
-    });
+    this.computing.watch(this.engine!.settled());
   }
 
   setStatus(text: string): void {
-    this.el.status.textContent = text;
+    this.computing.status(text);
   }
 
   private updateChrome(): void {
