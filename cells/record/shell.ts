@@ -12,11 +12,11 @@ let fetched: Promise<string> | undefined;
 
 /** Does this page carry the packed app (is it a record or the single-file shell)? */
 export function pageIsShell(): boolean {
-  return appBlock(loadedPage) !== undefined;
+  return appBlock(loadedPage()) !== undefined;
 }
 
 export function recordShell(): Promise<string> {
-  if (pageIsShell()) return Promise.resolve(withoutRunScript(loadedPage));
+  if (pageIsShell()) return Promise.resolve(withoutRunScript(loadedPage()));
   fetched ??= fetch(new URL(SHELL_PATH, location.href))
     .then(async (r) => {
       if (!r.ok) throw new Error(`status ${r.status}`);
