@@ -100,10 +100,17 @@ async function boot(): Promise<void> {
 
   // Template picker.
   const picker = $<HTMLDialogElement>('#picker');
-  $('#picker-list').innerHTML = templates()
-    .map((t) => `<li><button type="button" data-template="${escapeHtml(t.key)}"><strong>${escapeHtml(sheetTitle(t.doc, t.key))}</strong><span>${
-      escapeHtml(t.doc.meta.project)} · ${t.doc.cells.length} cells</span></button></li>`)
-    .join('');
+  // Filled when first opened: reading every template is work a record being opened does not need.
+  const openPicker = () => {
+    const list = $('#picker-list');
+    if (!list.childElementCount) {
+      list.innerHTML = templates()
+        .map((t) => `<li><button type="button" data-template="${escapeHtml(t.key)}"><strong>${escapeHtml(sheetTitle(t.doc, t.key))}</strong><span>${
+          escapeHtml(t.doc.meta.project)} · ${t.doc.cells.length} cells</span></button></li>`)
+        .join('');
+    }
+    picker.showModal();
+  };
   /** Starts a new sheet under `key` (from a template or a document handed in) and saves it. */
   async function startSheet(key: string, h: History): Promise<void> {
     await autosave?.flushNow();
@@ -146,7 +153,7 @@ async function boot(): Promise<void> {
       case 'undo': return app.undo();
       case 'redo': return app.redo();
       case 'units': return app.switchUnits();
-      case 'templates': return picker.showModal();
+      case 'templates': return openPicker();
       case 'print': return window.print();
       case 'summary': return $('#summary').scrollIntoView();
       case 'help': return help.open ? help.close() : help.showModal();
