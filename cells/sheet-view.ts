@@ -26,6 +26,8 @@ interface Slot {
   number: string;
   /** Within NEAR of the viewport: typeset now rather than later. */
   near: boolean;
+  /** In the viewport itself: typeset before the cells just beyond it. */
+  onScreen?: boolean;
   /** Changed while far from view: typeset when it comes near. */
   stale: boolean;
 }
@@ -34,6 +36,8 @@ interface Slot {
 const NEAR = '1200px 0px';
 /** From this many cells on, off-screen cells also skip layout and paint (content-visibility). */
 const LONG_SHEET = 300;
+/** Cells typeset per task when filling in those just beyond the viewport. */
+const AHEAD_BATCH = 8;
 const STATUS_CLASSES = ['st-ok', 'st-fail', 'st-error', 'st-pending', 'st-plain'];
 
 export class SheetView {
@@ -49,6 +53,9 @@ export class SheetView {
   private opening: Promise<void> = Promise.resolve();
   private ready = false;
   private nearby?: IntersectionObserver;
+  /** Cells near but not on screen, typeset after the screen itself has painted. */
+  private ahead = new Set<string>();
+  private aheadScheduled = false;
   selected?: string;
 
   constructor(
@@ -157,7 +164,7 @@ export class SheetView {
       this.opening = engine.settled().then(() => {
         if (this.engine !== engine) return;
         this.ready = true;
-        for (const [id, slot] of this.slots) if (slot.near) this.renderCell(id);
+        for (const [id, slot] of this.slots) if (slot.near) this.renderNear(id, slot);
         this.renderSummary();
       });
       return;
@@ -232,10 +239,19 @@ export class SheetView {
 
   /** Resolves when the cells near the viewport are typeset (for scroll restore, tests, benchmarks). */
   async whenRendered(): Promise<void> {
+    await this.whenTypeset((s) => s.near);
+  }
+
+  /** Resolves when the cells in the viewport are typeset (those just beyond follow a frame later). */
+  async whenShown(): Promise<void> {
+    await this.whenTypeset((s) => s.near && s.onScreen === true);
+  }
+
+  private async whenTypeset(which: (s: Slot) => boolean): Promise<void> {
     await this.opening;
     const frame = () => new Promise<void>((r) => requestAnimationFrame(() => setTimeout(r, 0)));
     await frame(); // the observer reports what is near after a layout
-    for (let i = 0; i < 120 && [...this.slots.values()].some((s) => s.near && (s.html === undefined || s.stale)); i++) await frame();
+    for (let i = 0; i < 120 && [...this.slots.values()].some((s) => which(s) && (s.html === undefined || s.stale)); i++) await frame();
   }
 
   private onNear(entries: IntersectionObserverEntry[]): void {
@@ -244,8 +260,30 @@ export class SheetView {
       const slot = id ? this.slots.get(id) : undefined;
       if (!slot) continue;
       slot.near = e.isIntersecting;
-      if (slot.near && (slot.html === undefined || slot.stale)) this.renderCell(id!);
+      slot.onScreen = e.isIntersecting && e.boundingClientRect.bottom > 0 && e.boundingClientRect.top < window.innerHeight;
+      if (slot.near && (slot.html === undefined || slot.stale)) this.renderNear(id!, slot);
     }
+  }
+
+  /** On screen: typeset now. Just beyond it: after the screen has painted, a few cells a task. */
+  private renderNear(id: string, slot: Slot): void {
+    if (slot.onScreen || !this.ready) {
+      this.renderCell(id);
+      return;
+    }
+    this.ahead.add(id);
+    if (this.aheadScheduled) return;
+    this.aheadScheduled = true;
+    const next = () => {
+      for (const i of [...this.ahead].slice(0, AHEAD_BATCH)) {
+        this.ahead.delete(i);
+        const s = this.slots.get(i);
+        if (s?.near && (s.html === undefined || s.stale)) this.renderCell(i);
+      }
+      if (this.ahead.size) setTimeout(next, 0);
+      else this.aheadScheduled = false;
+    };
+    requestAnimationFrame(() => setTimeout(next, 0));
   }
 
   private newSlot(cell: Cell): Slot {

@@ -124,9 +124,9 @@ export function installRecord(app: App): RecordHooks {
     performance.mark('loadtrace:record-shown');
     await app.engine!.settled();
     performance.mark('loadtrace:record-computed');
-    await app.view.whenRendered();
+    await app.view.whenShown();
     document.documentElement.classList.add('lt-live');
-    performance.mark('loadtrace:record-live'); // every cell rendered (read by bench:record)
+    performance.mark('loadtrace:record-live'); // every cell computed, those on screen typeset (read by bench:record)
     showProblems('This record may not be what was issued.', problems);
     app.setStatus(checked.sealOk ? 'Record opened as issued: seal intact' : 'Record opened: seal broken (see the message above)');
     return true;
