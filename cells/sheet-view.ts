@@ -11,6 +11,7 @@ import type { Engine } from '../runtime/engine-types';
 import { escapeHtml, type BindContext } from './kind';
 import { bindCell, cellSource, numberCells, renderView } from './registry';
 import { summaryHtml, summaryRows } from './summary';
+import { writeCellHtml } from './step-patch';
 
 export interface SheetEvents {
   commitValue(id: string, value: string): void;
@@ -342,7 +343,7 @@ export class SheetView {
   private writeContent(slot: Slot, html: string): void {
     const active = document.activeElement;
     if (!(active instanceof HTMLElement) || !slot.content.contains(active)) {
-      slot.content.innerHTML = html;
+      writeCellHtml(slot.content, html); // unchanged hand-calc steps keep their nodes
       return;
     }
     const fresh = document.createElement('template');

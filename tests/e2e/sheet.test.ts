@@ -309,4 +309,22 @@ describe('the calc sheet in Chromium', () => {
     expect(pdf.subarray(0, 4).toString()).toBe('%PDF');
     await page.emulateMedia({ media: 'screen' });
   });
+
+  it('an edit re-typesets the values in a dependent hand calc, keeping its unchanged symbolic step', async () => {
+    await page.evaluate(() => {
+      const [head, tail] = document.querySelectorAll('#cell-f1 .hc-step');
+      (window as any).__steps = { head, tail };
+    });
+    const before = await cellText('f1');
+    await setValue('i1', '10 in');
+    await page.waitForFunction((t) => document.querySelector('#cell-f1')!.textContent!.replace(/\s+/g, ' ') !== t, before.replace(/\s+/g, ' '));
+    // d = 10 − 0.75 − 0.625 = 8.625 in (the fixture's own formula)
+    expect(await cellText('f1')).toContain('8.625in');
+    const kept = await page.evaluate(() => {
+      const [head, tail] = document.querySelectorAll('#cell-f1 .hc-step');
+      const was = (window as any).__steps;
+      return { head: head === was.head, tail: tail === was.tail, attached: was.head.isConnected };
+    });
+    expect(kept).toEqual({ head: true, tail: false, attached: true });
+  });
 });
