@@ -61,6 +61,8 @@ interface EditTiming {
   frame: number;
   /** The last dependent was re-typeset before that frame started. */
   inFirstFrame: boolean;
+  /** From the edit to the end of that frame's rendering (style, layout, paint): when it shows. */
+  rendered: number;
   seen: number;
 }
 
@@ -89,15 +91,23 @@ async function editOnce(page: Page, value: string): Promise<EditTiming> {
     field.focus();
     field.value = v;
     let frameAt = 0;
+    let renderedAt = 0;
     requestAnimationFrame(() => {
       frameAt = performance.now();
+      // a message posted in the frame's callback arrives once the frame is rendered
+      const ch = new MessageChannel();
+      ch.port1.onmessage = () => {
+        renderedAt = performance.now();
+        ch.port1.close();
+      };
+      ch.port2.postMessage(null);
     });
     const t0 = performance.now();
     field.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true, cancelable: true }));
     const sync = performance.now() - t0;
     await done;
     await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 60)));
-    return { ms: last - t0, sync, work: last - t0 - sync, frame: frameAt - t0, inFirstFrame: last <= frameAt, seen: seen.size };
+    return { ms: last - t0, sync, work: last - t0 - sync, frame: frameAt - t0, inFirstFrame: last <= frameAt, rendered: renderedAt - t0, seen: seen.size };
   }, value);
 }
 
@@ -161,7 +171,7 @@ async function main(): Promise<void> {
       const all = stats(t.map((x) => x.ms));
       const part = (f: (x: EditTiming) => number) => fmt(stats(t.map(f)).median);
       const first = t.filter((x) => x.inFirstFrame).length;
-      out.push(`  ${label} median ${fmt(all.median)} ms   p90 ${fmt(all.p90)} ms   (medians: handler ${part((x) => x.sync)}, then compute + re-typeset ${part((x) => x.work)}; edit to next frame start ${part((x) => x.frame)}; done before that frame in ${first} of ${t.length} edits)`);
+      out.push(`  ${label} median ${fmt(all.median)} ms   p90 ${fmt(all.p90)} ms   (medians: handler ${part((x) => x.sync)}, then compute + re-typeset ${part((x) => x.work)}; edit to next frame start ${part((x) => x.frame)}, to that frame rendered ${part((x) => x.rendered)}; done before that frame in ${first} of ${t.length} edits)`);
       opens.push(`  ${label} engine settled ${fmt(o.firstView)} ms, cells in and near view typeset ${fmt(o.allRendered)} ms, longest task ${fmt(o.longestTask)} ms`);
       return all.median;
     };
