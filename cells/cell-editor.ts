@@ -1,13 +1,16 @@
 // The editor panel that opens under a cell: its source in CodeMirror (or a plain
 // field for a section title) plus the cell's other fields. Edits apply as you type;
-// problems are marked where they are.
+// problems are marked where they are. CodeMirror is loaded on first use: until it is
+// there (a moment, or for good if it cannot load) the source is a plain text area, and
+// what is typed there carries over.
 
 import type { Cell } from '../runtime/document';
 import type { CellFields } from '../runtime/edit/index';
 import type { CellState } from '../runtime/engine-types';
 import { escapeHtml, exprOffset } from './kind';
 import { cellSource } from './registry';
-import { SourceEditor } from './source-editor';
+import type { SourceEditor, SourceMark } from './source-editor';
+import { loadSourceEditor } from './source-editor-load';
 import type { Vocabulary } from './vocabulary';
 
 export interface CellEditorHooks {
@@ -63,6 +66,10 @@ function fieldValue(key: keyof CellFields, text: string): CellFields[keyof CellF
 
 export class CellEditor {
   private source?: SourceEditor;
+  /** The source as plain text while CodeMirror loads (or if it cannot). */
+  private plain?: HTMLTextAreaElement;
+  private marks: SourceMark[] = [];
+  private closed = false;
   private titleField?: HTMLInputElement;
   private readonly message: HTMLElement;
   private timer?: ReturnType<typeof setTimeout>;
@@ -102,15 +109,46 @@ export class CellEditor {
       srcHost.append(t);
       this.titleField = t;
     } else {
-      this.source = new SourceEditor({
-        parent: srcHost,
-        text: cellSource(cell),
-        mode: cell.kind === 'note' ? 'note' : 'formula',
-        vocabulary: () => hooks.vocabulary(),
-        label: cell.kind === 'note' ? 'Note text' : `${cell.kind} source`,
-        onChange: (text) => this.schedule(text),
-        onDone: () => this.close(true),
-        onCancel: () => this.close(true),
+      const label = cell.kind === 'note' ? 'Note text' : `${cell.kind} source`;
+      const plain = document.createElement('textarea');
+      plain.className = 'src-plain';
+      plain.value = cellSource(cell);
+      plain.rows = Math.min(12, plain.value.split('\n').length + 1);
+      plain.spellcheck = false;
+      plain.setAttribute('aria-label', label);
+      plain.addEventListener('input', () => this.schedule(plain.value));
+      plain.addEventListener('keydown', (e) => {
+        // As in the full editor: a formula is one line, so Enter finishes it.
+        if (cell.kind !== 'note' && e.key === 'Enter' && !e.shiftKey && !e.ctrlKey && !e.metaKey) {
+          e.preventDefault();
+          this.close(true);
+        } else this.onFieldKey(e);
+      });
+      srcHost.append(plain);
+      this.plain = plain;
+      loadSourceEditor().then((Editor) => {
+        if (this.closed) return;
+        const focused = document.activeElement === plain;
+        const { value: text, selectionStart, selectionEnd } = plain;
+        plain.remove();
+        this.plain = undefined;
+        this.source = new Editor({
+          parent: srcHost,
+          text,
+          mode: cell.kind === 'note' ? 'note' : 'formula',
+          vocabulary: () => hooks.vocabulary(),
+          label,
+          onChange: (t) => this.schedule(t),
+          onDone: () => this.close(true),
+          onCancel: () => this.close(true),
+        });
+        this.source.setMarks(this.marks);
+        if (focused) {
+          this.source.focus();
+          this.source.select(selectionStart, selectionEnd);
+        }
+      }, (e: unknown) => {
+        if (!this.closed) this.setMessage(`The source editor could not load (${(e as Error).message}); editing goes on as plain text.`);
       });
     }
     fields.addEventListener('input', () => this.scheduleFields(fields));
@@ -119,8 +157,16 @@ export class CellEditor {
   }
 
   focus(): void {
-    if (this.source) this.source.focus();
-    else this.titleField?.focus();
+    (this.source ?? this.plain ?? this.titleField)?.focus();
+  }
+
+  private sourceText(): string {
+    return this.source?.text ?? this.plain?.value ?? this.titleField?.value ?? '';
+  }
+
+  private setMarks(marks: SourceMark[]): void {
+    this.marks = marks;
+    this.source?.setMarks(marks);
   }
 
   /** Shows the engine's verdict on the applied source: an error marked at its column. */
@@ -129,13 +175,13 @@ export class CellEditor {
     const e = state?.status === 'error' ? state.error : undefined;
     if (!e || e.kind === 'upstream') {
       this.setMessage(e ? `Waiting on ${e.upstream ?? 'an input'}: ${e.message}` : '');
-      this.source?.setMarks([]);
+      this.setMarks([]);
       return;
     }
     this.setMessage(e.message);
-    if (e.column !== undefined && this.source) {
+    if (e.column !== undefined && this.titleField === undefined) {
       const from = exprOffset(source) + e.column - 1;
-      this.source.setMarks([{ from, to: from + 1, message: e.message }]);
+      this.setMarks([{ from, to: from + 1, message: e.message }]);
     }
   }
 
@@ -144,11 +190,13 @@ export class CellEditor {
     (this as { cell: Cell }).cell = cell;
     const text = cellSource(cell);
     if (this.source) this.source.setText(text);
+    else if (this.plain && this.plain.value !== text) this.plain.value = text;
     else if (this.titleField && this.titleField.value !== text) this.titleField.value = text;
   }
 
   close(refocus: boolean): void {
     this.flush();
+    this.closed = true;
     this.source?.destroy();
     this.host.innerHTML = '';
     this.hooks.close(this.cell.id, refocus);
@@ -171,7 +219,7 @@ export class CellEditor {
     if (this.timer !== undefined) {
       clearTimeout(this.timer);
       this.timer = undefined;
-      this.apply(this.source ? this.source.text : this.titleField?.value ?? '');
+      this.apply(this.sourceText());
     }
     if (this.fieldTimer !== undefined) {
       clearTimeout(this.fieldTimer);
@@ -186,10 +234,10 @@ export class CellEditor {
     if (this.problem) {
       this.setMessage(this.problem.message);
       const col = this.problem.column;
-      if (col !== undefined) this.source?.setMarks([{ from: col - 1, to: col, message: this.problem.message }]);
+      if (col !== undefined) this.setMarks([{ from: col - 1, to: col, message: this.problem.message }]);
     } else {
       this.setMessage('');
-      this.source?.setMarks([]);
+      this.setMarks([]);
     }
   }
 

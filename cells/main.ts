@@ -12,6 +12,7 @@ import { commandFor, helpHtml, type Command } from './keys';
 import { SheetStore, unpackHistory, type SavedSheet } from './store';
 import { TabGuard } from './tab-guard';
 import { sheetTitle, templateByKey, templates } from './templates';
+import { loadSourceEditor } from './source-editor-load';
 import { escapeHtml } from './kind';
 import { installRecord } from './record/install';
 import { installReview } from './review/install';
@@ -205,6 +206,10 @@ async function boot(): Promise<void> {
   const last = store ? await store.getSetting<string>('last') : undefined;
   if (!(await records.openEmbedded())) await openKey(keyFromHash() ?? last ?? 'demo');
   document.body.dataset.ready = 'true';
+  // The source editor (CodeMirror) loads while the page is idle, so the first edit need not wait.
+  const preload = () => void loadSourceEditor().catch(() => undefined);
+  if (typeof requestIdleCallback === 'function') requestIdleCallback(preload, { timeout: 3000 });
+  else setTimeout(preload, 2000);
 }
 
 void boot();

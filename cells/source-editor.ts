@@ -201,6 +201,12 @@ export class SourceEditor {
     this.view.dispatch({ selection: { anchor: this.view.state.doc.length } });
   }
 
+  /** Puts the selection at anchor…head, clamped to the text (e.g. where a plain field had it). */
+  select(anchor: number, head = anchor): void {
+    const len = this.view.state.doc.length;
+    this.view.dispatch({ selection: { anchor: Math.min(anchor, len), head: Math.min(head, len) } });
+  }
+
   destroy(): void {
     this.view.destroy();
   }

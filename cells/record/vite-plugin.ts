@@ -1,9 +1,10 @@
 // Build plugins for the record shell: the app as ONE html file that runs from file://
 // under the record's Content-Security-Policy (inline code, fonts as data: URIs).
 
+import { resolve } from 'node:path';
 import { gzipSync } from 'node:zlib';
-import type { Plugin } from 'vite';
-import { APP_ID, APP_TYPE } from '../../runtime/record/app-payload';
+import { build, type Plugin, type Rolldown } from 'vite';
+import { APP_ID, APP_TYPE, EDITOR_GLOBAL, EDITOR_ID } from '../../runtime/record/app-payload';
 import { LOADER } from './loader';
 
 /** KaTeX's CSS lists woff2, woff and ttf for every font; browsers all take woff2, so the others go. */
@@ -38,16 +39,50 @@ export function scriptSafe(code: string): string {
   return code.replace(/<\/(script)/gi, '<\\/$1').replace(/<!--/g, '\\x3C!--');
 }
 
+/** gzip + base64, as the record's data blocks carry code. */
+function packCode(code: string): string {
+  return gzipSync(Buffer.from(scriptSafe(code), 'utf8'), { level: 9 }).toString('base64');
+}
+
+/**
+ * The source editor (cells/source-editor.ts with CodeMirror) on its own, as a classic
+ * script that sets globalThis.__loadtraceEditor: the record runs it only when a source
+ * is first edited (cells/record/editor-load.ts), so opening a record does not compile it.
+ */
+async function editorCode(root: string): Promise<string> {
+  const built = await build({
+    configFile: false,
+    root,
+    logLevel: 'warn',
+    build: {
+      write: false,
+      target: 'es2022',
+      minify: true,
+      reportCompressedSize: false,
+      lib: { entry: resolve(root, 'cells/source-editor.ts'), formats: ['iife'], name: EDITOR_GLOBAL, fileName: () => 'editor.js' },
+    },
+  });
+  const outputs = (Array.isArray(built) ? built : [built]) as Rolldown.RolldownOutput[];
+  const chunks = outputs.flatMap((o) => o.output).filter((f): f is Rolldown.OutputChunk => f.type === 'chunk');
+  if (chunks.length !== 1) throw new Error(`the editor build gave ${chunks.length} chunks, not one`);
+  return chunks[0].code;
+}
+
 /**
  * Puts the CSS inline, and the JS chunk as a gzip+base64 data block with a small
- * loader that runs it (a third of the size: the record must stay under 1.5 MB), at
- * the end of the body; names the file record-shell.html.
+ * loader that runs it (a third of the size: the record must stay under 1.5 MB), and the
+ * source editor as a second block run on first use, at the end of the body; names the
+ * file record-shell.html.
  */
 export function inlineAll(): Plugin {
+  let root = process.cwd();
   return {
     name: 'loadtrace-inline-all',
     enforce: 'post',
-    generateBundle(_options, bundle) {
+    configResolved(config) {
+      root = config.root;
+    },
+    async generateBundle(_options, bundle) {
       const html = Object.values(bundle).find((f) => f.type === 'asset' && f.fileName.endsWith('.html'));
       if (!html || html.type !== 'asset') return;
       let page = String(html.source);
@@ -61,8 +96,8 @@ export function inlineAll(): Plugin {
           // module added by script under a hash-only CSP; a classic script it runs every time).
           if (/\bimport\.meta\b|^(?:import|export)\s*[{*"'`]/m.test(file.code)) this.error('the record bundle must be one chunk with no import/export');
           const classic = `(async () => {'use strict';\n${file.code}\n})().catch((e) => console.error('Loadtrace could not start:', e));`;
-          const packed = gzipSync(Buffer.from(scriptSafe(classic), 'utf8'), { level: 9 }).toString('base64');
-          scripts.push(`<script type="${APP_TYPE}" id="${APP_ID}" data-encoding="gzip base64">${packed}</script>`);
+          scripts.push(`<script type="${APP_TYPE}" id="${APP_ID}" data-encoding="gzip base64">${packCode(classic)}</script>`);
+          scripts.push(`<script type="${APP_TYPE}" id="${EDITOR_ID}" data-encoding="gzip base64">${packCode(await editorCode(root))}</script>`);
           scripts.push(`<script type="module">${LOADER}</script>`);
           delete bundle[name];
         } else if (name.endsWith('.css')) {

@@ -1,12 +1,19 @@
 // The app code inside a record shell: gzip-compressed and base64-encoded in a data
 // block, and a small loader script (cells/record/loader.ts) that unpacks it and runs it
-// as an inline classic script. The record's CSP lists the hash of the loader and of the
-// unpacked code, so nothing else can run: no eval, no blob: URLs.
+// as an inline classic script. The source editor (CodeMirror) is a second block, run
+// the first time a source is edited. The record's CSP lists the hash of the loader and
+// of each unpacked block, so nothing else can run: no eval, no blob: URLs.
 
 export const APP_ID = 'lt-app';
 export const APP_TYPE = 'application/x-loadtrace-app';
 /** The id of the script element the loader adds; the shell is recovered without it. */
 export const RUN_ID = 'lt-app-run';
+/** The editor's packed block, the script element that runs it, and the global it sets. */
+export const EDITOR_ID = 'lt-editor';
+export const EDITOR_RUN_ID = 'lt-editor-run';
+export const EDITOR_GLOBAL = '__loadtraceEditor';
+/** Every packed block a shell may carry. */
+export const PACKED_IDS = [APP_ID, EDITOR_ID] as const;
 
 /** The unpacked app code of a shell's data block (base64 of gzip). */
 export async function unpackApp(base64: string): Promise<string> {
@@ -17,16 +24,25 @@ export async function unpackApp(base64: string): Promise<string> {
   return new Response(stream).text();
 }
 
-/** The packed app code in a shell, if it has one. */
-export function appBlock(html: string): string | undefined {
-  const m = new RegExp(`<script\\b[^>]*\\bid=["']?${APP_ID}["']?[^>]*>([^<]*)<\\/script>`, 'i').exec(html);
+/** The packed block `id` in a shell, if it has one. */
+export function packedBlock(html: string, id: string): string | undefined {
+  const m = new RegExp(`<script\\b[^>]*\\bid=["']?${id}["']?[^>]*>([^<]*)<\\/script>`, 'i').exec(html);
   return m?.[1];
 }
 
-/** The page as a browser serialised it, less the script element the loader added. */
+/** The packed app code in a shell, if it has one. */
+export function appBlock(html: string): string | undefined {
+  return packedBlock(html, APP_ID);
+}
+
+/** The page as a browser serialised it, less the script elements the loaders added. */
 export function withoutRunScript(html: string): string {
-  const start = html.search(new RegExp(`<script\\b[^>]*\\bid=["']?${RUN_ID}["']?[^>]*>`, 'i'));
-  if (start < 0) return html;
-  const end = html.toLowerCase().indexOf('</script>', start);
-  return end < 0 ? html.slice(0, start) : html.slice(0, start) + html.slice(end + '</script>'.length);
+  let out = html;
+  for (const id of [RUN_ID, EDITOR_RUN_ID]) {
+    const start = out.search(new RegExp(`<script\\b[^>]*\\bid=["']?${id}["']?[^>]*>`, 'i'));
+    if (start < 0) continue;
+    const end = out.toLowerCase().indexOf('</script>', start);
+    out = end < 0 ? out.slice(0, start) : out.slice(0, start) + out.slice(end + '</script>'.length);
+  }
+  return out;
 }

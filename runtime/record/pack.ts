@@ -3,7 +3,7 @@
 // as embedded data with its SHA-256, the print styles, and the static rendering.
 
 import type { DocMeta } from '../document';
-import { appBlock, unpackApp } from './app-payload';
+import { APP_ID, PACKED_IDS, packedBlock, unpackApp } from './app-payload';
 import { encodeDataBlock, escapeHtml } from './escape';
 import { DOC_ID, DOC_TYPE, FENCES, RECORD_VERSION, recordCsp, runnableScripts, shellOf } from './layout';
 import { sha256Base64, sha256Hex } from './seal';
@@ -49,12 +49,13 @@ export async function pack(input: PackInput): Promise<string> {
   const shell = shellOf(input.shell);
   if (/<script\b[^>]*\bsrc\s*=/i.test(shell)) throw new PackError('the app shell loads a script from a file; a record needs every script inline');
   const code = runnableScripts(shell).map((s) => s.code);
-  const packed = appBlock(shell);
-  if (packed !== undefined) {
+  for (const id of PACKED_IDS) {
+    const packed = packedBlock(shell, id);
+    if (packed === undefined) continue;
     try {
       code.push(await unpackApp(packed));
     } catch (e) {
-      throw new PackError(`the app code in the shell cannot be unpacked (${(e as Error).message})`);
+      throw new PackError(`the ${id === APP_ID ? 'app' : 'editor'} code in the shell cannot be unpacked (${(e as Error).message})`);
     }
   }
   const hashes = await Promise.all(code.map((c) => sha256Base64(c)));

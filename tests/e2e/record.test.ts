@@ -142,6 +142,19 @@ describe('the exported main template in Chromium, offline', () => {
     });
     expect(engineRows).toEqual(expected.map((r) => ({ id: r.id, status: r.status, value: r.value })));
 
+    // A formula's source opens in the full editor: its code is a block of its own in the
+    // record, run under the record's CSP on first use (a blocked script would leave a
+    // plain text area and no .cm-editor).
+    await page.evaluate(() => document.addEventListener('securitypolicyviolation', (e) => ((window as any).__csp ??= []).push(`${e.violatedDirective} ${e.blockedURI}`)));
+    const formula = doc.cells.find((c) => c.kind === 'formula')!;
+    await page.locator(`#cell-${formula.id} .cell-no`).click();
+    await page.keyboard.press('Enter');
+    await page.waitForFunction((id) => document.activeElement?.closest(`#cell-${id} .cm-editor`) !== null, formula.id, { timeout: 10_000 });
+    expect(await page.locator('#lt-editor-run').count()).toBe(1);
+    await page.keyboard.press('Escape');
+    await page.locator(`#cell-${formula.id} .cm-editor`).waitFor({ state: 'detached' });
+    expect(await page.evaluate(() => (window as any).__csp ?? [])).toEqual([]);
+
     // Re-export after the edit: the new document and its results come back.
     const html = await page.evaluate(() => (window as any).loadtraceRecord.exportHtml());
     const back = await unpack(html);

@@ -328,3 +328,46 @@ describe('the calc sheet in Chromium', () => {
     expect(kept).toEqual({ head: true, tail: false, attached: true });
   });
 });
+
+describe('the source editor, loaded on first use', () => {
+  it('what is typed before CodeMirror has loaded carries over into it, caret and all', async () => {
+    const fresh = await launch(); // its own profile: a first visit, nothing cached
+    try {
+      // Hold the editor's code back, as a slow disk would, until the text is typed.
+      let release!: () => void;
+      const held = new Promise<void>((r) => (release = r));
+      let asked = 0;
+      await fresh.context.route(/\/assets\/source-editor-[^/]*\.js$/, async (route) => {
+        asked++;
+        await held;
+        await route.continue();
+      });
+      const p = fresh.context.pages()[0] ?? (await fresh.context.newPage());
+      await p.goto(server.url);
+      await ready(p);
+      const id = await p.evaluate(() => (window as any).loadtrace.doc.cells.find((c: { kind: string }) => c.kind === 'formula').id as string);
+      await p.locator(`#cell-${id} .cell-no`).click();
+      await p.keyboard.press('Enter');
+      const plain = p.locator(`#cell-${id} textarea.src-plain`);
+      await plain.waitFor();
+      expect(await p.evaluate(() => document.activeElement?.classList.contains('src-plain'))).toBe(true);
+      const before = await plain.inputValue();
+      await p.keyboard.press('End');
+      await p.keyboard.type(' * 1');
+      await shot('16-editor-loading', p);
+      expect(asked).toBeGreaterThan(0);
+      expect(await p.locator(`#cell-${id} .cm-editor`).count()).toBe(0);
+      release();
+      await p.waitForFunction((i) => document.activeElement?.closest(`#cell-${i} .cm-editor`) !== null, id);
+      expect(await p.locator(`#cell-${id} .cm-content`).textContent()).toBe(`${before} * 1`);
+      await p.keyboard.type('0'); // the caret is where it was: at the end
+      await p.waitForFunction((i) => document.querySelector(`#cell-${i} .cm-content`)?.textContent?.endsWith(' * 10'), id);
+      await shot('17-editor-loaded', p);
+      await p.keyboard.press('Enter'); // finishes the formula
+      await p.locator(`#cell-${id} .cm-editor`).waitFor({ state: 'detached' });
+      expect(await p.evaluate((i) => (window as any).loadtrace.doc.cells.find((c: { id: string }) => c.id === i).expr as string, id)).toMatch(/\* 10$/);
+    } finally {
+      await fresh.close();
+    }
+  });
+});

@@ -1,0 +1,43 @@
+// The record's Content-Security-Policy lets exactly the shell's own code run: the loader,
+// the packed app and the packed source editor (run on first edit), each by its SHA-256.
+// Hash sources: CSP Level 3 §2.3.1 (common practice: base64 of the SHA-256 of the script text).
+
+import { createHash } from 'node:crypto';
+import { gzipSync } from 'node:zlib';
+import { describe, expect, it } from 'vitest';
+import { APP_ID, APP_TYPE, EDITOR_ID } from '../../runtime/record/app-payload';
+import { pack, PackError } from '../../runtime/record/index';
+
+const LOADER = 'document.getElementById("lt-app");';
+const APP = 'globalThis.appRan = true;';
+const EDITOR = 'var __loadtraceEditor = { SourceEditor: class {} };';
+const packed = (code: string) => gzipSync(Buffer.from(code)).toString('base64');
+const block = (id: string, data: string) => `<script type="${APP_TYPE}" id="${id}" data-encoding="gzip base64">${data}</script>`;
+const shell = (editor: string | undefined) => `<!doctype html><html><head><title>s</title></head><body><p>app</p>${block(APP_ID, packed(APP))}${
+  editor === undefined ? '' : block(EDITOR_ID, editor)}<script type="module">${LOADER}</script></body></html>`;
+const hash = (code: string) => `'sha256-${createHash('sha256').update(code).digest('base64')}'`;
+const meta = { project: 'p', job: 'j', subject: 's', preparedBy: '', checkedBy: '', revision: '', date: '' };
+
+async function scriptSrc(html: string): Promise<string[]> {
+  const csp = /<meta http-equiv="Content-Security-Policy" content="([^"]*)"/.exec(html)![1].replace(/&#39;/g, "'");
+  return /script-src ([^;]*)/.exec(csp)![1].trim().split(/\s+/).sort();
+}
+
+describe('the record CSP and the packed source editor', () => {
+  it('lists the loader, the app and the editor by hash, and nothing else', async () => {
+    const html = await pack({ shell: shell(packed(EDITOR)), docText: 'loadtrace 1\n', staticHtml: '<div id="lt-static"></div>', meta });
+    expect(await scriptSrc(html)).toEqual([hash(LOADER), hash(APP), hash(EDITOR)].sort());
+  });
+
+  it('a shell without an editor block still packs (the editor then opens as plain text)', async () => {
+    const html = await pack({ shell: shell(undefined), docText: 'loadtrace 1\n', staticHtml: '<div id="lt-static"></div>', meta });
+    expect(await scriptSrc(html)).toEqual([hash(LOADER), hash(APP)].sort());
+  });
+
+  it('an editor block that cannot be unpacked is refused, by name', async () => {
+    await expect(pack({ shell: shell('not-gzip'), docText: 'loadtrace 1\n', staticHtml: '<div id="lt-static"></div>', meta }))
+      .rejects.toThrow(PackError);
+    await expect(pack({ shell: shell('not-gzip'), docText: 'loadtrace 1\n', staticHtml: '<div id="lt-static"></div>', meta }))
+      .rejects.toThrow(/editor code/);
+  });
+});
