@@ -1,10 +1,12 @@
 // Flexure of a spread footing: cantilever moment of the net factored pressure at the
 // column face (ACI 318-19 §13.2.7.1 [from memory]), steel by the Whitney stress block
-// (§22.2.2.4.1), the 0.0018Ag minimum, and the band rule for rectangular footings.
+// (§22.2.2.4.1), the minimum steel (0.0018Ag in 318-19; by grade in 318-14, the slab rule
+// of reinforcement-limits.ts), and the band rule for rectangular footings.
 
 import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
-import { optional, phiFactor, positive } from './support-args';
+import { EDITIONS, edition, optional, phiFactor, positive, type Edition } from './support-args';
 import { quFooting } from './footing-area';
+import { rhoMinSlab } from './reinforcement-limits';
 
 /** Mu at the column face = qu · B · ℓ² / 2 with ℓ = (L − c)/2 (ACI 318-19 §13.2.7.1). */
 export function muFooting(pu: number, b: number, l: number, c: number): number {
@@ -27,15 +29,23 @@ export function asReqFooting(mu: number, b: number, d: number, fc: number, fy: n
   return ((0.85 * fc * b * d) / fy) * (1 - Math.sqrt(1 - k));
 }
 
-/** As,min = 0.0018 B h (ACI 318-19 §13.3.3.1 → §7.6.1.1 / Table 8.6.1.1, deformed bars). */
-export function asMinFooting(b: number, h: number): number {
-  return 0.0018 * positive('B', b) * positive('h', h);
+/**
+ * As,min = ρmin B h (ACI 318-19 §13.3.3.1 → §7.6.1.1 / Table 8.6.1.1, deformed bars):
+ * 0.0018 for every grade in 318-19; 318-14 sets it by fy, so fy is needed there only.
+ */
+export function asMinFooting(b: number, h: number, fy?: number, ed: Edition = '318-19'): number {
+  const area = positive('B', b) * positive('h', h);
+  if (fy === undefined) {
+    if (ed === '318-14') throw new LibraryError("edition '318-14' sets the minimum by the bar grade: give fy");
+    return 0.0018 * area;
+  }
+  return rhoMinSlab(fy, ed) * area;
 }
 
-/** The larger of the Whitney steel and the 0.0018Ag minimum. */
-export function asFooting(mu: number, b: number, d: number, h: number, fc: number, fy: number, phi = 0.9): number {
+/** The larger of the Whitney steel and the minimum of the edition. */
+export function asFooting(mu: number, b: number, d: number, h: number, fc: number, fy: number, phi = 0.9, ed: Edition = '318-19'): number {
   if (positive('h', h) <= positive('d', d)) throw new LibraryError('h must exceed d');
-  return Math.max(asReqFooting(mu, b, d, fc, fy, phi), asMinFooting(b, h));
+  return Math.max(asReqFooting(mu, b, d, fc, fy, phi), asMinFooting(b, h, fy, ed));
 }
 
 /** γs = 2/(β + 1), β = long side / short side (ACI 318-19 Eq. 13.3.3.3). */
@@ -57,6 +67,9 @@ const flexParams: LibParam[] = [
   { name: 'fy', type: 'Pa', doc: 'steel yield strength' },
   { name: 'phi', type: '1', doc: 'flexure φ (default 0.90, tension-controlled)' },
 ];
+const ED: LibParam = { name: 'edition', type: 'text', choices: EDITIONS, doc: "ACI 318 edition, '318-19' (default) or '318-14'" };
+const MIN_CLAUSE = "As,min = 0.0018·Ag, deformed bars, any grade (ACI 318-19 §13.3.3.1 → Table 8.6.1.1 / §24.4.3.2) [from memory]; "
+  + "318-14 Table 7.6.1.1: 0.0020·Ag for fy < 60 ksi, else max(0.0018·60000/fy, 0.0014)·Ag, Grade 420 counted as Grade 60 [from memory]";
 const bl: LibParam[] = [
   { name: 'B', type: 'm', doc: 'short side of the footing' },
   { name: 'L', type: 'm', doc: 'long side of the footing' },
@@ -88,21 +101,27 @@ export const functions: LibFunction[] = [
   }),
   defineFunction({
     name: 'as_min_footing',
-    params: [{ name: 'B', type: 'm', doc: 'width of the section' }, { name: 'h', type: 'm', doc: 'footing thickness' }],
+    params: [
+      { name: 'B', type: 'm', doc: 'width of the section' },
+      { name: 'h', type: 'm', doc: 'footing thickness' },
+      { name: 'fy', type: 'Pa', doc: "steel yield strength (needed for '318-14' only)" },
+      ED,
+    ],
+    optional: 2,
     returns: 'm^2',
-    clause: 'ACI 318-19 §13.3.3.1 → Table 8.6.1.1 / §24.4.3.2: As,min = 0.0018·Ag (deformed bars) [from memory]',
-    doc: 'Minimum flexural steel of a footing, 0.0018 B h',
-    fn: asMinFooting,
+    clause: MIN_CLAUSE,
+    doc: "Minimum flexural steel of a footing, 0.0018 B h (318-14: by grade)",
+    fn: (b: number, h: number, fy?: number, ed?: Edition) => asMinFooting(b, h, fy, edition(ed)),
   }),
   defineFunction({
     name: 'as_footing',
-    params: [flexParams[0], flexParams[1], flexParams[2], { name: 'h', type: 'm', doc: 'footing thickness' }, flexParams[3], flexParams[4], flexParams[5]],
-    optional: 1,
+    params: [flexParams[0], flexParams[1], flexParams[2], { name: 'h', type: 'm', doc: 'footing thickness' }, flexParams[3], flexParams[4], flexParams[5], ED],
+    optional: 2,
     returns: 'm^2',
-    clause: 'ACI 318-19 §22.2.2.4.1 and As,min = 0.0018·Ag (§13.3.3.1 [from memory]); the larger',
+    clause: `ACI 318-19 §22.2.2.4.1 and the minimum, the larger. ${MIN_CLAUSE}`,
     doc: 'Flexural steel of a footing: the larger of the required and the minimum',
-    fn: (mu: number, b: number, d: number, h: number, fc: number, fy: number, phi?: number) =>
-      asFooting(mu, b, d, h, fc, fy, optional(phi, 0.9, phiFactor)),
+    fn: (mu: number, b: number, d: number, h: number, fc: number, fy: number, phi?: number, ed?: Edition) =>
+      asFooting(mu, b, d, h, fc, fy, optional(phi, 0.9, phiFactor), edition(ed)),
   }),
   defineFunction({
     name: 'gamma_s_band',

@@ -6,13 +6,16 @@ import { defineFunction, LibraryError, type LibFunction } from './types';
 import { choice, edition, nonNegative, positive, show, type Edition, EDITIONS } from './gravity-args';
 import { beta1 } from './concrete';
 import { epsTc } from './resistance-factors';
-import { inch, psi } from '../units/si';
+import { inch, MPa, psi } from '../units/si';
 
 /** ACI 318-19 Tables 7.6.1.1 / 8.6.1.1, §24.4.3.2: ρmin = 0.0018 of Ag for deformed bars (318-14: 0.0020 below Grade 60, else 0.0018·60,000/fy ≥ 0.0014). */
 export function rhoMinSlab(fy: number, ed: Edition = '318-19'): number {
   const f = positive('fy', fy) / psi;
   if (edition(ed) === '318-19') return 0.0018;
-  return f < 60000 * (1 - 1e-9) ? 0.002 : Math.max((0.0018 * 60000) / f, 0.0014);
+  if (f < 60000 * (1 - 1e-9)) return 0.002;
+  // Grade 420 (60.9 ksi) is Grade 60: 0.0018, as 318M-14 gives it (0.0018·420/fy).
+  if (fy <= 420 * MPa * (1 + 1e-9)) return 0.0018;
+  return Math.max((0.0018 * 60000) / f, 0.0014);
 }
 
 /** ACI 318-19 §7.6.1.1 / §8.6.1.1 / §24.4.3.2: As,min = ρmin·b·h of a slab or footing strip. */
