@@ -7,6 +7,8 @@ import { compileExpression, type CompileScope } from '../formula/compile';
 import { compileCheck } from '../formula/compile-check';
 import { parseInput, type InputValue } from '../formula/input-value';
 import { unitInfo } from '../units/dimension';
+import { unitInSystem } from '../units/preferred';
+import type { UnitSystem } from '../units/systems';
 import { BOOL, describeType, NUMBER, numType, sameType, type VType } from '../formula/value-type';
 import { isDimless } from '../units/dimension';
 
@@ -108,7 +110,7 @@ export function checkProgram(
   cell: CheckCell,
   scope: CompileScope,
   unitOf: (source: unknown) => string,
-  fallbackUnit: (dims: readonly number[]) => string = () => '',
+  system: UnitSystem,
 ): CellProgram {
   let compiled;
   try {
@@ -127,8 +129,10 @@ export function checkProgram(
     };
   }
   const d = compiled.demand!, k = compiled.capacity!;
-  // The unit of a cell named on either side, else the unit typed in a quantity, else the usual one.
-  const demandUnit = unitOf(d.source) || unitOf(k.source) || knownUnit(d.type) || knownUnit(k.type) || fallbackUnit((d.type as { dims: readonly number[] }).dims);
+  // The unit of a cell named on either side (it follows unit switches itself), else the
+  // unit typed in a quantity or the usual one, in the sheet's system.
+  const demandUnit = unitOf(d.source) || unitOf(k.source)
+    || unitInSystem(knownUnit(d.type) || knownUnit(k.type), (d.type as { dims: readonly number[] }).dims, system);
   return {
     type: NUMBER, inputs, reads, clauses, unit: '', demandUnit, form: 'ratio',
     definition: (...args: unknown[]): CheckResult => {

@@ -16,8 +16,7 @@ import { loopMessages } from './cycles';
 import { ReadersIndex } from './readers';
 import { Notifier } from './notifier';
 import { isInputValueOnly, refsOf, sameCell, samePlaces, sameTypeOrBoth } from './doc-diff';
-import { preferredUnit } from '../units/preferred';
-import { sheetSystem } from '../units/systems';
+import { cellSystem, sheetSystem, type UnitSystem } from '../units/systems';
 import type { LibFunction } from '../library/types';
 import { BUILTINS } from '../formula/builtins';
 import { checkProgram, formulaProgram, inputProgram, type CellProgram } from './cell-program';
@@ -88,6 +87,9 @@ class DocEngine implements Engine {
   private cycleMembers = new Map<string, string>();
   /** name → ids of the cells whose source mentions it. */
   private readonly readers = new ReadersIndex();
+  /** The sheet's unit system (the vote of its display units), and whether an edit may have changed it. */
+  private system: UnitSystem | undefined;
+  private systemStale = false;
   private disposed = false;
 
   constructor(doc: CalcDocument, options: EngineOptions) {
@@ -180,6 +182,7 @@ class DocEngine implements Engine {
   private replaceCell(slot: Slot, cell: Cell): boolean {
     const before = slot.cell;
     slot.cell = cell;
+    if (cellSystem(before) !== cellSystem(cell)) this.systemStale = true;
     const refs = refsOf(cell);
     if (String(refs) !== String(slot.refs)) {
       this.readers.remove(slot.cell.id, slot.refs);
@@ -201,6 +204,15 @@ class DocEngine implements Engine {
       for (const n of namesChanged) for (const id of this.readers.of(n)) affected.add(id);
       for (const n of namesChanged) for (const id of this.owners.get(n) ?? []) affected.add(id);
       for (const id of this.updateCycles()) affected.add(id);
+    }
+    if (structural || this.systemStale) {
+      this.systemStale = false;
+      const system = sheetSystem(this.doc);
+      if (system !== this.system) {
+        this.system = system;
+        // Checks with no named cell to take a unit from show theirs in the sheet's system.
+        for (const slot of this.slots.values()) if (slot.cell.kind === 'check') affected.add(slot.cell.id);
+      }
     }
     this.recompile(affected);
     this.notifier.queue();
@@ -259,12 +271,15 @@ class DocEngine implements Engine {
       visiting.delete(id);
       done.add(id);
       const before = slot.program?.type;
+      const unitBefore = slot.program?.unit;
       this.compileSlot(slot);
       const after = slot.program?.type;
-      if (!sameTypeOrBoth(before, after)) {
+      const typeChanged = !sameTypeOrBoth(before, after);
+      // A check shows demand and capacity in the unit of a cell it names: a new display unit there is news to it.
+      if (typeChanged || unitBefore !== slot.program?.unit) {
         const name = cellName(slot.cell);
         if (name) for (const id of this.readers.of(name)) {
-          if (!done.has(id)) {
+          if (!done.has(id) && (typeChanged || this.slots.get(id)?.cell.kind === 'check')) {
             affected.add(id);
             queue.push(id);
           }
@@ -316,7 +331,7 @@ class DocEngine implements Engine {
       case 'formula':
         return formulaProgram(cell, this.scopeFor(cell.expr));
       case 'check':
-        return checkProgram(cell, this.scopeFor(cell.expr), (node) => this.unitOfNode(node), (dims) => preferredUnit(dims, sheetSystem(this.doc)));
+        return checkProgram(cell, this.scopeFor(cell.expr), (node) => this.unitOfNode(node), this.system ?? sheetSystem(this.doc));
       case 'figure':
         return figureProgram(cell, this.scopeFor(cell.expr, this.figureFunctions), (n) => this.unitOfName(n));
       case 'sweep':

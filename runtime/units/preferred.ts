@@ -2,7 +2,7 @@
 // are expressions): the usual trade unit of its dimension in the sheet's system.
 
 import { sameDims, unitInfo, type Dims } from './dimension';
-import type { UnitSystem } from './systems';
+import { counterpart, type UnitSystem } from './systems';
 
 const PREFERRED: Record<UnitSystem, string[]> = {
   US: ['in', 'in^2', 'in^3', 'in^4', 'psi', 'kip', 'kip*ft', 'klf', 'pcf', 'deg'],
@@ -13,4 +13,13 @@ const PREFERRED: Record<UnitSystem, string[]> = {
 export function preferredUnit(dims: Dims, system: UnitSystem): string {
   if (dims.every((d) => d === 0)) return '';
   return PREFERRED[system].find((u) => sameDims(unitInfo(u).dims, dims)) ?? '';
+}
+
+/**
+ * Display unit for a value with no cell unit of its own: the unit it was written in
+ * (`6 in`), moved into the sheet's system by the pair a switch uses for formula units,
+ * else the usual unit of its dimension.
+ */
+export function unitInSystem(written: string, dims: Dims, system: UnitSystem): string {
+  return written ? counterpart(written, system) : preferredUnit(dims, system);
 }

@@ -95,7 +95,8 @@ export type UnitMemory = Readonly<Record<string, string>>;
 // Cells are immutable: the system of each is worked out once.
 const cellSystems = new WeakMap<Cell, UnitSystem | null>();
 
-function cellSystem(cell: Cell): UnitSystem | null {
+/** The system of the unit a cell shows, or null when it shows none or a shared one. */
+export function cellSystem(cell: Cell): UnitSystem | null {
   let s = cellSystems.get(cell);
   if (s === undefined) {
     const u = shownUnit(cell);

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { create, all } from 'mathjs';
 import type { CalcDocument } from '../../runtime/document';
 import { emptyMeta } from '../../runtime/document';
+import { createEngine } from '../../runtime/engine';
 import {
   canonicalUnit, counterpart, sheetSystem, switchSystem, systemOf, typedUnit, unitPairs,
 } from '../../runtime/units/systems';
@@ -108,5 +109,48 @@ describe('switchSystem', () => {
   it('returns the same sheet when nothing changes', () => {
     const { doc: si } = switchSystem(us, 'SI');
     expect(switchSystem(si, 'SI').doc).toBe(si);
+  });
+});
+
+describe('checks follow the sheet\'s unit system', () => {
+  // 1 lbf = 4.448222 N, 1 in = 25.4 mm, 1 ft = 0.3048 m (NIST SP 811, App. B);
+  // kip = 1000 lbf (common practice)
+  const sheet = doc([
+    { id: 'a', kind: 'input', name: 'A', value: '100 in^2' },
+    { id: 'v', kind: 'formula', name: 'Vu', expr: '100 kip', unit: 'kip' },
+    { id: 'p', kind: 'formula', name: 'phiVc', expr: '150 kip', unit: 'kip' },
+    { id: 'k1', kind: 'check', expr: 'Vu <= phiVc' }, // a named cell's unit
+    { id: 'k2', kind: 'check', expr: '3 ft <= 40 in' }, // the unit typed in a quantity
+    { id: 'k3', kind: 'check', expr: 'sqrt(A) <= 2 * sqrt(A)' }, // no unit written: the usual one
+  ]);
+
+  async function shown(d: CalcDocument, engine = createEngine(d)) {
+    engine.update(d);
+    await engine.settled();
+    const dc = (id: string) => `${engine.state(id)?.demand?.text} / ${engine.state(id)?.capacity?.text}`;
+    return { engine, k1: dc('k1'), k2: dc('k2'), k3: dc('k3') };
+  }
+
+  it('shows demand and capacity in SI after a switch to SI, and in US after the switch back', async () => {
+    const us = await shown(sheet);
+    expect([us.k1, us.k2, us.k3]).toEqual(['100 kip / 150 kip', '3 ft / 3.333 ft', '10 in / 20 in']);
+
+    const there = switchSystem(sheet, 'SI');
+    const si = await shown(there.doc, us.engine);
+    expect(si.k1).toBe('444.8 kN / 667.2 kN');
+    expect(si.k2).toBe('0.9144 m / 1.016 m');
+    expect(si.k3).toBe('254 mm / 508 mm');
+
+    const back = await shown(switchSystem(there.doc, 'US', there.memory).doc, us.engine);
+    expect([back.k1, back.k2, back.k3]).toEqual([us.k1, us.k2, us.k3]);
+    us.engine.dispose();
+  });
+
+  it('takes a new display unit of a cell it names', async () => {
+    const first = await shown(sheet);
+    const lbf = { ...sheet, cells: sheet.cells.map((c) => (c.id === 'v' ? { ...c, unit: 'lbf' } : c)) };
+    const next = await shown(lbf, first.engine);
+    expect(next.k1).toBe('100000 lbf / 150000 lbf');
+    first.engine.dispose();
   });
 });
