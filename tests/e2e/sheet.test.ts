@@ -210,9 +210,17 @@ describe('the calc sheet in Chromium', () => {
     await page.waitForFunction(() => document.querySelector('#cell-f1 .hc')?.textContent?.includes('mm'));
     // 7.625 in × 25.4 = 193.7 mm (1 in = 25.4 mm exactly, NIST SP 811 App. B)
     expect(await cellText('f1')).toContain('193.7mm');
+    // checks follow: d >= 7 in shows 7 in = 177.8 mm (NIST SP 811 App. B), w_u <= 300 psf in kPa
+    const dc = (id: string) => page.locator(`#cell-${id} .verdict .dc`).innerText();
+    await page.waitForFunction(() => document.querySelector('#cell-k1 .verdict .dc')?.textContent?.includes('mm'));
+    expect(await dc('k1')).toMatch(/^demand 177\.8 mm · capacity 193\.7 mm$/);
+    expect(await dc('k2')).toMatch(/^demand [\d.]+ kPa · capacity 14\.36 kPa$/); // 300 psf × 0.04788026 kPa/psf (NIST SP 811 App. B)
     await shot('10-si-units');
     await page.locator('#btn-units').click();
     await page.waitForFunction(() => !document.querySelector('#cell-f1 .hc')?.textContent?.includes('mm'));
+    await page.waitForFunction(() => document.querySelector('#cell-k1 .verdict .dc')?.textContent?.includes(' in'));
+    expect(await dc('k1')).toMatch(/^demand 7 in · capacity 7\.625 in$/);
+    expect(await dc('k2')).toMatch(/^demand [\d.]+ psf · capacity 300 psf$/);
   });
 
   it('a second tab on the same sheet warns instead of overwriting', async () => {
