@@ -108,4 +108,8 @@ export interface SweepResult {
   /** The input's value in the document now, SI. */
   current: number;
   series: SweepSeries[];
+  /** The input's least/greatest values as the sheet shows them ("≥ 5 in, ≤ 16 in"), when it has any. */
+  limits?: string;
+  /** Indices of the points outside those limits: not computed (null in every series, with the reason). */
+  outside?: number[];
 }

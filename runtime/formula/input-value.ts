@@ -14,6 +14,28 @@ export interface InputValue {
   value: number | string | boolean;
   /** Unit to show the value in ('' for a pure number, text or boolean). */
   unit: string;
+  /** The least and greatest values allowed (SI, and as typed), when the input has them. */
+  min?: InputLimit;
+  max?: InputLimit;
+}
+
+export interface InputLimit {
+  si: number;
+  text: string;
+}
+
+/** "≥ 5 in, ≤ 16 in", as the sheet shows an input's limits ('' when it has none). */
+export function limitsText(v: Pick<InputValue, 'min' | 'max'>): string {
+  return [v.min && `≥ ${v.min.text}`, v.max && `≤ ${v.max.text}`].filter(Boolean).join(', ');
+}
+
+/** Why `si` is not allowed by the limits, or undefined when it is. */
+export function outsideLimits(si: number, v: Pick<InputValue, 'min' | 'max' | 'unit'>): string | undefined {
+  const tooLow = v.min !== undefined && si < v.min.si * (1 - 1e-12);
+  const tooHigh = v.max !== undefined && si > v.max.si * (1 + 1e-12);
+  if (!tooLow && !tooHigh) return undefined;
+  const shown = v.unit ? `${formatNumber(si / unitInfo(v.unit).factor)} ${v.unit}` : formatNumber(si);
+  return `${shown} is ${tooLow ? `below the allowed minimum ${v.min!.text}` : `above the allowed maximum ${v.max!.text}`}`;
 }
 
 const NO_CELLS = {
@@ -79,20 +101,18 @@ export function parseInput(cell: InputCell): InputValue {
   else if (!unit && !q.dims.every((d) => d === 0)) {
     throw new CellError('unit', `the value is ${describeType(type)}; give the input a display unit`);
   }
+  const out: InputValue = { type, value: q.si, unit };
   for (const [bound, label] of [[cell.min, 'minimum'], [cell.max, 'maximum']] as const) {
     if (bound === undefined || bound.trim() === '') continue;
     const b = parseQuantityText(bound, `the ${label}`);
     if (!sameDimsLoose(b.dims, q.dims)) {
       throw new CellError('unit', `the ${label} ${bound} is ${describeType(numType(b.dims, b.hint))} but the value is ${describeType(type)}`);
     }
-    const tooLow = label === 'minimum' && q.si < b.si * (1 - 1e-12);
-    const tooHigh = label === 'maximum' && q.si > b.si * (1 + 1e-12);
-    if (tooLow || tooHigh) {
-      const shown = unit ? `${formatNumber(q.si / unitInfo(unit).factor)} ${unit}` : formatNumber(q.si);
-      throw new CellError('range', `${shown} is ${tooLow ? 'below the allowed minimum' : 'above the allowed maximum'} ${bound.trim()}`);
-    }
+    out[label === 'minimum' ? 'min' : 'max'] = { si: b.si, text: bound.trim() };
   }
-  return { type, value: q.si, unit };
+  const outside = outsideLimits(q.si, out);
+  if (outside) throw new CellError('range', outside);
+  return out;
 }
 
 // The unit a person typed after the number, when it is one plain unit expression.

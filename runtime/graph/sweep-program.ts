@@ -1,10 +1,11 @@
 // A sweep cell: the runtime variable reads the swept input and the plotted cells, so it
 // recomputes whenever they change; its value is the whole sweep, evaluated point by
-// point on the compiled programs with the input overridden (what-if.ts).
+// point on the compiled programs with the input overridden (what-if.ts). The range stays
+// as asked; points beyond the input's min/max are not computed and are listed as outside.
 
 import type { SweepCell } from '../document';
 import { CellError } from '../formula/cell-error';
-import { parseQuantityText } from '../formula/input-value';
+import { limitsText, parseQuantityText } from '../formula/input-value';
 import { describeType } from '../formula/value-type';
 import type { SweepResult, SweepSeries } from '../figures/spec';
 import { sameDims } from '../units/dimension';
@@ -85,7 +86,15 @@ export function sweepProgram(cell: SweepCell, lookup: (name: string) => SweepCel
       const now = (id: string, was?: CellProgram) => graph.program(id) ?? was;
       const series = outs.map((o, k) => seriesOf(o.name, { ...o.info, program: now(o.info.id, o.info.program) },
         points.map((p) => outcomeOf(p[k], o.info.kind === 'check')), xs));
-      return { input: cell.input, unit: now(input.id, input.program)?.unit ?? unit, xs, current: current as number, series };
+      const inputNow = now(input.id, input.program);
+      const result: SweepResult = { input: cell.input, unit: inputNow?.unit ?? unit, xs, current: current as number, series };
+      const limits = inputNow?.input ? limitsText(inputNow.input) : '';
+      if (limits) {
+        result.limits = limits;
+        const outside = xs.flatMap((x, i) => (w.outside(x) ? [i] : []));
+        if (outside.length) result.outside = outside;
+      }
+      return result;
     },
   };
 }

@@ -1,10 +1,12 @@
 // What if an input had another value? Evaluates the compiled cell programs directly,
 // upstream first, with the input overridden — never touching the reactive graph, so the
 // document and the running engine stay as they are. Cells that do not depend on the
-// input are computed once and shared by every point.
+// input are computed once and shared by every point. A value outside the input's own
+// least/greatest values is not computed: the sheet would refuse it for the input too.
 
 import type { WhatIfOutcome } from '../engine-types';
 import type { CellProgram, CheckResult } from './cell-program';
+import { outsideLimits } from '../formula/input-value';
 
 /** What the evaluator needs from the engine: programs by cell id, and names. */
 export interface WhatIfGraph {
@@ -23,8 +25,18 @@ export class WhatIf {
 
   constructor(private readonly graph: WhatIfGraph, private readonly inputId: string) {}
 
+  /** Why the input may not take `value` (outside its min/max), or undefined when it may. */
+  outside(value: unknown): string | undefined {
+    const input = this.graph.program(this.inputId)?.input;
+    if (!input || typeof value !== 'number') return undefined;
+    const why = outsideLimits(value, input);
+    return why && `${this.graph.nameOf(this.inputId)} = ${why}; not computed`;
+  }
+
   /** The raw runtime value of each target with the input set to `value` (SI number, text or boolean). */
   at(value: unknown, targets: readonly string[]): Outcome[] {
+    const outside = this.outside(value);
+    if (outside) return targets.map(() => ({ ok: false, error: outside }));
     const memo = new Map<string, Outcome>([[this.inputId, { ok: true, value }]]);
     return targets.map((id) => this.evaluate(id, memo, new Set()));
   }

@@ -9,6 +9,7 @@ import { createEngine } from '../../runtime/engine';
 import { setInputValue } from '../../runtime/edit/index';
 import { parse } from '../../runtime/format/index';
 import { sweepPoints } from '../../runtime/graph/sweep-program';
+import { sweepKind, outsideText } from '../../cells/sweep';
 
 const IN = 0.0254, FT = 0.3048;
 
@@ -183,6 +184,91 @@ describe('sweep labels follow the cells', () => {
     const s = engine.state('w1')!.sweep!;
     expect(s.series[1].unit).toBe('lbf');
     expect(s.series[1].values[0]! / 4448.2216152605).toBeCloseTo(5, 9); // values stay SI: 5 kip
+    engine.dispose();
+  });
+});
+
+describe("a sweep across the input's least and greatest values", () => {
+  // LINEAR with x limited to 5 in ≤ x ≤ 12 in; the sweep still asks for 4 to 14 in.
+  const LIMITED = LINEAR.replace('input i1  x = 8 in\n  unit  in\n', 'input i1  x = 8 in\n  unit  in\n  min   5 in\n  max   12 in\n');
+  const inches = (xs: number[]) => xs.map((x) => Math.round((x / IN) * 1e9) / 1e9);
+
+  it('keeps the range asked for, computes only the points inside the limits and lists the others as outside', async () => {
+    const d = load(LIMITED);
+    expect((d.cells.find((c) => c.id === 'i1') as InputCell).max).toBe('12 in');
+    const engine = createEngine(d);
+    await engine.settled();
+    const st = engine.state('w1')!;
+    expect(st.status).toBe('ok');
+    const sw = st.sweep!;
+    expect(inches(sw.xs)).toEqual([4, 5, 6, 7, 8, 9, 10, 11, 12, 13, 14]); // not silently clipped
+    expect(sw.limits).toBe('≥ 5 in, ≤ 12 in');
+    expect(sw.outside).toEqual([0, 9, 10]); // 4 in below; 13 and 14 in above; 5 and 12 in are allowed (limits inclusive)
+    for (const s of sw.series) {
+      expect(Object.keys(s.errors ?? {}).map(Number)).toEqual([0, 9, 10]);
+      expect([0, 9, 10].map((i) => s.values[i])).toEqual([null, null, null]);
+      expect(s.errors![0]).toBe('x = 4 in is below the allowed minimum 5 in; not computed');
+      expect(s.errors![9]).toBe('x = 13 in is above the allowed maximum 12 in; not computed');
+    }
+    // Inside the limits every point is computed as before: demand = 1.25 kip/in · x (arithmetic).
+    const demand = sw.series[1];
+    for (const i of [1, 4, 8]) expect(demand.values[i]! / 4448.2216152605).toBeCloseTo(1.25 * (4 + i), 9);
+    // The check's pass list skips the outside points; the first failure and the crossing stay where they were.
+    const ok = sw.series[0];
+    expect(ok.pass![0]).toBeNull();
+    expect(ok.pass![10]).toBeNull();
+    expect(ok.firstFail).toBe(6); // x = 10 in: 12.5/12 > 1
+    expect(ok.crossings!.map((c) => c / IN)).toHaveLength(1);
+    expect(ok.crossings![0] / IN).toBeCloseTo(9.6, 9);
+    // The root (√(x − 5 in)) breaks nowhere inside: 5 in is its edge.
+    expect(sw.series[2].values.filter((v) => v !== null)).toHaveLength(8);
+    engine.dispose();
+  });
+
+  it('engine.whatIf refuses a value outside the limits the same way', async () => {
+    const engine = createEngine(load(LIMITED));
+    await engine.settled();
+    const got = engine.whatIf!('x', [4 * IN, 8 * IN, 12 * IN, 12.5 * IN], ['demand', 'ok']);
+    expect(got[0].demand).toEqual({ error: 'x = 4 in is below the allowed minimum 5 in; not computed' });
+    expect(got[0].ok.error).toMatch(/below the allowed minimum/);
+    expect(got[1].demand.value as number / 4448.2216152605).toBeCloseTo(10, 9); // 1.25 × 8
+    expect(got[2].ok.pass).toBe(false); // 12 in is allowed: 15/12 > 1 fails, but is computed
+    expect(got[3].demand.error).toMatch(/x = 12\.5 in is above the allowed maximum 12 in/);
+    engine.dispose();
+  });
+
+  it('follows an edit of the limits, and says nothing for an input without any', async () => {
+    const d = load(LIMITED);
+    const engine = createEngine(d);
+    await engine.settled();
+    engine.update({ ...d, cells: d.cells.map((c) => (c.id === 'i1' ? { ...c, max: '16 in' } as InputCell : c)) });
+    await engine.settled();
+    const sw = engine.state('w1')!.sweep!;
+    expect(sw.limits).toBe('≥ 5 in, ≤ 16 in');
+    expect(sw.outside).toEqual([0]);
+    expect(sw.series[1].values[10]! / 4448.2216152605).toBeCloseTo(17.5, 9); // 1.25 × 14
+    engine.dispose();
+    const plain = createEngine(load(LINEAR));
+    await plain.settled();
+    const none = plain.state('w1')!.sweep!;
+    expect(none.limits).toBeUndefined();
+    expect(none.outside).toBeUndefined();
+    expect(outsideText(none)).toBe('');
+    plain.dispose();
+  });
+
+  it('the view says how many points are outside and why they are blank', async () => {
+    const d = load(LIMITED);
+    const engine = createEngine(d);
+    await engine.settled();
+    const sw = engine.state('w1')!.sweep!;
+    expect(outsideText(sw)).toBe('3 of 11 points are outside the limits of x (≥ 5 in, ≤ 12 in): not computed, marked ×.');
+    expect(outsideText({ ...sw, outside: sw.xs.map((_, i) => i) })).toMatch(/^All 11 points are outside/);
+    expect(outsideText({ ...sw, outside: [0] })).toBe('1 of 11 points is outside the limits of x (≥ 5 in, ≤ 12 in): not computed, marked ×.');
+    const cell = d.cells.find((c) => c.id === 'w1') as SweepCell;
+    const html = sweepKind.render(sweepKind.bind(cell, { state: (id) => engine.state(id), scope: { isCell: () => false, state: () => undefined }, number: '1' }));
+    expect(html).toContain('data-role="sweep-outside"');
+    expect(html).toContain('3 of 11 points are outside the limits of x (≥ 5 in, ≤ 12 in)');
     engine.dispose();
   });
 });
