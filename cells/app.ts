@@ -54,7 +54,10 @@ export class App {
     this.title = new TitleBlock(el.titleBlock, (key, value) => this.apply(setMeta(this.doc, key, value), `meta:${key}`));
     this.computing = new ComputingState({
       said: () => el.status.textContent ?? '',
-      say: (text) => (el.status.textContent = text),
+      say: (text) => {
+        el.status.textContent = text;
+        el.status.title = text; // the toolbar may cut a long message short
+      },
       mark: (on) => this.view.setComputing(on),
     });
   }
