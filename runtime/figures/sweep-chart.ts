@@ -120,9 +120,11 @@ function panel(r: SweepResult, s: SweepSeries, top: number, X: (si: number) => n
     else if (s.pass && s.pass[i] === false) g += el('circle', { cx: x, cy: Y(s.kind === 'condition' ? 0 : Math.min(v, hi)), r: 2.6, fill: '#b0261e' });
     else g += el('circle', { cx: x, cy: Y(s.kind === 'condition' ? 1 : Math.max(Math.min(v, hi), lo)), r: 2, fill: colour });
   });
-  if (s.errors && Object.keys(s.errors).length) {
-    g += text(right, bottom + 12, `× calc breaks at ${Object.keys(s.errors).length} point(s): ${Object.values(s.errors)[0]}`.slice(0, 110), 'small', { 'text-anchor': 'end' });
-  }
+  // Points outside the input's limits are not computed: said as such, not as breaks of the calc.
+  const outside = new Set(r.outside ?? []);
+  const broken = Object.entries(s.errors ?? {}).filter(([i]) => !outside.has(Number(i)));
+  if (outside.size) g += text(X(r.xs[0]), bottom + 12, `× ${outside.size} outside ${r.limits ?? 'the limits'}: not computed`.slice(0, 50), 'small');
+  if (broken.length) g += text(right, bottom + 12, `× calc breaks at ${broken.length} point(s): ${broken[0][1]}`.slice(0, outside.size ? 60 : 110), 'small', { 'text-anchor': 'end' });
 
   // Where the check starts to fail.
   if (s.crossings?.length) {

@@ -10,6 +10,7 @@ import { setInputValue } from '../../runtime/edit/index';
 import { parse } from '../../runtime/format/index';
 import { sweepPoints } from '../../runtime/graph/sweep-program';
 import { sweepKind, outsideText } from '../../cells/sweep';
+import { renderSweepChart } from '../../runtime/figures/sweep-chart';
 
 const IN = 0.0254, FT = 0.3048;
 
@@ -269,6 +270,19 @@ describe("a sweep across the input's least and greatest values", () => {
     const html = sweepKind.render(sweepKind.bind(cell, { state: (id) => engine.state(id), scope: { isCell: () => false, state: () => undefined }, number: '1' }));
     expect(html).toContain('data-role="sweep-outside"');
     expect(html).toContain('3 of 11 points are outside the limits of x (≥ 5 in, ≤ 12 in)');
+    engine.dispose();
+  });
+
+  it('the chart (also in records) says the outside points were not computed, not that the calc broke there', async () => {
+    const engine = createEngine(load(LIMITED));
+    await engine.settled();
+    const sw = engine.state('w1')!.sweep!;
+    const svg = renderSweepChart(sw, 'limited');
+    expect(svg).toContain('× 3 outside ≥ 5 in, ≤ 12 in: not computed');
+    expect(svg).not.toContain('calc breaks');
+    // A point that does break inside the limits is still told apart.
+    const withBreak = { ...sw, series: sw.series.map((s, k) => (k === 2 ? { ...s, errors: { ...s.errors, 4: 'negative root' } } : s)) };
+    expect(renderSweepChart(withBreak, 'limited')).toContain('× calc breaks at 1 point(s): negative root');
     engine.dispose();
   });
 });
