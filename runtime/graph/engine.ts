@@ -210,8 +210,8 @@ class DocEngine implements Engine {
       const system = sheetSystem(this.doc);
       if (system !== this.system) {
         this.system = system;
-        // Checks with no named cell to take a unit from show theirs in the sheet's system.
-        for (const slot of this.slots.values()) if (slot.cell.kind === 'check') affected.add(slot.cell.id);
+        // Checks and figures with no named cell to take a unit from show theirs in the sheet's system.
+        for (const slot of this.slots.values()) if (slot.cell.kind === 'check' || slot.cell.kind === 'figure') affected.add(slot.cell.id);
       }
     }
     this.recompile(affected);
@@ -275,11 +275,12 @@ class DocEngine implements Engine {
       this.compileSlot(slot);
       const after = slot.program?.type;
       const typeChanged = !sameTypeOrBoth(before, after);
-      // A check shows demand and capacity in the unit of a cell it names: a new display unit there is news to it.
+      // Checks (demand, capacity) and figures (their labels) show the unit of a cell they name: a new display unit there is news to them.
       if (typeChanged || unitBefore !== slot.program?.unit) {
         const name = cellName(slot.cell);
         if (name) for (const id of this.readers.of(name)) {
-          if (!done.has(id) && (typeChanged || this.slots.get(id)?.cell.kind === 'check')) {
+          const kind = this.slots.get(id)?.cell.kind;
+          if (!done.has(id) && (typeChanged || kind === 'check' || kind === 'figure')) {
             affected.add(id);
             queue.push(id);
           }

@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import type { CalcDocument, FigureCell, SweepCell } from '../../runtime/document';
 import { createEngine } from '../../runtime/engine';
 import { renameCell, setInputValue } from '../../runtime/edit/index';
+import { switchSystem } from '../../runtime/units/systems';
 import { parse, serialize } from '../../runtime/format/index';
 import { parseSweepSource, setFigureExpr, sweepSource } from '../../runtime/figures/edit';
 import { figureKind } from '../../cells/figure';
@@ -85,6 +86,21 @@ describe('figure cell in the engine', () => {
     const crit = els.find((e) => e.attrs['data-role'] === 'critical-perimeter')!;
     const drawn = pathLength(crit.attrs.d) / Number(els[0].attrs['data-scale']);
     expect(drawn / IN).toBeCloseTo(2 * (18 + 3), 1); // corner: (c1 + d/2) + (c2 + d/2), ACI 318-19 §22.6.4.1
+    engine.dispose();
+  });
+
+  it('follows a switch of the sheet to SI and back: labels in the new units of the cells it reads', async () => {
+    const d = load();
+    const engine = createEngine(d);
+    await engine.settled();
+    const si = switchSystem(d, 'SI');
+    engine.update(si.doc);
+    await engine.settled();
+    expect(engine.state('g1')!.figure!.units).toEqual({ c1: 'mm', c2: 'mm', d: 'mm' });
+    expect(engine.state('g1')!.figure!.system).toBe('SI');
+    engine.update(switchSystem(si.doc, 'US', si.memory).doc);
+    await engine.settled();
+    expect(engine.state('g1')!.figure!.units).toEqual({ c1: 'in', c2: 'in', d: 'in' });
     engine.dispose();
   });
 
