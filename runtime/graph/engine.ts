@@ -27,6 +27,7 @@ import { figureProgram } from './figure-program';
 import { sweepProgram, type SweepCellInfo } from './sweep-program';
 import { outcomeOf, WhatIf, type WhatIfGraph } from './what-if';
 import { Pacer } from './pacer';
+import { computeAfterThisTask } from './scheduling';
 
 export interface EngineOptions {
   functions?: readonly LibFunction[];
@@ -46,30 +47,6 @@ interface Slot {
 const strictGlobal = (name: string) => {
   throw new CellError('unknown-name', `"${name}" is not the name of any cell`);
 };
-
-/** The runtime's internal scheduling hooks (writable prototype properties in 6.0.1). */
-interface RuntimeScheduling {
-  _disposed: boolean;
-  _computeNow(): Promise<void>;
-  _computeSoon(): Promise<void>;
-}
-
-/**
- * The runtime waits for the next animation frame before it recomputes, so an edit's
- * results would land a frame late and their work would delay that frame's paint. A
- * microtask computes right after the edit's task instead (in Node too, where it used
- * setImmediate). Edits made in one task still make one compute: `_compute` reuses the
- * pending `_computing` promise until the compute starts.
- */
-function computeAfterThisTask(runtime: Runtime, pacer: Pacer): Runtime {
-  const r = runtime as unknown as RuntimeScheduling;
-  r._computeSoon = () => Promise.resolve().then(() => {
-    if (r._disposed) return undefined;
-    pacer.begin();
-    return r._computeNow();
-  });
-  return runtime;
-}
 
 class DocEngine implements Engine {
   doc: CalcDocument;
