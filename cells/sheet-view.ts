@@ -12,6 +12,7 @@ import { escapeHtml, type BindContext } from './kind';
 import { bindCell, cellSource, numberCells, renderView } from './registry';
 import { summaryHtml, summaryRows } from './summary';
 import { writeCellHtml } from './step-patch';
+import { LaterBatches } from './later-batches';
 
 export interface SheetEvents {
   commitValue(id: string, value: string): void;
@@ -37,8 +38,6 @@ interface Slot {
 const NEAR = '1200px 0px';
 /** From this many cells on, off-screen cells also skip layout and paint (content-visibility). */
 const LONG_SHEET = 300;
-/** Cells typeset per task when filling in those just beyond the viewport. */
-const AHEAD_BATCH = 8;
 const STATUS_CLASSES = ['st-ok', 'st-fail', 'st-error', 'st-pending', 'st-plain'];
 
 export class SheetView {
@@ -55,8 +54,10 @@ export class SheetView {
   private ready = false;
   private nearby?: IntersectionObserver;
   /** Cells near but not on screen, typeset after the screen itself has painted. */
-  private ahead = new Set<string>();
-  private aheadScheduled = false;
+  private readonly ahead = new LaterBatches((id) => {
+    const s = this.slots.get(id);
+    if (s?.near && (s.html === undefined || s.stale)) this.renderCell(id);
+  });
   selected?: string;
 
   constructor(
@@ -273,18 +274,6 @@ export class SheetView {
       return;
     }
     this.ahead.add(id);
-    if (this.aheadScheduled) return;
-    this.aheadScheduled = true;
-    const next = () => {
-      for (const i of [...this.ahead].slice(0, AHEAD_BATCH)) {
-        this.ahead.delete(i);
-        const s = this.slots.get(i);
-        if (s?.near && (s.html === undefined || s.stale)) this.renderCell(i);
-      }
-      if (this.ahead.size) setTimeout(next, 0);
-      else this.aheadScheduled = false;
-    };
-    requestAnimationFrame(() => setTimeout(next, 0));
   }
 
   private newSlot(cell: Cell): Slot {
