@@ -176,6 +176,11 @@ async function boot(): Promise<void> {
     run(cmd);
   });
 
+  // The banner sticks under the toolbar, which takes a second row on narrow windows.
+  const toolbar = document.querySelector<HTMLElement>('.toolbar')!;
+  const toolbarHeight = () => document.documentElement.style.setProperty('--toolbar-h', `${toolbar.offsetHeight}px`);
+  toolbarHeight();
+  if (typeof ResizeObserver === 'function') new ResizeObserver(toolbarHeight).observe(toolbar);
   document.querySelector('.toolbar')!.addEventListener('click', (e) => {
     const cmd = (e.target as HTMLElement).closest<HTMLElement>('[data-cmd]')?.dataset.cmd as Command | undefined;
     if (cmd) run(cmd);

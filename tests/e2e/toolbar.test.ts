@@ -106,6 +106,26 @@ describe('the toolbar in Chromium', () => {
     });
   }
 
+  for (const width of [1280, 900]) {
+    it(`the banner sits under the toolbar when the sheet is scrolled, ${width} px wide`, async () => {
+      await page.setViewportSize({ width, height: 900 });
+      const gap = await page.evaluate(async () => {
+        const banner = document.querySelector<HTMLElement>('#banner')!;
+        banner.hidden = false;
+        banner.textContent = 'A message at the top of the sheet';
+        window.scrollTo(0, 1500);
+        await new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)));
+        const g = banner.getBoundingClientRect().top - document.querySelector('.toolbar')!.getBoundingClientRect().bottom;
+        banner.hidden = true;
+        banner.textContent = '';
+        window.scrollTo(0, 0);
+        return g;
+      });
+      // Stuck right under the toolbar (its bottom edge, to the pixel), not over its second row.
+      expect(Math.abs(gap)).toBeLessThan(1);
+    });
+  }
+
   it('raised no page errors', () => {
     expect(pageErrors).toEqual([]);
   });
