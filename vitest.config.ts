@@ -22,6 +22,8 @@ export default defineConfig({
         test: {
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],
+          // The app is built once for all of them.
+          globalSetup: ['tests/e2e/global-setup.ts'],
           fileParallelism: false,
           // A loaded two-core CI machine can stall a headless browser once; a second try
           // must still pass every assertion.

@@ -3,14 +3,14 @@
 // run past 100 ms and paints it while the work goes on; an ordinary edit never shows it.
 // Screenshot: test-artifacts/e2e-computing-*.png.
 
-import { rmSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { COMPUTING_AFTER_MS, COMPUTING_TEXT } from '../../cells/computing';
 import type { CalcDocument, Cell } from '../../runtime/document';
 import { emptyMeta } from '../../runtime/document';
-import { artifactsDir, buildApp, launch, serve, type Browser, type Served } from './harness';
+import { artifactsDir, type Browser, type Served } from './harness';
+import { openApp, type AppSession } from './app-session';
 
 const PANELS = 96;
 
@@ -35,11 +35,11 @@ function panelSheet(): CalcDocument {
   return { meta: { ...emptyMeta(), project: 'Computing-state probe', subject: 'Generated panel schedule' }, cells };
 }
 
-let outDir: string;
+let app: AppSession;
 let server: Served;
 let browser: Browser;
 let page: Page;
-const pageErrors: string[] = [];
+let pageErrors: string[];
 
 interface Trace {
   /** ms after the edit: when the sheet was marked computing and when unmarked (-1: never). */
@@ -100,11 +100,8 @@ async function traced(): Promise<Trace> {
 }
 
 beforeAll(async () => {
-  outDir = buildApp();
-  server = await serve(outDir);
-  browser = await launch();
-  page = browser.context.pages()[0] ?? (await browser.context.newPage());
-  page.on('pageerror', (e) => pageErrors.push(e.message));
+  app = await openApp();
+  ({ server, browser, page, pageErrors } = app);
   await page.goto(server.url);
   await page.waitForSelector('body[data-ready="true"]', { timeout: 30_000 });
   await page.evaluate(async (doc) => {
@@ -116,9 +113,7 @@ beforeAll(async () => {
 }, 180_000);
 
 afterAll(async () => {
-  await browser?.close();
-  server?.stop();
-  if (outDir) rmSync(outDir, { recursive: true, force: true });
+  await app?.close();
 });
 
 describe('the computing state in Chromium', () => {

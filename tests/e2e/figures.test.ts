@@ -2,35 +2,30 @@
 // punching perimeter as drawn measures bo, the footing is to scale, an input edit
 // re-draws the figure, and screenshots of each go to test-artifacts/ to be looked at.
 
-import { rmSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactsDir, buildApp, launch, serve, type Browser, type Served } from './harness';
+import { artifactsDir, type Browser, type Served } from './harness';
+import { openApp, type AppSession } from './app-session';
 
 const IN = 0.0254, FT = 0.3048;
 
-let outDir: string;
+let app: AppSession;
 let server: Served;
 let browser: Browser;
 let page: Page;
-const pageErrors: string[] = [];
+let pageErrors: string[];
 
 beforeAll(async () => {
-  outDir = buildApp();
-  server = await serve(outDir);
-  browser = await launch();
-  page = browser.context.pages()[0] ?? (await browser.context.newPage());
-  page.on('pageerror', (e) => pageErrors.push(e.message));
+  app = await openApp();
+  ({ server, browser, page, pageErrors } = app);
   await page.setViewportSize({ width: 1280, height: 1000 });
   await page.goto(`${server.url}#sheet=figures-demo`);
   await page.waitForSelector('body[data-ready="true"]', { timeout: 30_000 });
 }, 180_000);
 
 afterAll(async () => {
-  await browser?.close();
-  server?.stop();
-  if (outDir) rmSync(outDir, { recursive: true, force: true });
+  await app?.close();
 });
 
 /** Drawn length of a role's path in model metres: the browser's own path length over the drawing scale. */

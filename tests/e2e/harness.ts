@@ -27,6 +27,14 @@ export function buildApp(extraEnv: Record<string, string> = {}): string {
   return outDir;
 }
 
+/** Builds the record shell (the single-file app) into `outDir`: record-shell.html and .txt. */
+export function buildRecordShell(outDir: string): void {
+  const r = spawnSync(VITE, ['build', '-c', 'cells/record/vite.config.ts', '--outDir', outDir, '--emptyOutDir', '--logLevel', 'error'], {
+    cwd: ROOT, encoding: 'utf8', env: { ...process.env, VITE_CONFIG_NATIVE_IGNORE_WARNING: 'true' },
+  });
+  if (r.status !== 0) throw new Error(`record shell build failed:\n${r.stdout}\n${r.stderr}`);
+}
+
 function freePort(): Promise<number> {
   return new Promise((res, rej) => {
     const srv = createServer();

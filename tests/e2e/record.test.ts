@@ -18,6 +18,7 @@ import { exportComputed, unpack } from '../../runtime/record/index';
 import { resultText } from '../../runtime/record/static-html';
 import { hostileDocument } from '../record/fixtures';
 import { ARTIFACTS, CHROMIUM_ARGS, ROOT, artifactsDir } from './harness';
+import { appDist } from './app-session';
 
 const MAIN_TEMPLATE = join(ROOT, 'docs-templates/load-path.lt');
 let work: string;
@@ -66,12 +67,7 @@ function write(name: string, html: string): string {
 
 beforeAll(async () => {
   work = mkdtempSync(join(tmpdir(), 'loadtrace-record-'));
-  const out = join(work, 'shell');
-  const r = spawnSync(join(ROOT, 'node_modules/.bin/vite'), ['build', '--config', 'cells/record/vite.config.ts', '--outDir', out, '--logLevel', 'warn'], {
-    cwd: ROOT, encoding: 'utf8', env: { ...process.env, VITE_CONFIG_NATIVE_IGNORE_WARNING: 'true' },
-  });
-  if (r.status !== 0) throw new Error(`record shell build failed:\n${r.stdout}\n${r.stderr}`);
-  shell = readFileSync(join(out, 'record-shell.html'), 'utf8');
+  shell = readFileSync(join(appDist(), 'dist-record/record-shell.html'), 'utf8'); // built once for all e2e files
   const parsed = parse(readFileSync(MAIN_TEMPLATE, 'utf8'));
   expect(parsed.errors).toEqual([]);
   doc = parsed.doc;

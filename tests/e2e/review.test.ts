@@ -5,21 +5,21 @@
 // all. Screenshots: test-artifacts/e2e-review-*.png.
 // Loads: ASCE 7-22 §2.3.1 combination 2 (1.2D + 1.6L) on the fixture's invented values.
 
-import { spawnSync } from 'node:child_process';
-import { readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse } from '../../runtime/format/index';
-import { ROOT, artifactsDir, buildApp, launch, serve, type Browser, type Served } from './harness';
+import { artifactsDir, type Browser, type Served } from './harness';
+import { openApp, type AppSession } from './app-session';
 
 const fixture = parse(readFileSync(join(import.meta.dirname, 'fixtures/review.lt'), 'utf8'));
 
-let outDir: string;
+let app: AppSession;
 let server: Served;
 let browser: Browser;
 let page: Page;
-const pageErrors: string[] = [];
+let pageErrors: string[];
 let rev0Record = '';
 
 /** What the person sees: the window, scrolled to `at` (centred) when given. */
@@ -45,31 +45,14 @@ async function settle(p: Page = page): Promise<void> {
   });
 }
 
-/** The single-file shell a record is packed into, served where the app fetches it (cells/record/shell.ts). */
-function buildRecordShell(dir: string): void {
-  const r = spawnSync(join(ROOT, 'node_modules/.bin/vite'), ['build', '-c', 'cells/record/vite.config.ts', '--outDir', join(dir, 'dist-record'), '--emptyOutDir', '--logLevel', 'error'], {
-    cwd: ROOT, encoding: 'utf8', env: { ...process.env, VITE_CONFIG_NATIVE_IGNORE_WARNING: 'true' },
-  });
-  if (r.status !== 0) throw new Error(`record shell build failed:\n${r.stdout}\n${r.stderr}`);
-}
-
+// The shared build carries the record shell where the app fetches it (cells/record/shell.ts).
 beforeAll(async () => {
-  outDir = buildApp();
-  buildRecordShell(outDir);
-  server = await serve(outDir);
-  browser = await launch();
-  page = browser.context.pages()[0] ?? (await browser.context.newPage());
-  page.on('pageerror', (e) => pageErrors.push(e.message));
-  page.on('dialog', (d) => {
-    pageErrors.push(`dialog opened: ${d.message()}`);
-    void d.dismiss();
-  });
+  app = await openApp();
+  ({ server, browser, page, pageErrors } = app);
 }, 180_000);
 
 afterAll(async () => {
-  await browser?.close();
-  server?.stop();
-  if (outDir) rmSync(outDir, { recursive: true, force: true });
+  await app?.close();
 });
 
 describe('checker review in Chromium', () => {

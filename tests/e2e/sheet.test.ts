@@ -3,21 +3,22 @@
 // offers cell names, two tabs do not overwrite each other. Screenshots go to
 // test-artifacts/ (git-ignored) for a person to look at.
 
-import { readFileSync, rmSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse } from '../../runtime/format/index';
-import { artifactsDir, buildApp, launch, serve, type Browser, type Served } from './harness';
+import { artifactsDir, launch, type Browser, type Served } from './harness';
+import { openApp, type AppSession } from './app-session';
 
 // A small sheet of our own, so the scenarios do not depend on the demo record's numbers.
 const fixture = parse(readFileSync(join(import.meta.dirname, 'fixtures/strip.lt'), 'utf8'));
 
-let outDir: string;
+let app: AppSession;
 let server: Served;
 let browser: Browser;
 let page: Page;
-const pageErrors: string[] = [];
+let pageErrors: string[];
 
 async function shot(name: string, p: Page = page): Promise<void> {
   await p.screenshot({ path: join(artifactsDir(), `e2e-${name}.png`) });
@@ -44,21 +45,12 @@ async function setValue(id: string, value: string, p: Page = page): Promise<void
 }
 
 beforeAll(async () => {
-  outDir = buildApp();
-  server = await serve(outDir);
-  browser = await launch();
-  page = browser.context.pages()[0] ?? (await browser.context.newPage());
-  page.on('pageerror', (e) => pageErrors.push(e.message));
-  page.on('dialog', (d) => {
-    pageErrors.push(`dialog opened: ${d.message()}`);
-    void d.dismiss();
-  });
+  app = await openApp();
+  ({ server, browser, page, pageErrors } = app);
 }, 120_000);
 
 afterAll(async () => {
-  await browser?.close();
-  server?.stop();
-  if (outDir) rmSync(outDir, { recursive: true, force: true });
+  await app?.close();
 });
 
 describe('the calc sheet in Chromium', () => {

@@ -4,23 +4,23 @@
 // live region and the title; every button stays on screen and clickable, at a
 // 1280 px and a 900 px wide window. Screenshots: test-artifacts/e2e-toolbar-*.png.
 
-import { rmSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { COMPUTING_TEXT } from '../../cells/computing';
-import { artifactsDir, buildApp, launch, serve, type Browser, type Served } from './harness';
+import { artifactsDir, type Browser, type Served } from './harness';
+import { openApp, type AppSession } from './app-session';
 
 // The warning main.ts shows when IndexedDB is missing, and a longer one of our own.
 const LONG = 'This browser cannot save (IndexedDB unavailable): changes last until the page closes.';
 const LONGER = `${LONG} ${LONG}`;
 const STATUSES = ['Saving…', COMPUTING_TEXT, 'Saved', 'Display units: SI', LONG, LONGER];
 
-let outDir: string;
+let app: AppSession;
 let server: Served;
 let browser: Browser;
 let page: Page;
-const pageErrors: string[] = [];
+let pageErrors: string[];
 
 interface Layout {
   toolbarHeight: number;
@@ -63,19 +63,14 @@ async function unusableButtons(): Promise<string[]> {
 }
 
 beforeAll(async () => {
-  outDir = buildApp();
-  server = await serve(outDir);
-  browser = await launch();
-  page = browser.context.pages()[0] ?? (await browser.context.newPage());
-  page.on('pageerror', (e) => pageErrors.push(e.message));
+  app = await openApp();
+  ({ server, browser, page, pageErrors } = app);
   await page.goto(server.url);
   await page.waitForSelector('body[data-ready="true"]', { timeout: 30_000 });
 }, 120_000);
 
 afterAll(async () => {
-  await browser?.close();
-  server?.stop();
-  if (outDir) rmSync(outDir, { recursive: true, force: true });
+  await app?.close();
 });
 
 describe('the toolbar in Chromium', () => {
