@@ -87,6 +87,7 @@ export function inlineAll(): Plugin {
       if (!html || html.type !== 'asset') return;
       let page = String(html.source);
       const scripts: string[] = [];
+      const styles: string[] = [];
       for (const [name, file] of Object.entries(bundle)) {
         if (file.type === 'chunk') {
           const tag = new RegExp(`<script\\b[^>]*\\bsrc=["'][^"']*${escapeRe(name)}["'][^>]*></script>\\s*`);
@@ -101,13 +102,17 @@ export function inlineAll(): Plugin {
           scripts.push(`<script type="module">${LOADER}</script>`);
           delete bundle[name];
         } else if (name.endsWith('.css')) {
-          const tag = new RegExp(`<link\\b[^>]*\\bhref=["'][^"']*${escapeRe(name)}["'][^>]*>`);
-          page = page.replace(tag, () => `<style>${String(file.source).replace(/<\/(style)/gi, '<\\/$1')}</style>`);
+          // At the end of the body, not in the head: the app's styles (KaTeX with its fonts,
+          // ~0.4 MB) are not needed by the static rendering, which then paints without
+          // waiting for them (~150 ms sooner); the app runs after the whole page is parsed.
+          const tag = new RegExp(`<link\\b[^>]*\\bhref=["'][^"']*${escapeRe(name)}["'][^>]*>\\s*`);
+          page = page.replace(tag, '');
+          styles.push(`<style>${String(file.source).replace(/<\/(style)/gi, '<\\/$1')}</style>`);
           delete bundle[name];
         }
       }
       page = page.replace(/<link\b[^>]*rel=["']modulepreload["'][^>]*>\s*/g, '');
-      page = page.replace(/<\/body>/i, () => `${scripts.join('\n')}\n</body>`);
+      page = page.replace(/<\/body>/i, () => `${[...styles, ...scripts].join('\n')}\n</body>`);
       delete bundle[html.fileName];
       this.emitFile({ type: 'asset', fileName: 'record-shell.html', source: page });
       // The same bytes under a name no dev server rewrites (it would inject its client into .html).
