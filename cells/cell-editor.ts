@@ -113,7 +113,8 @@ export class CellEditor {
       const plain = document.createElement('textarea');
       plain.className = 'src-plain';
       plain.value = cellSource(cell);
-      plain.rows = Math.min(12, plain.value.split('\n').length + 1);
+      // As tall as the editor that replaces it: a formula is one line, a note gets room to grow.
+      plain.rows = Math.min(12, plain.value.split('\n').length + (cell.kind === 'note' ? 1 : 0));
       plain.spellcheck = false;
       plain.setAttribute('aria-label', label);
       plain.addEventListener('input', () => this.schedule(plain.value));
