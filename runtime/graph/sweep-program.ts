@@ -11,6 +11,7 @@ import type { SweepResult, SweepSeries } from '../figures/spec';
 import { sameDims } from '../units/dimension';
 import type { CellProgram } from './cell-program';
 import { outcomeOf, WhatIf, type WhatIfGraph } from './what-if';
+import { Pacer } from './pacer';
 
 export const DEFAULT_STEPS = 20;
 export const MAX_STEPS = 200;
@@ -78,10 +79,15 @@ export function sweepProgram(cell: SweepCell, lookup: (name: string) => SweepCel
     reads,
     clauses: [],
     unit: '',
-    definition: (current: unknown): SweepResult => {
+    definition: async (current: unknown): Promise<SweepResult> => {
       const w = new WhatIf(graph, input.id);
       const ids = outs.map((o) => o.info.id);
-      const points = xs.map((x) => w.at(x, ids));
+      // Each point runs the calc again: a sweep of heavy cells (plate solves) yields to the
+      // page between slices rather than holding it for the whole sweep.
+      const pacer = new Pacer();
+      pacer.begin();
+      const points: ReturnType<WhatIf['at']>[] = [];
+      for (const x of xs) points.push(await pacer.pace(() => w.at(x, ids)));
       // Programs as they are now (a display unit may have changed since this sweep compiled).
       const now = (id: string, was?: CellProgram) => graph.program(id) ?? was;
       const series = outs.map((o, k) => seriesOf(o.name, { ...o.info, program: now(o.info.id, o.info.program) },

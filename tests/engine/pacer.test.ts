@@ -4,6 +4,7 @@
 
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { setInputValue } from '../../runtime/edit';
+import { createEngine } from '../../runtime/engine';
 import { Pacer, SLICE_MS } from '../../runtime/graph/pacer';
 import type { LibFunction } from '../../runtime/library/types';
 import { doc, formula, input, run } from './helpers';
@@ -106,5 +107,31 @@ describe('engine with a long recompute', () => {
     log.calls = 0;
     engine.update(setInputValue(engine.doc, d.cells[0].id, '2'));
     expect(await turn().then(() => log.calls)).toBe(10);
+  });
+});
+
+describe('a sweep of heavy cells', () => {
+  it('yields to other tasks between slices of its points, and every point is still computed', async () => {
+    // 12 points, each running slow() once at 15 ms of the fake clock: 180 ms in all.
+    const { fn, log } = costly(15);
+    const d = doc(input('a', '1'), formula('y', 'slow(a) * 2'));
+    d.cells.push({ kind: 'sweep', id: 'w', input: 'a', from: '1', to: '12', steps: 11, outputs: ['y'] });
+    fakeClock();
+    const engine = createEngine(d, { functions: [fn] });
+    let turns = 0;
+    let ticking = true;
+    const tick = () => {
+      turns++;
+      if (ticking) setImmediate(tick);
+    };
+    setImmediate(tick);
+    await engine.settled();
+    ticking = false;
+    const sweep = engine.state('w')!.sweep!;
+    expect(sweep.series[0].values).toEqual(Array.from({ length: 12 }, (_, i) => 2 * (i + 1))); // y = 2a at a = 1…12 (arithmetic)
+    expect(log.calls).toBeGreaterThanOrEqual(13); // the cell y itself, then the 12 points
+    // 40 ms slices of 15 ms points: the page had turns while the sweep ran
+    expect(turns).toBeGreaterThanOrEqual(3);
+    engine.dispose();
   });
 });
