@@ -8,9 +8,7 @@ import type { CalcDocument, Cell } from '../document';
 import { cellName } from '../document';
 import type { CellState, Engine, WhatIfOutcome } from '../engine-types';
 import { CellError } from '../formula/cell-error';
-import type { CompileScope, NameInfo } from '../formula/compile';
 import { structuralProblem } from '../formula/compile-check';
-import { columnOf } from '../formula/parse';
 import { nameProblem } from '../formula/names';
 import { loopMessages } from './cycles';
 import { ReadersIndex } from './readers';
@@ -24,10 +22,11 @@ import { buildState, sameState } from './cell-state';
 // Figure and sweep kinds (runtime/figures): their programs and the what-if evaluator.
 import { figureLibrary } from '../figures/functions';
 import { figureProgram } from './figure-program';
-import { sweepProgram, type SweepCellInfo } from './sweep-program';
-import { outcomeOf, WhatIf, type WhatIfGraph } from './what-if';
+import { sweepProgram } from './sweep-program';
+import { whatIfRun, type WhatIfGraph } from './what-if';
 import { Pacer } from './pacer';
 import { computeAfterThisTask } from './scheduling';
+import { CellNames } from './cell-names';
 
 export interface EngineOptions {
   functions?: readonly LibFunction[];
@@ -56,6 +55,8 @@ class DocEngine implements Engine {
   private readonly module: Module = this.runtime.module();
   private readonly slots = new Map<string, Slot>();
   private owners = new Map<string, string[]>();
+  /** What each source sees of the other cells by name (see cell-names.ts). */
+  private readonly names = new CellNames(() => this.owners, (id) => this.slots.get(id), () => this.doc.cells);
   private readonly functions: ReadonlyMap<string, LibFunction>;
   private readonly functionNames: ReadonlySet<string>;
   /** The library plus the figure functions, which only figure cells may call. */
@@ -293,7 +294,7 @@ class DocEngine implements Engine {
       if (problem) return fail(new CellError('syntax', problem));
       const owners = this.owners.get(name) ?? [];
       if (owners.length > 1) {
-        const others = owners.filter((o) => o !== cell.id).map((o) => this.describeCell(o));
+        const others = owners.filter((o) => o !== cell.id).map((o) => this.names.describe(o));
         return fail(new CellError('duplicate-name', `the name ${name} is also used by ${others.join(' and ')}; each name must be unique`));
       }
     }
@@ -307,53 +308,16 @@ class DocEngine implements Engine {
       case 'input':
         return inputProgram(cell, slot.program);
       case 'formula':
-        return formulaProgram(cell, this.scopeFor(cell.expr));
+        return formulaProgram(cell, this.names.scopeFor(cell.expr, this.functions));
       case 'check':
-        return checkProgram(cell, this.scopeFor(cell.expr), (node) => this.unitOfNode(node), this.system ?? sheetSystem(this.doc));
+        return checkProgram(cell, this.names.scopeFor(cell.expr, this.functions), (node) => this.names.unitOfNode(node), this.system ?? sheetSystem(this.doc));
       case 'figure':
-        return figureProgram(cell, this.scopeFor(cell.expr, this.figureFunctions), (n) => this.unitOfName(n));
+        return figureProgram(cell, this.names.scopeFor(cell.expr, this.figureFunctions), (n) => this.names.unitOfName(n));
       case 'sweep':
-        return sweepProgram(cell, (n) => this.sweepInfo(n), this.whatIfGraph);
+        return sweepProgram(cell, (n) => this.names.sweepInfo(n), this.whatIfGraph);
       default:
         return fail(new CellError('not-allowed', 'this cell does not compute'));
     }
-  }
-
-  private describeCell(id: string): string {
-    const i = this.doc.cells.findIndex((c) => c.id === id);
-    const cell = this.doc.cells[i];
-    return cell?.label ? `cell ${i + 1} (${cell.label})` : `cell ${i + 1}`;
-  }
-
-  private scopeFor(source: string, functions: ReadonlyMap<string, LibFunction> = this.functions): CompileScope {
-    return {
-      functions,
-      isCell: (name) => this.owners.has(name),
-      names: () => this.owners.keys(),
-      lookup: (name): NameInfo | undefined => {
-        const owners = this.owners.get(name);
-        if (!owners) return undefined;
-        const slot = this.slots.get(owners[0])!;
-        const type = slot.program?.type;
-        if (!type || owners.length > 1) {
-          throw new CellError('upstream', `reads ${name}, which has an error`, columnOf(source, name), name);
-        }
-        return { key: slot.cell.id, type, unwrap: slot.cell.kind === 'check' };
-      },
-    };
-  }
-
-  /** Display unit of the cell of this name ('' when none or unknown). */
-  private unitOfName(name: string): string {
-    const owner = this.owners.get(name)?.[0];
-    return owner ? this.slots.get(owner)?.program?.unit ?? '' : '';
-  }
-
-  private sweepInfo(name: string): SweepCellInfo | undefined {
-    const owners = this.owners.get(name);
-    if (!owners || owners.length !== 1) return undefined;
-    const slot = this.slots.get(owners[0])!;
-    return { id: slot.cell.id, kind: slot.cell.kind, program: slot.program };
   }
 
   private readonly whatIfGraph: WhatIfGraph = {
@@ -365,26 +329,7 @@ class DocEngine implements Engine {
   };
 
   whatIf(input: string, values: readonly (number | string | boolean)[], outputs: readonly string[]): Record<string, WhatIfOutcome>[] {
-    const inp = this.sweepInfo(input);
-    if (!inp || inp.kind !== 'input') throw new Error(`"${input}" is not the name of an input cell`);
-    const outs = outputs.map((name) => {
-      const info = this.sweepInfo(name);
-      if (!info) throw new Error(`"${name}" is not the name of any cell`);
-      return { name, info };
-    });
-    const w = new WhatIf(this.whatIfGraph, inp.id);
-    return values.map((v) => {
-      const got = w.at(v, outs.map((o) => o.info.id));
-      return Object.fromEntries(outs.map((o, k) => [o.name, outcomeOf(got[k], o.info.kind === 'check')]));
-    });
-  }
-
-  /** Display unit for one side of a check: the unit of the cell it names, if it is a bare name. */
-  private unitOfNode(node: any): string {
-    while (node?.type === 'ParenthesisNode') node = node.content;
-    if (node?.type !== 'SymbolNode') return '';
-    const owner = this.owners.get(node.name)?.[0];
-    return owner ? this.slots.get(owner)?.program?.unit ?? '' : '';
+    return whatIfRun(this.whatIfGraph, (n) => this.names.sweepInfo(n), input, values, outputs);
   }
 
   // ---- the reactive graph ------------------------------------------------

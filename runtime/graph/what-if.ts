@@ -7,6 +7,7 @@
 import type { WhatIfOutcome } from '../engine-types';
 import type { CellProgram, CheckResult } from './cell-program';
 import { outsideLimits } from '../formula/input-value';
+import type { SweepCellInfo } from './sweep-program';
 
 /** What the evaluator needs from the engine: programs by cell id, and names. */
 export interface WhatIfGraph {
@@ -98,4 +99,29 @@ export function outcomeOf(o: Outcome, isCheck: boolean): WhatIfOutcome {
     return { value: r.value, pass: r.pass };
   }
   return { value: o.value as number | string | boolean };
+}
+
+/**
+ * engine.whatIf: each value of the input `input` in turn, the outcome of each named
+ * output; the document and every cell state stay as they are.
+ */
+export function whatIfRun(
+  graph: WhatIfGraph,
+  cellNamed: (name: string) => SweepCellInfo | undefined,
+  input: string,
+  values: readonly (number | string | boolean)[],
+  outputs: readonly string[],
+): Record<string, WhatIfOutcome>[] {
+  const inp = cellNamed(input);
+  if (!inp || inp.kind !== 'input') throw new Error(`"${input}" is not the name of an input cell`);
+  const outs = outputs.map((name) => {
+    const info = cellNamed(name);
+    if (!info) throw new Error(`"${name}" is not the name of any cell`);
+    return { name, info };
+  });
+  const w = new WhatIf(graph, inp.id);
+  return values.map((v) => {
+    const got = w.at(v, outs.map((o) => o.info.id));
+    return Object.fromEntries(outs.map((o, k) => [o.name, outcomeOf(got[k], o.info.kind === 'check')]));
+  });
 }

@@ -1,0 +1,76 @@
+// What a cell's source can see of the others by name: the scope its formula compiles
+// in (whose value of which type, an upstream error if the named cell has one), the
+// display unit of a named cell (for checks and figure labels), what a sweep needs of
+// the cells it varies and plots, and how a message names a cell.
+
+import type { Cell } from '../document';
+import { CellError } from '../formula/cell-error';
+import type { CompileScope, NameInfo } from '../formula/compile';
+import { columnOf } from '../formula/parse';
+import type { LibFunction } from '../library/types';
+import type { CellProgram } from './cell-program';
+import type { SweepCellInfo } from './sweep-program';
+
+/** What the names need of a computing cell. */
+export interface NamedSlot {
+  cell: Cell;
+  program?: CellProgram;
+}
+
+export class CellNames {
+  constructor(
+    /** name → ids of the cells of that name (more than one is an error at each). */
+    private readonly owners: () => ReadonlyMap<string, string[]>,
+    private readonly slot: (id: string) => NamedSlot | undefined,
+    private readonly cells: () => readonly Cell[],
+  ) {}
+
+  /** A cell as a message names it: its place in the sheet, and its label. */
+  describe(id: string): string {
+    const cells = this.cells();
+    const i = cells.findIndex((c) => c.id === id);
+    return cells[i]?.label ? `cell ${i + 1} (${cells[i].label})` : `cell ${i + 1}`;
+  }
+
+  private only(name: string): NamedSlot | undefined {
+    const owners = this.owners().get(name);
+    return owners?.length === 1 ? this.slot(owners[0]) : undefined;
+  }
+
+  /** The scope a formula in `source` compiles in. */
+  scopeFor(source: string, functions: ReadonlyMap<string, LibFunction>): CompileScope {
+    return {
+      functions,
+      isCell: (name) => this.owners().has(name),
+      names: () => this.owners().keys(),
+      lookup: (name): NameInfo | undefined => {
+        const owners = this.owners().get(name);
+        if (!owners) return undefined;
+        const slot = this.slot(owners[0])!;
+        const type = slot.program?.type;
+        if (!type || owners.length > 1) {
+          throw new CellError('upstream', `reads ${name}, which has an error`, columnOf(source, name), name);
+        }
+        return { key: slot.cell.id, type, unwrap: slot.cell.kind === 'check' };
+      },
+    };
+  }
+
+  /** Display unit of the cell of this name ('' when none or unknown). */
+  unitOfName(name: string): string {
+    const owner = this.owners().get(name)?.[0];
+    return owner ? this.slot(owner)?.program?.unit ?? '' : '';
+  }
+
+  /** Display unit for one side of a check (a mathjs node): the unit of the cell it names, if it is a bare name. */
+  unitOfNode(node: any): string {
+    while (node?.type === 'ParenthesisNode') node = node.content;
+    return node?.type === 'SymbolNode' ? this.unitOfName(node.name) : '';
+  }
+
+  /** What a sweep needs of a cell it names (none when the name is missing or taken twice). */
+  sweepInfo(name: string): SweepCellInfo | undefined {
+    const slot = this.only(name);
+    return slot && { id: slot.cell.id, kind: slot.cell.kind, program: slot.program };
+  }
+}
