@@ -5,13 +5,14 @@
 // memory. Printing typesets every cell.
 
 import DOMPurify from 'dompurify';
-import type { CalcDocument, Cell, CheckCell } from '../runtime/document';
+import type { CalcDocument, Cell } from '../runtime/document';
 import { cellName } from '../runtime/document';
 import type { Engine } from '../runtime/engine-types';
+import { samePlaces } from '../runtime/graph/doc-diff';
 import { escapeHtml, type BindContext } from './kind';
 import { bindCell, cellSource, numberCells, renderView } from './registry';
-import { summaryHtml, summaryRows } from './summary';
-import { writeCellHtml } from './step-patch';
+import { writeSummary } from './summary';
+import { writeCellContent } from './step-patch';
 import { LaterBatches } from './later-batches';
 
 export interface SheetEvents {
@@ -106,7 +107,7 @@ export class SheetView {
   sync(doc: CalcDocument): void {
     const prev = this.doc;
     this.doc = doc;
-    if (prev.cells.length > 0 && sameOrder(prev.cells, doc.cells)) {
+    if (prev.cells.length > 0 && samePlaces(prev.cells, doc.cells) !== undefined) {
       this.syncContent(doc);
       return;
     }
@@ -330,28 +331,16 @@ export class SheetView {
    * again to restore it.
    */
   private writeContent(slot: Slot, html: string): void {
-    const active = document.activeElement;
-    if (!(active instanceof HTMLElement) || !slot.content.contains(active)) {
-      writeCellHtml(slot.content, html); // unchanged hand-calc steps keep their nodes
-      return;
-    }
-    const fresh = document.createElement('template');
-    fresh.innerHTML = html;
-    if (!patchAround(slot.content, fresh.content, active)) {
+    writeCellContent(slot.content, html, () => {
       this.restoring = true; // a field swapped for another kind: let it go without committing
       slot.content.innerHTML = html;
       this.restoring = false;
-    }
+    });
   }
 
   private renderSummary(): void {
-    if (!this.engine) return;
-    const checks = this.doc.cells.filter((c): c is CheckCell => c.kind === 'check');
-    const html = summaryHtml(summaryRows(checks, (id) => this.engine!.state(id), this.numbers));
-    if (this.summaryHost.dataset.html !== html) {
-      this.summaryHost.innerHTML = html;
-      this.summaryHost.dataset.html = html;
-    }
+    const engine = this.engine;
+    if (engine) writeSummary(this.summaryHost, this.doc.cells, (id) => engine.state(id), this.numbers);
   }
 
   private cellIdOf(target: EventTarget | null): string | undefined {
@@ -399,50 +388,6 @@ export class SheetView {
     if (id !== this.selected) this.events.select(id);
     else if (target.closest('[data-act="open"]') && !target.closest('.cell-editor')) this.events.open(id);
   }
-}
-
-/**
- * Makes `target` hold `source`'s nodes, except that the element `keep` (inside target)
- * stays where it is; the node standing in its place in `source` is dropped. Returns
- * false when the two trees differ in shape along the way to `keep`.
- */
-function patchAround(target: Element, source: ParentNode, keep: Element): boolean {
-  let old: Element = keep;
-  const path: Element[] = [];
-  while (old !== target) {
-    path.unshift(old);
-    old = old.parentElement!;
-  }
-  let oldParent: Element = target;
-  let newParent: ParentNode = source;
-  for (const oldChild of path) {
-    const index = Array.prototype.indexOf.call(oldParent.children, oldChild);
-    const newChild = newParent.children[index];
-    if (!newChild || newChild.tagName !== oldChild.tagName || newChild.className !== oldChild.className) return false;
-    // Replace the siblings before and after the kept path with the new ones.
-    while (oldChild.previousSibling) oldChild.previousSibling.remove();
-    while (oldChild.nextSibling) oldChild.nextSibling.remove();
-    const before: ChildNode[] = [];
-    for (let n = newParent.firstChild; n && n !== newChild; n = n.nextSibling) before.push(n);
-    oldChild.before(...before);
-    while (newChild.nextSibling) oldParent.append(newChild.nextSibling);
-    if (oldChild === keep) {
-      for (const attr of Array.from(newChild.attributes)) {
-        if (attr.name !== 'value' && oldChild.getAttribute(attr.name) !== attr.value) oldChild.setAttribute(attr.name, attr.value);
-      }
-      return true;
-    }
-    oldParent = oldChild;
-    newParent = newChild;
-  }
-  return true;
-}
-
-/** Same ids in the same order (cell contents may differ). */
-function sameOrder(a: readonly Cell[], b: readonly Cell[]): boolean {
-  if (a.length !== b.length) return false;
-  for (let i = 0; i < a.length; i++) if (a[i].id !== b[i].id) return false;
-  return true;
 }
 
 /** A cell before it is typeset: its source as text, readable and searchable at once. */

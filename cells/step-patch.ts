@@ -1,6 +1,7 @@
 // Writing a re-typeset cell into the page, keeping the hand-calc steps whose HTML did
-// not change. On a value edit the symbolic step (symbol = formula) stays the same, and
-// KaTeX HTML is costly to parse again: reusing its nodes halves the HTML parsed.
+// not change (on a value edit the symbolic step, symbol = formula, stays the same, and
+// KaTeX HTML is costly to parse again: reusing its nodes halves the HTML parsed), and
+// keeping a focused value field where it is, with what is typed in it.
 
 const STEP_OPEN = '<span class="hc-step"';
 /** The HTML each step on the page was made from. */
@@ -54,4 +55,56 @@ export function writeCellHtml(target: Element, html: string): void {
   for (const slot of target.querySelectorAll<HTMLElement>('lt-keep')) slot.replaceWith(kept[Number(slot.dataset.i)]);
   const now = target.querySelectorAll('.hc-step');
   ranges.forEach((r, i) => now[i] && made.set(now[i], html.slice(r.start, r.end)));
+}
+
+/**
+ * Writes a cell's new HTML into `content`. A focused field inside keeps its place; when
+ * the new HTML has another shape around it, `replaceAll` writes everything anew.
+ */
+export function writeCellContent(content: Element, html: string, replaceAll: () => void): void {
+  const active = document.activeElement;
+  if (!(active instanceof HTMLElement) || !content.contains(active)) {
+    writeCellHtml(content, html);
+    return;
+  }
+  const fresh = document.createElement('template');
+  fresh.innerHTML = html;
+  if (!patchAround(content, fresh.content, active)) replaceAll();
+}
+
+/**
+ * Makes `target` hold `source`'s nodes, except that the element `keep` (inside target)
+ * stays where it is; the node standing in its place in `source` is dropped. Returns
+ * false when the two trees differ in shape along the way to `keep`.
+ */
+function patchAround(target: Element, source: ParentNode, keep: Element): boolean {
+  let old: Element = keep;
+  const path: Element[] = [];
+  while (old !== target) {
+    path.unshift(old);
+    old = old.parentElement!;
+  }
+  let oldParent: Element = target;
+  let newParent: ParentNode = source;
+  for (const oldChild of path) {
+    const index = Array.prototype.indexOf.call(oldParent.children, oldChild);
+    const newChild = newParent.children[index];
+    if (!newChild || newChild.tagName !== oldChild.tagName || newChild.className !== oldChild.className) return false;
+    // Replace the siblings before and after the kept path with the new ones.
+    while (oldChild.previousSibling) oldChild.previousSibling.remove();
+    while (oldChild.nextSibling) oldChild.nextSibling.remove();
+    const before: ChildNode[] = [];
+    for (let n = newParent.firstChild; n && n !== newChild; n = n.nextSibling) before.push(n);
+    oldChild.before(...before);
+    while (newChild.nextSibling) oldParent.append(newChild.nextSibling);
+    if (oldChild === keep) {
+      for (const attr of Array.from(newChild.attributes)) {
+        if (attr.name !== 'value' && oldChild.getAttribute(attr.name) !== attr.value) oldChild.setAttribute(attr.name, attr.value);
+      }
+      return true;
+    }
+    oldParent = oldChild;
+    newParent = newChild;
+  }
+  return true;
 }

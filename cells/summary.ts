@@ -1,7 +1,7 @@
 // The check summary near the top of the sheet: every check with its ratio, the
 // governing ones first (failures, then the highest ratios), each a link to its cell.
 
-import type { CheckCell } from '../runtime/document';
+import type { Cell, CheckCell } from '../runtime/document';
 import type { CellState } from '../runtime/engine-types';
 import { ratioText } from '../runtime/handcalc/index';
 import { escapeHtml } from './kind';
@@ -57,4 +57,17 @@ export function summaryHtml(rows: SummaryRow[]): string {
       glyph}</span> ${word}</span>${ratio}<span class="sum-no">${escapeHtml(r.number)}</span><span class="sum-title">${escapeHtml(r.title)}</span></a></li>`;
   });
   return `<h2 class="summary-head">Summary of checks <span class="summary-count">${escapeHtml(head)}</span></h2><ol class="summary-list">${items.join('')}</ol>`;
+}
+
+/** Writes the summary of `cells`' checks into `host`, when it reads differently from what is there. */
+export function writeSummary(
+  host: HTMLElement,
+  cells: readonly Cell[],
+  state: (id: string) => CellState | undefined,
+  numbers: ReadonlyMap<string, string>,
+): void {
+  const html = summaryHtml(summaryRows(cells.filter((c): c is CheckCell => c.kind === 'check'), state, numbers));
+  if (host.dataset.html === html) return;
+  host.innerHTML = html;
+  host.dataset.html = html;
 }
