@@ -5,15 +5,18 @@
 //   first    the first real uses: parsing formulas and reading the units of inputs as they
 //            are written in docs-templates/load-path.lt
 // Prints the median of each over RUNS processes (default 15), and the machine's load.
+// A/B on a loaded machine: MATH=path/a/math.ts,path/b/math.ts alternates the processes
+// between two copies of runtime/units (each with its dimension.ts beside it).
 
 import { spawnSync } from 'node:child_process';
-import { loadavg } from 'node:os';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { availableParallelism, loadavg } from 'node:os';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
 
 const RUNS = Number(process.env.RUNS ?? 15);
 const HERE = fileURLToPath(import.meta.url);
 const ROOT = join(dirname(HERE), '..');
+const MODULES = (process.env.MATH ?? join(ROOT, 'runtime/units/math.ts')).split(',').map((p) => resolve(p));
 
 // Entry points math.ts may import, loaded before it so `build` holds only the instance.
 const MATHJS_ENTRIES = ['mathjs', 'mathjs/number'];
@@ -38,13 +41,14 @@ interface Sample {
   first: number;
 }
 
-async function child(): Promise<void> {
+async function child(mathModule: string): Promise<void> {
   const t0 = performance.now();
   for (const entry of MATHJS_ENTRIES) await import(entry);
   const t1 = performance.now();
-  const { math } = await import('../runtime/units/math');
+  const { math } = (await import(pathToFileURL(mathModule).href)) as typeof import('../runtime/units/math');
   const t2 = performance.now();
-  const { isUnitName, unitInfo } = await import('../runtime/units/dimension');
+  const dimension = pathToFileURL(join(dirname(mathModule), 'dimension.ts')).href;
+  const { isUnitName, unitInfo } = (await import(dimension)) as typeof import('../runtime/units/dimension');
   const t3 = performance.now();
   let sink = 0;
   for (const f of FORMULAS) sink += JSON.stringify(math.parse(f)).length;
@@ -63,28 +67,35 @@ async function child(): Promise<void> {
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
-function parent(): void {
-  const samples: Sample[] = [];
-  const load = [loadavg()[0]];
-  // One warm-up process (tsx fills its transform cache), then RUNS measured ones.
-  for (let i = 0; i < RUNS + 1; i++) {
-    const out = spawnSync(process.execPath, ['--import', 'tsx', HERE, '--child'], { cwd: ROOT, encoding: 'utf8' });
-    if (out.status !== 0) throw new Error(`child failed:\n${out.stderr}`);
-    if (i > 0) samples.push(JSON.parse(out.stdout) as Sample);
-    load.push(loadavg()[0]);
-  }
-  const row = (label: string, key: keyof Sample) => {
-    const xs = samples.map((s) => s[key]);
-    console.log(`${label.padEnd(34)} ${median(xs).toFixed(1).padStart(7)} ms   (min ${Math.min(...xs).toFixed(1)}, max ${Math.max(...xs).toFixed(1)})`);
-  };
-  console.log(`mathjs instance start-up, median of ${RUNS} fresh Node processes`);
-  row('import mathjs entries', 'import');
-  row('build the instance (math.ts)', 'build');
-  row('first uses (parse, units)', 'first');
-  const total = samples.map((s) => s.build + s.first);
-  console.log(`${'build + first uses'.padEnd(34)} ${median(total).toFixed(1).padStart(7)} ms`);
-  console.log(`load average (1 min) during the runs: ${Math.min(...load).toFixed(2)}–${Math.max(...load).toFixed(2)} on this machine`);
+function run(mathModule: string): Sample {
+  const out = spawnSync(process.execPath, ['--import', 'tsx', HERE, '--child', mathModule], { cwd: ROOT, encoding: 'utf8' });
+  if (out.status !== 0) throw new Error(`child failed:\n${out.stderr}`);
+  return JSON.parse(out.stdout) as Sample;
 }
 
-if (process.argv.includes('--child')) await child();
+function parent(): void {
+  const samples = MODULES.map(() => [] as Sample[]);
+  const load = [loadavg()[0]];
+  // One warm-up process each (tsx fills its transform cache), then RUNS measured ones,
+  // taking turns so that load from other work falls on every variant alike.
+  MODULES.forEach((m) => run(m));
+  for (let i = 0; i < RUNS; i++) {
+    MODULES.forEach((m, k) => samples[k].push(run(m)));
+    load.push(loadavg()[0]);
+  }
+  console.log(`mathjs instance start-up, median of ${RUNS} fresh Node processes each`);
+  MODULES.forEach((m, k) => {
+    if (MODULES.length > 1) console.log(`\n${m}`);
+    const row = (label: string, xs: number[]) =>
+      console.log(`${label.padEnd(34)} ${median(xs).toFixed(1).padStart(7)} ms   (min ${Math.min(...xs).toFixed(1)}, max ${Math.max(...xs).toFixed(1)})`);
+    row('import mathjs entries', samples[k].map((s) => s.import));
+    row('build the instance (math.ts)', samples[k].map((s) => s.build));
+    row('first uses (parse, units)', samples[k].map((s) => s.first));
+    row('build + first uses', samples[k].map((s) => s.build + s.first));
+  });
+  console.log(`\nload average (1 min) during the runs: ${Math.min(...load).toFixed(2)}–${Math.max(...load).toFixed(2)} on ${availableParallelism()} cores`);
+}
+
+const at = process.argv.indexOf('--child');
+if (at >= 0) await child(process.argv[at + 1]);
 else parent();
