@@ -2,7 +2,7 @@
 // editor code travels in the record as its own packed block, unpacked and run as an
 // inline script the record's CSP lists by hash, the first time a source is edited.
 
-import { EDITOR_GLOBAL, EDITOR_ID, EDITOR_RUN_ID, unpackApp } from '../../runtime/record/app-payload';
+import { EDITOR_GLOBAL, EDITOR_ID, EDITOR_RUN_ID, PART_OF, unpackApp } from '../../runtime/record/app-payload';
 import type { SourceEditorClass } from '../source-editor-load';
 
 let loading: Promise<SourceEditorClass> | undefined;
@@ -14,7 +14,8 @@ async function unpackAndRun(): Promise<SourceEditorClass> {
   if (!block) throw new Error('this record carries no editor code');
   const run = document.createElement('script');
   run.id = EDITOR_RUN_ID;
-  run.textContent = await unpackApp(block.textContent ?? '');
+  const parts = [block, ...document.querySelectorAll(`script[${PART_OF}="${EDITOR_ID}"]`)];
+  run.textContent = await unpackApp(parts.map((el) => el.textContent?.trim() ?? '').join(''));
   document.body.append(run);
   const loaded = (globalThis as Record<string, unknown>)[EDITOR_GLOBAL] as { SourceEditor?: SourceEditorClass } | undefined;
   if (!loaded?.SourceEditor) throw new Error('the editor code in this record did not start');

@@ -2,13 +2,15 @@
 // runtime/record/app-payload.ts) with DecompressionStream, a web standard, and runs it
 // as an inline classic script; on failure the static rendering stays in view.
 
-import { APP_ID, RUN_ID } from '../../runtime/record/app-payload';
+import { APP_ID, PART_OF, RUN_ID } from '../../runtime/record/app-payload';
 
 /** Runs the app; on failure leaves the static rendering in view and says why. */
 export const LOADER = `
 try {
   performance.mark('loadtrace:loader');
-  const packed = document.getElementById('${APP_ID}').textContent.trim();
+  // The block and its later parts, in page order (runtime/record/app-payload.ts).
+  const packed = [document.getElementById('${APP_ID}'), ...document.querySelectorAll('script[${PART_OF}="${APP_ID}"]')]
+    .map((el) => el.textContent.trim()).join('');
   // Native base64 where the browser has it; else a loop in a function (top-level code is not optimised).
   const decode = (text) => {
     const bin = atob(text);

@@ -4,7 +4,7 @@
 import { resolve } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { build, type Plugin, type Rolldown } from 'vite';
-import { APP_ID, APP_TYPE, EDITOR_GLOBAL, EDITOR_ID } from '../../runtime/record/app-payload';
+import { APP_ID, APP_TYPE, EDITOR_GLOBAL, EDITOR_ID, packedElements } from '../../runtime/record/app-payload';
 import { LOADER } from './loader';
 
 /** KaTeX's CSS lists woff2, woff and ttf for every font; browsers all take woff2, so the others go. */
@@ -97,8 +97,8 @@ export function inlineAll(): Plugin {
           // module added by script under a hash-only CSP; a classic script it runs every time).
           if (/\bimport\.meta\b|^(?:import|export)\s*[{*"'`]/m.test(file.code)) this.error('the record bundle must be one chunk with no import/export');
           const classic = `(async () => {'use strict';\n${file.code}\n})().catch((e) => console.error('Loadtrace could not start:', e));`;
-          scripts.push(`<script type="${APP_TYPE}" id="${APP_ID}" data-encoding="gzip base64">${packCode(classic)}</script>`);
-          scripts.push(`<script type="${APP_TYPE}" id="${EDITOR_ID}" data-encoding="gzip base64">${packCode(await editorCode(root))}</script>`);
+          scripts.push(packedElements(APP_ID, APP_TYPE, packCode(classic)));
+          scripts.push(packedElements(EDITOR_ID, APP_TYPE, packCode(await editorCode(root))));
           scripts.push(`<script type="module">${LOADER}</script>`);
           delete bundle[name];
         } else if (name.endsWith('.css')) {
@@ -107,7 +107,8 @@ export function inlineAll(): Plugin {
           // waiting for them (~150 ms sooner); the app runs after the whole page is parsed.
           const tag = new RegExp(`<link\\b[^>]*\\bhref=["'][^"']*${escapeRe(name)}["'][^>]*>\\s*`);
           page = page.replace(tag, '');
-          styles.push(`<style>${String(file.source).replace(/<\/(style)/gi, '<\\/$1')}</style>`);
+          // As several style elements (each font its own): the parser reads small tokens faster.
+          for (const part of splitCss(String(file.source), CSS_PART_CHARS)) styles.push(`<style>${part.replace(/<\/(style)/gi, '<\\/$1')}</style>`);
           delete bundle[name];
         }
       }
@@ -119,6 +120,35 @@ export function inlineAll(): Plugin {
       this.emitFile({ type: 'asset', fileName: 'record-shell.txt', source: page });
     },
   };
+}
+
+/** Style elements of the app's CSS are cut at top-level rule ends once longer than this. */
+const CSS_PART_CHARS = 16_384;
+
+/**
+ * CSS cut into pieces of whole top-level rules, each cut made once a piece is at least
+ * `min` characters long (a single rule, e.g. a font with its data, may be longer). Strings
+ * and comments are skipped, so a brace in them does not count.
+ */
+export function splitCss(css: string, min: number): string[] {
+  const out: string[] = [];
+  let depth = 0;
+  let start = 0;
+  for (let i = 0; i < css.length; i++) {
+    const c = css[i];
+    if (c === '"' || c === "'") {
+      for (i++; i < css.length && css[i] !== c; i++) if (css[i] === '\\') i++;
+    } else if (c === '/' && css[i + 1] === '*') {
+      const end = css.indexOf('*/', i + 2);
+      i = end < 0 ? css.length : end + 1;
+    } else if (c === '{') depth++;
+    else if (c === '}' && depth > 0 && --depth === 0 && i + 1 - start >= min) {
+      out.push(css.slice(start, i + 1));
+      start = i + 1;
+    }
+  }
+  if (start < css.length) out.push(css.slice(start));
+  return out;
 }
 
 function escapeRe(s: string): string {
