@@ -1,7 +1,8 @@
 // `npm run bench:mathjs`: what the one mathjs instance (runtime/units/math.ts) costs at
 // start-up, in fresh Node processes (module state cannot be reset in one process):
-//   import   loading the mathjs entry points (Node loads all of them; a bundle only what is used)
-//   build    importing runtime/units/math.ts once mathjs is loaded: build() of the instance
+//   import   loading what math.ts imports: the mathjs entry points (Node loads all of them;
+//            a bundle only what is used) and trade.ts (the first TS module also warms up tsx)
+//   build    importing runtime/units/math.ts once those are loaded: build() of the instance
 //   first    the first real uses: parsing formulas and reading the units of inputs as they
 //            are written in docs-templates/load-path.lt
 // Prints the median of each over RUNS processes (default 15), and the machine's load.
@@ -44,6 +45,7 @@ interface Sample {
 async function child(mathModule: string): Promise<void> {
   const t0 = performance.now();
   for (const entry of MATHJS_ENTRIES) await import(entry);
+  await import(pathToFileURL(join(dirname(mathModule), 'trade.ts')).href);
   const t1 = performance.now();
   const { math } = (await import(pathToFileURL(mathModule).href)) as typeof import('../runtime/units/math');
   const t2 = performance.now();
@@ -88,7 +90,7 @@ function parent(): void {
     if (MODULES.length > 1) console.log(`\n${m}`);
     const row = (label: string, xs: number[]) =>
       console.log(`${label.padEnd(34)} ${median(xs).toFixed(1).padStart(7)} ms   (min ${Math.min(...xs).toFixed(1)}, max ${Math.max(...xs).toFixed(1)})`);
-    row('import mathjs entries', samples[k].map((s) => s.import));
+    row('import mathjs entries, trade.ts', samples[k].map((s) => s.import));
     row('build the instance (math.ts)', samples[k].map((s) => s.build));
     row('first uses (parse, units)', samples[k].map((s) => s.first));
     row('build + first uses', samples[k].map((s) => s.build + s.first));
