@@ -24,7 +24,8 @@ export class Autosave {
   private running = Promise.resolve();
   paused = false;
 
-  constructor(private readonly store: SheetStore, private readonly guard: TabGuard, private readonly hooks: AutosaveHooks) {
+  /** `store` may still be opening (a record page does not wait for it): the first save waits. */
+  constructor(private readonly store: SheetStore | Promise<SheetStore | undefined>, private readonly guard: TabGuard, private readonly hooks: AutosaveHooks) {
     guard.onForeignSave((n) => {
       if (n.key === this.key && n.version !== this.version) {
         this.paused = true;
@@ -64,7 +65,9 @@ export class Autosave {
     const key = this.key;
     this.running = this.running.then(async () => {
       try {
-        const out = await this.store.save(key, this.title, h, this.version, this.guard.tabId);
+        const store = await this.store;
+        if (!store) throw new Error('this browser cannot save (IndexedDB unavailable)');
+        const out = await store.save(key, this.title, h, this.version, this.guard.tabId);
         if (key !== this.key) return;
         if (out.ok) {
           this.version = out.version;

@@ -15,6 +15,7 @@ import { sheetTitle, templateByKey, templates } from './templates';
 import { loadSourceEditor } from './source-editor-load';
 import { escapeHtml } from './kind';
 import { installRecord } from './record/install';
+import { DOC_ID } from '../runtime/record/index';
 import { installReview } from './review/install';
 
 const $ = <T extends HTMLElement>(sel: string) => document.querySelector<T>(sel)!;
@@ -37,15 +38,14 @@ function fromTemplate(name: string): History {
 
 async function boot(): Promise<void> {
   const guard = new TabGuard();
-  let store: SheetStore | undefined;
-  try {
-    store = await SheetStore.open();
-  } catch {
-    store = undefined;
-  }
+  // IndexedDB takes 20–250 ms to open in a fresh profile: a record page opens its own
+  // document meanwhile, and its first save waits for the store.
+  const opening = SheetStore.open().catch(() => undefined);
+  const recordPage = document.getElementById(DOC_ID) !== null;
+  let store = recordPage ? undefined : await opening;
   const banner = $('#banner');
-  const autosave = store
-    ? new Autosave(store, guard, {
+  const autosave = store || recordPage
+    ? new Autosave(store ?? opening, guard, {
       saving: () => app.setStatus('Saving…'),
       conflict: (theirs) => showConflict(theirs),
       saved: () => app.setStatus('Saved'),
@@ -207,9 +207,15 @@ async function boot(): Promise<void> {
     if (key && key !== app.key) void autosave?.flushNow().then(() => openKey(key));
   });
 
-  if (!store) app.setStatus('This browser cannot save (IndexedDB unavailable): changes last until the page closes.');
-  const last = store ? await store.getSetting<string>('last') : undefined;
-  if (!(await records.openEmbedded())) await openKey(keyFromHash() ?? last ?? 'demo');
+  const cannotSave = () => app.setStatus('This browser cannot save (IndexedDB unavailable): changes last until the page closes.');
+  if (recordPage && (await records.openEmbedded())) {
+    store = await opening;
+    if (!store) cannotSave();
+  } else {
+    store ??= await opening;
+    if (!store) cannotSave();
+    await openKey(keyFromHash() ?? (store ? await store.getSetting<string>('last') : undefined) ?? 'demo');
+  }
   document.body.dataset.ready = 'true';
   // The source editor (CodeMirror) loads while the page is idle, so the first edit need not wait.
   const preload = () => void loadSourceEditor().catch(() => undefined);

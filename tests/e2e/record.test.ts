@@ -137,6 +137,10 @@ describe('the exported main template in Chromium, offline', () => {
       return app.doc.cells.map((c: { id: string }) => ({ id: c.id, status: app.engine.state(c.id)?.status, value: app.engine.state(c.id)?.display?.value ?? null }));
     });
     expect(engineRows).toEqual(expected.map((r) => ({ id: r.id, status: r.status, value: r.value })));
+    // The edit is kept in the browser: the store (IndexedDB) opened while the record did,
+    // and the first save waited for it (cells/main.ts).
+    await expect.poll(() => page.evaluate(() => (window as any).loadtrace.autosave.version), { timeout: 10_000 }).toBeGreaterThan(0);
+    expect(await page.locator('#status').textContent()).toContain('Saved');
 
     // A formula's source opens in the full editor: its code is a block of its own in the
     // record, run under the record's CSP on first use (a blocked script would leave a
