@@ -4,7 +4,12 @@
 import type { EdgeCode } from './edges';
 import { solveUnitPlate, type UnitPlate } from './unit';
 
-const LIMIT = 64;
+/**
+ * More than the points of a sweep (MAX_STEPS, 200, in runtime/graph/sweep-program.ts):
+ * re-running a sweep over a panel's span then finds every plate again. A unit plate
+ * kept is ~15 KiB at the default mesh (measured in Node), so a full cache is a few MB.
+ */
+export const PLATE_CACHE_LIMIT = 256;
 const cache = new Map<string, UnitPlate>();
 
 export function cachedUnitPlate(ratio: number, edges: EdgeCode, nu: number, n: number): UnitPlate {
@@ -17,7 +22,7 @@ export function cachedUnitPlate(ratio: number, edges: EdgeCode, nu: number, n: n
   }
   const sol = solveUnitPlate(ratio, edges, nu, n);
   cache.set(key, sol);
-  if (cache.size > LIMIT) cache.delete(cache.keys().next().value as string);
+  if (cache.size > PLATE_CACHE_LIMIT) cache.delete(cache.keys().next().value as string);
   return sol;
 }
 

@@ -5,7 +5,8 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { functions, plateCoef, plateShare, plateWmax, solvePlate } from '../../runtime/library/plate';
 import { LibraryError } from '../../runtime/library/types';
-import { cachedUnitPlate, clearPlateCache } from '../../runtime/plate/cache';
+import { cachedUnitPlate, clearPlateCache, PLATE_CACHE_LIMIT } from '../../runtime/plate/cache';
+import { MAX_STEPS } from '../../runtime/graph/sweep-program';
 import { parseEdges } from '../../runtime/plate/edges';
 import { DEFAULT_MESH } from '../../runtime/plate/unit';
 
@@ -68,6 +69,17 @@ describe('plate library functions', () => {
     expect(cachedUnitPlate(5.1 / 3.3, e, 0.3, DEFAULT_MESH)).toBe(first);
     expect(cachedUnitPlate(5.1 / 3.3, e, 0.2, DEFAULT_MESH)).not.toBe(first); // ν is part of the key
     expect(plateCoef(3.3, 5.1, 'CSCF', 'w')).toBe(first.coefficients.w);
+  });
+
+  it('cache: a whole sweep of panels is still there when the sweep runs again', () => {
+    clearPlateCache();
+    expect(PLATE_CACHE_LIMIT).toBeGreaterThan(MAX_STEPS);
+    const e = parseEdges('SSSS');
+    const ratios = Array.from({ length: MAX_STEPS + 1 }, (_, i) => 1 + i / 100);
+    const first = ratios.map((r) => cachedUnitPlate(r, e, 0.2, 4)); // a coarse mesh: quick solves
+    const again = ratios.map((r) => cachedUnitPlate(r, e, 0.2, 4));
+    expect(again.every((p, i) => p === first[i])).toBe(true);
+    clearPlateCache();
   });
 });
 
