@@ -107,7 +107,7 @@ export function inlineAll(): Plugin {
           // waiting for them (~150 ms sooner); the app runs after the whole page is parsed.
           const tag = new RegExp(`<link\\b[^>]*\\bhref=["'][^"']*${escapeRe(name)}["'][^>]*>\\s*`);
           page = page.replace(tag, '');
-          // As several style elements (each font its own): the parser reads small tokens faster.
+          // As several style elements (about a font each): the parser reads small tokens faster.
           for (const part of splitCss(String(file.source), CSS_PART_CHARS)) styles.push(`<style>${part.replace(/<\/(style)/gi, '<\\/$1')}</style>`);
           delete bundle[name];
         }
