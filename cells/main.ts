@@ -14,6 +14,7 @@ import { TabGuard } from './tab-guard';
 import { sheetTitle, templateByKey, templates } from './templates';
 import { loadSourceEditor } from './source-editor-load';
 import { escapeHtml } from './kind';
+import { texHtml } from './tex';
 import { installRecord } from './record/install';
 import { DOC_ID } from '../runtime/record/index';
 import { installReview } from './review/install';
@@ -217,8 +218,12 @@ async function boot(): Promise<void> {
     await openKey(keyFromHash() ?? (store ? await store.getSetting<string>('last') : undefined) ?? 'demo');
   }
   document.body.dataset.ready = 'true';
-  // The source editor (CodeMirror) loads while the page is idle, so the first edit need not wait.
-  const preload = () => void loadSourceEditor().catch(() => undefined);
+  // The source editor (CodeMirror) and, in a record, KaTeX load while the page is idle, so
+  // the first edit or equation need not wait.
+  const preload = () => {
+    void loadSourceEditor().catch(() => undefined);
+    texHtml('x');
+  };
   if (typeof requestIdleCallback === 'function') requestIdleCallback(preload, { timeout: 3000 });
   else setTimeout(preload, 2000);
 }

@@ -18,7 +18,12 @@ export function texHtml(tex: string, display = false): string {
   try {
     html = katex.renderToString(tex, { displayMode: display, throwOnError: true, strict: 'ignore', trust: false, output: 'html' });
   } catch {
-    html = katex.renderToString(tex, { displayMode: display, throwOnError: false, strict: 'ignore', trust: false, errorColor: 'inherit', output: 'html' });
+    try {
+      html = katex.renderToString(tex, { displayMode: display, throwOnError: false, strict: 'ignore', trust: false, errorColor: 'inherit', output: 'html' });
+    } catch {
+      // KaTeX itself could not run (a record whose typesetting block is damaged): the TeX as text.
+      html = `<code class="tex-raw">${escapeHtml(tex)}</code>`;
+    }
   }
   if (cache.size >= LIMIT) cache.delete(cache.keys().next().value as string);
   cache.set(key, html);

@@ -1,16 +1,14 @@
 // The loader in a record shell: unpacks the app code (gzip + base64, see
 // runtime/record/app-payload.ts) with DecompressionStream, a web standard, and runs it
-// as an inline classic script; on failure the static rendering stays in view.
+// as an inline classic script (KaTeX is unpacked too, and run by the app when first
+// needed); on failure the static rendering stays in view.
 
-import { APP_ID, PART_OF, RUN_ID } from '../../runtime/record/app-payload';
+import { APP_ID, KATEX_CODE, KATEX_ID, PART_OF, RUN_ID } from '../../runtime/record/app-payload';
 
 /** Runs the app; on failure leaves the static rendering in view and says why. */
 export const LOADER = `
 try {
   performance.mark('loadtrace:loader');
-  // The block and its later parts, in page order (runtime/record/app-payload.ts).
-  const packed = [document.getElementById('${APP_ID}'), ...document.querySelectorAll('script[${PART_OF}="${APP_ID}"]')]
-    .map((el) => el.textContent.trim()).join('');
   // Native base64 where the browser has it; else a loop in a function (top-level code is not optimised).
   const decode = (text) => {
     const bin = atob(text);
@@ -18,8 +16,17 @@ try {
     for (let i = 0; i < bin.length; i++) out[i] = bin.charCodeAt(i);
     return out;
   };
-  const bytes = typeof Uint8Array.fromBase64 === 'function' ? Uint8Array.fromBase64(packed) : decode(packed);
-  const code = await new Response(new Blob([bytes]).stream().pipeThrough(new DecompressionStream('gzip'))).text();
+  // A block and its later parts, in page order (runtime/record/app-payload.ts), unpacked.
+  const unpack = async (id) => {
+    const first = document.getElementById(id);
+    if (!first) throw new Error('no ' + id + ' block');
+    const packed = [first, ...document.querySelectorAll('script[${PART_OF}="' + id + '"]')].map((el) => el.textContent.trim()).join('');
+    const bytes = typeof Uint8Array.fromBase64 === 'function' ? Uint8Array.fromBase64(packed) : decode(packed);
+    return new Response(new Blob([bytes]).stream().pipeThrough(new DecompressionStream('gzip'))).text();
+  };
+  // KaTeX is kept as text for the app to run when it first typesets (cells/record/katex-proxy.ts).
+  const [code, katex] = await Promise.all([unpack('${APP_ID}'), unpack('${KATEX_ID}').catch(() => undefined)]);
+  globalThis['${KATEX_CODE}'] = katex;
   const run = document.createElement('script');
   run.id = '${RUN_ID}';
   run.textContent = code;

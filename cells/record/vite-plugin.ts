@@ -4,7 +4,7 @@
 import { resolve } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { build, type Plugin, type Rolldown } from 'vite';
-import { APP_ID, APP_TYPE, EDITOR_GLOBAL, EDITOR_ID, packedElements } from '../../runtime/record/app-payload';
+import { APP_ID, APP_TYPE, EDITOR_GLOBAL, EDITOR_ID, KATEX_GLOBAL, KATEX_ID, packedElements } from '../../runtime/record/app-payload';
 import { LOADER } from './loader';
 
 /** KaTeX's CSS lists woff2, woff and ttf for every font; browsers all take woff2, so the others go. */
@@ -45,11 +45,12 @@ function packCode(code: string): string {
 }
 
 /**
- * The source editor (cells/source-editor.ts with CodeMirror) on its own, as a classic
- * script that sets globalThis.__loadtraceEditor: the record runs it only when a source
- * is first edited (cells/record/editor-load.ts), so opening a record does not compile it.
+ * A module on its own, as a classic script that sets globalThis[name]: the source editor
+ * (cells/source-editor.ts with CodeMirror), run only when a source is first edited
+ * (cells/record/editor-load.ts), and KaTeX, run when the app first typesets
+ * (cells/record/katex-proxy.ts); so opening a record compiles neither.
  */
-async function editorCode(root: string): Promise<string> {
+async function iifeCode(root: string, entry: string, name: string): Promise<string> {
   const built = await build({
     configFile: false,
     root,
@@ -59,12 +60,12 @@ async function editorCode(root: string): Promise<string> {
       target: 'es2022',
       minify: true,
       reportCompressedSize: false,
-      lib: { entry: resolve(root, 'cells/source-editor.ts'), formats: ['iife'], name: EDITOR_GLOBAL, fileName: () => 'editor.js' },
+      lib: { entry: resolve(root, entry), formats: ['iife'], name, fileName: () => 'block.js' },
     },
   });
   const outputs = (Array.isArray(built) ? built : [built]) as Rolldown.RolldownOutput[];
   const chunks = outputs.flatMap((o) => o.output).filter((f): f is Rolldown.OutputChunk => f.type === 'chunk');
-  if (chunks.length !== 1) throw new Error(`the editor build gave ${chunks.length} chunks, not one`);
+  if (chunks.length !== 1) throw new Error(`the build of ${entry} gave ${chunks.length} chunks, not one`);
   return chunks[0].code;
 }
 
@@ -98,7 +99,8 @@ export function inlineAll(): Plugin {
           if (/\bimport\.meta\b|^(?:import|export)\s*[{*"'`]/m.test(file.code)) this.error('the record bundle must be one chunk with no import/export');
           const classic = `(async () => {'use strict';\n${file.code}\n})().catch((e) => console.error('Loadtrace could not start:', e));`;
           scripts.push(packedElements(APP_ID, APP_TYPE, packCode(classic)));
-          scripts.push(packedElements(EDITOR_ID, APP_TYPE, packCode(await editorCode(root))));
+          scripts.push(packedElements(EDITOR_ID, APP_TYPE, packCode(await iifeCode(root, 'cells/source-editor.ts', EDITOR_GLOBAL))));
+          scripts.push(packedElements(KATEX_ID, APP_TYPE, packCode(await iifeCode(root, 'cells/record/katex-entry.ts', KATEX_GLOBAL))));
           scripts.push(`<script type="module">${LOADER}</script>`);
           delete bundle[name];
         } else if (name.endsWith('.css')) {

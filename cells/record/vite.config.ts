@@ -16,7 +16,13 @@ export default defineConfig((env) => {
   return mergeConfig(app, {
     plugins: [katexWoff2Only(), recordEntry(), inlineAll()],
     // The source editor is not in the app bundle: the record carries it as its own block.
-    resolve: { alias: [{ find: /^\.\/source-editor-load$/, replacement: resolve(ROOT, 'cells/record/editor-load.ts') }] },
+    // KaTeX likewise: a block of its own, run when the app first typesets.
+    resolve: {
+      alias: [
+        { find: /^\.\/source-editor-load$/, replacement: resolve(ROOT, 'cells/record/editor-load.ts') },
+        { find: /^katex$/, replacement: resolve(ROOT, 'cells/record/katex-proxy.ts') },
+      ],
+    },
     build: {
       outDir: 'dist-record',
       emptyOutDir: true,

@@ -12,8 +12,17 @@ export const RUN_ID = 'lt-app-run';
 export const EDITOR_ID = 'lt-editor';
 export const EDITOR_RUN_ID = 'lt-editor-run';
 export const EDITOR_GLOBAL = '__loadtraceEditor';
+/**
+ * KaTeX as its own block: the loader unpacks it beside the app, into the global named
+ * here, and the app runs it (as the script KATEX_RUN_ID) the first time it typesets, so
+ * opening a record whose screen shows no equation does not compile it.
+ */
+export const KATEX_ID = 'lt-katex';
+export const KATEX_RUN_ID = 'lt-katex-run';
+export const KATEX_CODE = '__loadtraceKatexCode';
+export const KATEX_GLOBAL = '__loadtraceKatex';
 /** Every packed block a shell may carry. */
-export const PACKED_IDS = [APP_ID, EDITOR_ID] as const;
+export const PACKED_IDS = [APP_ID, EDITOR_ID, KATEX_ID] as const;
 
 /** The unpacked app code of a shell's data block (base64 of gzip). */
 export async function unpackApp(base64: string): Promise<string> {
@@ -64,7 +73,7 @@ export function appBlock(html: string): string | undefined {
 /** The page as a browser serialised it, less the script elements the loaders added. */
 export function withoutRunScript(html: string): string {
   let out = html;
-  for (const id of [RUN_ID, EDITOR_RUN_ID]) {
+  for (const id of [RUN_ID, EDITOR_RUN_ID, KATEX_RUN_ID]) {
     const start = out.search(new RegExp(`<script\\b[^>]*\\bid=["']?${id}["']?[^>]*>`, 'i'));
     if (start < 0) continue;
     const end = out.toLowerCase().indexOf('</script>', start);

@@ -154,6 +154,11 @@ describe('the exported main template in Chromium, offline', () => {
     await page.keyboard.press('Escape');
     await page.locator(`#cell-${formula.id} .cm-editor`).waitFor({ state: 'detached' });
     expect(await page.evaluate(() => (window as any).__csp ?? [])).toEqual([]);
+    // KaTeX is a block of its own too, run when the app first typesets: the equations on
+    // the page are KaTeX's (a blocked script would leave the TeX as text, class tex-raw).
+    expect(await page.locator('#lt-katex-run').count()).toBe(1);
+    expect(await page.locator('#cells .katex').count()).toBeGreaterThan(0);
+    expect(await page.locator('#cells .tex-raw').count()).toBe(0);
 
     // Re-export after the edit: the new document and its results come back.
     const html = await page.evaluate(() => (window as any).loadtraceRecord.exportHtml());

@@ -1,11 +1,12 @@
 // The record's Content-Security-Policy lets exactly the shell's own code run: the loader,
-// the packed app and the packed source editor (run on first edit), each by its SHA-256.
+// the packed app, the packed source editor (run on first edit) and KaTeX (run when the
+// app first typesets), each by its SHA-256.
 // Hash sources: CSP Level 3 §2.3.1 (common practice: base64 of the SHA-256 of the script text).
 
 import { createHash } from 'node:crypto';
 import { gzipSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
-import { APP_ID, APP_TYPE, EDITOR_ID } from '../../runtime/record/app-payload';
+import { APP_ID, APP_TYPE, EDITOR_ID, KATEX_ID } from '../../runtime/record/app-payload';
 import { pack, PackError } from '../../runtime/record/index';
 
 const LOADER = 'document.getElementById("lt-app");';
@@ -13,8 +14,9 @@ const APP = 'globalThis.appRan = true;';
 const EDITOR = 'var __loadtraceEditor = { SourceEditor: class {} };';
 const packed = (code: string) => gzipSync(Buffer.from(code)).toString('base64');
 const block = (id: string, data: string) => `<script type="${APP_TYPE}" id="${id}" data-encoding="gzip base64">${data}</script>`;
-const shell = (editor: string | undefined) => `<!doctype html><html><head><title>s</title></head><body><p>app</p>${block(APP_ID, packed(APP))}${
-  editor === undefined ? '' : block(EDITOR_ID, editor)}<script type="module">${LOADER}</script></body></html>`;
+const KATEX = 'var __loadtraceKatex = { katex: { renderToString: () => "" } };';
+const shell = (editor: string | undefined, katex?: string) => `<!doctype html><html><head><title>s</title></head><body><p>app</p>${block(APP_ID, packed(APP))}${
+  editor === undefined ? '' : block(EDITOR_ID, editor)}${katex === undefined ? '' : block(KATEX_ID, katex)}<script type="module">${LOADER}</script></body></html>`;
 const hash = (code: string) => `'sha256-${createHash('sha256').update(code).digest('base64')}'`;
 const meta = { project: 'p', job: 'j', subject: 's', preparedBy: '', checkedBy: '', revision: '', date: '' };
 
@@ -27,6 +29,11 @@ describe('the record CSP and the packed source editor', () => {
   it('lists the loader, the app and the editor by hash, and nothing else', async () => {
     const html = await pack({ shell: shell(packed(EDITOR)), docText: 'loadtrace 1\n', staticHtml: '<div id="lt-static"></div>', meta });
     expect(await scriptSrc(html)).toEqual([hash(LOADER), hash(APP), hash(EDITOR)].sort());
+  });
+
+  it('lists the KaTeX block by hash too, when the shell carries one', async () => {
+    const html = await pack({ shell: shell(packed(EDITOR), packed(KATEX)), docText: 'loadtrace 1\n', staticHtml: '<div id="lt-static"></div>', meta });
+    expect(await scriptSrc(html)).toEqual([hash(LOADER), hash(APP), hash(EDITOR), hash(KATEX)].sort());
   });
 
   it('a shell without an editor block still packs (the editor then opens as plain text)', async () => {
