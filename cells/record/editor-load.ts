@@ -4,6 +4,7 @@
 
 import { EDITOR_GLOBAL, EDITOR_ID, EDITOR_RUN_ID, PART_OF, unpackApp } from '../../runtime/record/app-payload';
 import type { SourceEditorClass } from '../source-editor-load';
+import { runBlock } from './run-block';
 
 let loading: Promise<SourceEditorClass> | undefined;
 
@@ -12,12 +13,9 @@ async function unpackAndRun(): Promise<SourceEditorClass> {
   if (found?.SourceEditor) return found.SourceEditor;
   const block = document.getElementById(EDITOR_ID);
   if (!block) throw new Error('this record carries no editor code');
-  const run = document.createElement('script');
-  run.id = EDITOR_RUN_ID;
   const parts = [block, ...document.querySelectorAll(`script[${PART_OF}="${EDITOR_ID}"]`)];
-  run.textContent = await unpackApp(parts.map((el) => el.textContent?.trim() ?? '').join(''));
-  document.body.append(run);
-  const loaded = (globalThis as Record<string, unknown>)[EDITOR_GLOBAL] as { SourceEditor?: SourceEditorClass } | undefined;
+  const code = await unpackApp(parts.map((el) => el.textContent?.trim() ?? '').join(''));
+  const loaded = runBlock(EDITOR_RUN_ID, code, EDITOR_GLOBAL) as { SourceEditor?: SourceEditorClass } | undefined;
   if (!loaded?.SourceEditor) throw new Error('the editor code in this record did not start');
   return loaded.SourceEditor;
 }

@@ -6,6 +6,7 @@
 
 import type Katex from 'katex';
 import { KATEX_CODE, KATEX_GLOBAL, KATEX_RUN_ID } from '../../runtime/record/app-payload';
+import { runBlock } from './run-block';
 
 type KatexApi = typeof Katex;
 let real: KatexApi | undefined;
@@ -14,13 +15,7 @@ function run(): KatexApi {
   const g = globalThis as Record<string, unknown>;
   const code = g[KATEX_CODE];
   if (typeof code !== 'string') throw new Error('this record carries no typesetting code');
-  if (!document.getElementById(KATEX_RUN_ID)) {
-    const el = document.createElement('script');
-    el.id = KATEX_RUN_ID;
-    el.textContent = code;
-    document.body.append(el);
-  }
-  const loaded = (g[KATEX_GLOBAL] as { katex?: KatexApi } | undefined)?.katex;
+  const loaded = (runBlock(KATEX_RUN_ID, code, KATEX_GLOBAL) as { katex?: KatexApi } | undefined)?.katex;
   if (!loaded) throw new Error('the typesetting code in this record did not start');
   g[KATEX_CODE] = undefined; // run once; the text is no longer needed
   return loaded;
