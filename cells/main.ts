@@ -209,14 +209,10 @@ async function boot(): Promise<void> {
   });
 
   const cannotSave = () => app.setStatus('This browser cannot save (IndexedDB unavailable): changes last until the page closes.');
-  if (recordPage && (await records.openEmbedded())) {
-    store = await opening;
-    if (!store) cannotSave();
-  } else {
-    store ??= await opening;
-    if (!store) cannotSave();
-    await openKey(keyFromHash() ?? (store ? await store.getSetting<string>('last') : undefined) ?? 'demo');
-  }
+  const openedRecord = recordPage && (await records.openEmbedded());
+  store ??= await opening;
+  if (!store) cannotSave();
+  if (!openedRecord) await openKey(keyFromHash() ?? (store ? await store.getSetting<string>('last') : undefined) ?? 'demo');
   document.body.dataset.ready = 'true';
   // The source editor (CodeMirror) and, in a record, KaTeX load while the page is idle, so
   // the first edit or equation need not wait.
