@@ -4,7 +4,7 @@
 import { resolve } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { build, type Plugin, type Rolldown } from 'vite';
-import { APP_ID, APP_TYPE, EDITOR_GLOBAL, EDITOR_ID, KATEX_GLOBAL, KATEX_ID, packedElements } from '../../runtime/record/app-payload';
+import { APP_CSS_ID, APP_ID, APP_TYPE, EDITOR_GLOBAL, EDITOR_ID, KATEX_GLOBAL, KATEX_ID, packedElements } from '../../runtime/record/app-payload';
 import { LOADER } from './loader';
 
 /** KaTeX's CSS lists woff2, woff and ttf for every font; browsers all take woff2, so the others go. */
@@ -104,9 +104,9 @@ export function inlineAll(): Plugin {
           scripts.push(`<script type="module">${LOADER}</script>`);
           delete bundle[name];
         } else if (name.endsWith('.css')) {
-          // At the end of the body, not in the head: the app's styles (KaTeX with its fonts,
-          // ~0.4 MB) are not needed by the static rendering, which then paints without
-          // waiting for them (~150 ms sooner); the app runs after the whole page is parsed.
+          // In an inert template at the end of the body, not in the head: the static rendering
+          // does not need the app's styles (KaTeX with its fonts, ~0.4 MB) and paints without
+          // the browser parsing them first; the app adds them when it starts (app-css.ts).
           const tag = new RegExp(`<link\\b[^>]*\\bhref=["'][^"']*${escapeRe(name)}["'][^>]*>\\s*`);
           page = page.replace(tag, '');
           // As several style elements (about a font each): the parser reads small tokens faster.
@@ -115,7 +115,8 @@ export function inlineAll(): Plugin {
         }
       }
       page = page.replace(/<link\b[^>]*rel=["']modulepreload["'][^>]*>\s*/g, '');
-      page = page.replace(/<\/body>/i, () => `${[...styles, ...scripts].join('\n')}\n</body>`);
+      const css = styles.length ? [`<template id="${APP_CSS_ID}">${styles.join('\n')}</template>`] : [];
+      page = page.replace(/<\/body>/i, () => `${[...css, ...scripts].join('\n')}\n</body>`);
       delete bundle[html.fileName];
       this.emitFile({ type: 'asset', fileName: 'record-shell.html', source: page });
       // The same bytes under a name no dev server rewrites (it would inject its client into .html).

@@ -21,6 +21,12 @@ export const KATEX_ID = 'lt-katex';
 export const KATEX_RUN_ID = 'lt-katex-run';
 export const KATEX_CODE = '__loadtraceKatexCode';
 export const KATEX_GLOBAL = '__loadtraceKatex';
+/**
+ * The app's styles (KaTeX's with its fonts, ~0.4 MB) sit in a template, inert: the
+ * static rendering does not need them, and the browser then paints it without parsing
+ * them first. The app adds a copy to the head when it starts (cells/record/app-css.ts).
+ */
+export const APP_CSS_ID = 'lt-app-css';
 /** Every packed block a shell may carry. */
 export const PACKED_IDS = [APP_ID, EDITOR_ID, KATEX_ID] as const;
 

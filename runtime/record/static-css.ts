@@ -28,7 +28,7 @@ export function pageCss(meta: DocMeta): string {
 
 export const STATIC_CSS = `
 .lt-static { --lt-ink: #1b2129; --lt-soft: #59606c; --lt-rule: #d7d0bf; --lt-ok: #1d6638; --lt-fail: #a0171b;
-  max-width: 62rem; margin: 1.2rem auto; padding: 1.4rem 1.6rem 2rem; background: #fffdf7; color: var(--lt-ink);
+  box-sizing: border-box; max-width: 62rem; margin: 1.2rem auto; padding: 1.4rem 1.6rem 2rem; background: #fffdf7; color: var(--lt-ink);
   font: 15px/1.45 Charter, "Bitstream Charter", "DejaVu Serif", Georgia, serif; border: 1px solid #d8d1c0;
   box-shadow: 0 1px 2px rgba(0,0,0,.12), 0 6px 18px rgba(60,50,30,.12); }
 .lt-static * { box-sizing: border-box; }
@@ -88,6 +88,9 @@ export const STATIC_CSS = `
 /* A record page before (or without) its script: only the static rendering shows. The
    app marks the page lt-live once it runs; printing always prints the static sheets. */
 html:has(> body > #lt-static):not(.lt-live) body > :not(#lt-static) { display: none !important; }
+/* The desk the sheet lies on: the app's styles, which set it too, apply only once it runs. */
+html:has(> body > #lt-static):not(.lt-live) { background: #e7e3da; }
+html:has(> body > #lt-static):not(.lt-live) > body { margin: 0; }
 html.lt-live > body > #lt-static { display: none; }
 
 @media print {

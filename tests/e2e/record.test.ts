@@ -57,6 +57,9 @@ async function offline(javaScriptEnabled = true): Promise<{ context: BrowserCont
   return { context, page, requests, blocked };
 }
 
+/** A page less the template holding the app's styles. */
+const outsideAppCss = (html: string) => html.replace(/<template id="lt-app-css">[\s\S]*?<\/template>/, '');
+
 const live = (page: Page) => page.waitForFunction(() => document.documentElement.classList.contains('lt-live'), null, { timeout: 60_000 });
 
 function write(name: string, html: string): string {
@@ -115,9 +118,17 @@ describe('the exported main template in Chromium, offline', () => {
     await page.keyboard.press('Control+s');
     const file = join(work, 'again.html');
     await (await download).saveAs(file);
-    const again = await unpack(readFileSync(file, 'utf8'));
+    const againHtml = readFileSync(file, 'utf8');
+    const again = await unpack(againHtml);
     expect(again.ok).toBe(true);
     expect(again.docText).toBe(docText);
+    // The app's styles: a copy of the shell's inert template in the head, KaTeX's fonts
+    // with them. Exporting again keeps the one template and adds no style of its own.
+    expect(await page.evaluate(() => [...document.styleSheets].flatMap((s) => [...s.cssRules])
+      .filter((r) => r instanceof CSSFontFaceRule && r.style.fontFamily.includes('KaTeX')).length)).toBeGreaterThan(0);
+    const recordHtml = readFileSync(recordFile, 'utf8');
+    expect(againHtml.match(/<template id="lt-app-css">/g)).toHaveLength(1);
+    expect(outsideAppCss(againHtml).match(/<style\b/g)).toEqual(outsideAppCss(recordHtml).match(/<style\b/g));
 
     // Edit fc where it stands: the engine recomputes what depends on it, as in Node.
     const fc = doc.cells.find((c) => c.kind === 'input' && c.name === 'fc')!;
@@ -184,6 +195,8 @@ describe('the exported main template in Chromium, offline', () => {
     expect(requests).toEqual([`file://${recordFile}`]);
     expect(await page.locator('.toolbar').isVisible()).toBe(false);
     expect(await page.locator('#lt-static').isVisible()).toBe(true);
+    // The app's styles stay in their inert template: only the static rendering's apply.
+    expect(await page.evaluate(() => [...document.styleSheets].flatMap((s) => [...s.cssRules]).filter((r) => r instanceof CSSFontFaceRule).length)).toBe(0);
     for (const r of rows) {
       if (r.kind !== 'formula' && r.kind !== 'input' && r.kind !== 'check') continue;
       const res = (await page.locator(`#lt-c-${r.id} .lt-res`).textContent()) ?? '';

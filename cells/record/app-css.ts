@@ -1,0 +1,15 @@
+// The app's styles in a record: the shell keeps them in an inert template (see APP_CSS_ID)
+// so the static rendering paints without them; the app adds a copy to the head as it
+// starts. Imported after capture.ts, so the page kept for exporting again is unchanged.
+
+import { APP_CSS_ID } from '../../runtime/record/app-payload';
+
+/** Adds the styles held in the shell's template to the head; false if the page has none. */
+export function attachAppCss(doc: Document = document): boolean {
+  const held = doc.getElementById(APP_CSS_ID);
+  if (!(held instanceof HTMLTemplateElement)) return false;
+  doc.head.append(held.content.cloneNode(true));
+  return true;
+}
+
+attachAppCss();
