@@ -30,6 +30,9 @@ try {
     writer.close().catch(() => {});
     return new Response(inflate.readable).text();
   };
+  // The static rendering's frame first: unpacking starts with ~50 ms of work that would
+  // hold it back. (A frame, or 100 ms where the page draws none, e.g. a hidden tab.)
+  await new Promise((done) => { requestAnimationFrame(() => setTimeout(done)); setTimeout(done, 100); });
   // KaTeX is kept as text for the app to run when it first typesets (cells/record/katex-proxy.ts).
   const [code, katex] = await Promise.all([unpack('${APP_ID}'), unpack('${KATEX_ID}').catch(() => undefined)]);
   globalThis['${KATEX_CODE}'] = katex;
