@@ -28,7 +28,7 @@ try {
     const writer = inflate.writable.getWriter();
     writer.write(bytes).catch(() => {});
     writer.close().catch(() => {});
-    return new Response(inflate.readable).text();
+    return new Response(inflate.readable).text().catch(() => { throw new Error('its packed code (' + id + ') is damaged'); });
   };
   // The static rendering's frame first: unpacking starts with ~50 ms of work that would
   // hold it back. (A frame, or 100 ms where the page draws none, e.g. a hidden tab.)
@@ -45,7 +45,8 @@ try {
 } catch (e) {
   const p = document.createElement('p');
   p.setAttribute('role', 'alert');
-  p.textContent = 'The app in this record could not start (' + e + '); the record below is the issued, static copy.';
+  p.className = 'lt-load-failed';
+  p.textContent = 'The app in this record could not start: ' + (e && e.message ? e.message : e) + '. The record below is the issued, static copy.';
   document.body.prepend(p);
 }
 `.trim();

@@ -308,6 +308,23 @@ describe('hostile and damaged records', () => {
     await context.close();
   }, 60_000);
 
+  it('a record whose packed app is damaged says so above its static rendering', async () => {
+    const html = readFileSync(recordFile, 'utf8');
+    const at = html.indexOf('>', html.indexOf('id="lt-app"')) + 1;
+    const file = write('damaged-app.html', `${html.slice(0, at)}${'A'.repeat(400)}${html.slice(at + 400)}`);
+    const { context, page, blocked } = await offline();
+    await page.goto(`file://${file}`);
+    const alert = page.locator('body > p[role="alert"]');
+    await alert.waitFor({ timeout: 30_000 });
+    expect(await alert.isVisible()).toBe(true);
+    expect(await alert.textContent()).toBe('The app in this record could not start: its packed code (lt-app) is damaged. The record below is the issued, static copy.');
+    expect(await page.locator('#lt-static .lt-summary').isVisible()).toBe(true);
+    expect(await page.locator('.toolbar').isVisible()).toBe(false);
+    expect(blocked).toEqual([]);
+    await page.screenshot({ path: join(ARTIFACTS, 'record-damaged-app.png') });
+    await context.close();
+  }, 60_000);
+
   it('a cut-off record shows its static rendering and the CLI names the problem', async () => {
     const html = readFileSync(recordFile, 'utf8');
     const file = write('cut.html', html.slice(0, Math.floor(html.length * 0.8)));
