@@ -4,12 +4,5 @@
 
 import { APP_CSS_ID } from '../../runtime/record/app-payload';
 
-/** Adds the styles held in the shell's template to the head; false if the page has none. */
-export function attachAppCss(doc: Document = document): boolean {
-  const held = doc.getElementById(APP_CSS_ID);
-  if (!(held instanceof HTMLTemplateElement)) return false;
-  doc.head.append(held.content.cloneNode(true));
-  return true;
-}
-
-attachAppCss();
+const held = document.getElementById(APP_CSS_ID);
+if (held instanceof HTMLTemplateElement) document.head.append(held.content.cloneNode(true));

@@ -32,8 +32,8 @@ export const STATIC_CSS = `
   font: 15px/1.45 Charter, "Bitstream Charter", "DejaVu Serif", Georgia, serif; border: 1px solid #d8d1c0;
   box-shadow: 0 1px 2px rgba(0,0,0,.12), 0 6px 18px rgba(60,50,30,.12); }
 .lt-static * { box-sizing: border-box; }
-.lt-load-failed { box-sizing: border-box; max-width: 62rem; margin: 1.2rem auto 0; border: 2px solid #8a5a00; background: #fff4d6; padding: .5rem .8rem; font: 600 14px system-ui, sans-serif; color: #1b2129; }
-.lt-static .lt-warning { border: 2px solid #8a5a00; background: #fff4d6; padding: .5rem .8rem; font: 600 14px system-ui, sans-serif; margin: 0 0 1rem; }
+.lt-static .lt-warning, .lt-load-failed { border: 2px solid #8a5a00; background: #fff4d6; padding: .5rem .8rem; font: 600 14px system-ui, sans-serif; margin: 0 0 1rem; }
+.lt-load-failed { box-sizing: border-box; max-width: 62rem; margin: 1.2rem auto 0; color: #1b2129; }
 .lt-tb { display: grid; grid-template-columns: 3fr 1.2fr 1.2fr 1fr; border: 1.5px solid var(--lt-ink); margin-bottom: .8rem; }
 .lt-tb-f { display: flex; flex-direction: column; padding: .2rem .45rem; border-right: 1px solid #b9b09a; border-bottom: 1px solid #b9b09a; min-width: 0; overflow-wrap: anywhere; }
 .lt-tb-f.lt-span2 { grid-column: span 2; }
