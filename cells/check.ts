@@ -6,7 +6,7 @@ import type { CheckCell } from '../runtime/document';
 import { renameCell, setExpr } from '../runtime/edit/index';
 import { checkTex, nameTex, ratioText } from '../runtime/handcalc/index';
 import {
-  errorOf, escapeHtml, marginRefs, prettyUnits, orThrow, renderError, renderLabel, renderNumber, renderRefs, statusOf,
+  assignedName, errorOf, escapeHtml, marginRefs, prettyUnits, orThrow, renderError, renderLabel, renderNumber, renderRefs, statusOf,
   type CellKindModule, type CellViewBase, type ParsedSource,
 } from './kind';
 import { handCalcHtml } from './tex';
@@ -31,10 +31,10 @@ export const checkKind: CellKindModule<CheckCell, { name?: string; expr: string 
   kind: 'check',
 
   parse(source): ParsedSource<{ name?: string; expr: string }> {
-    const m = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s*=(?!=)\s*/.exec(source);
-    const expr = (m ? source.slice(m[0].length) : source).trim();
+    const head = assignedName(source);
+    const expr = (head ? source.slice(head.end) : source).trim();
     if (expr === '') return { ok: false, message: 'a check needs a condition, e.g. V_u <= phi_Vc', column: source.length + 1 };
-    return { ok: true, value: m ? { name: m[1], expr } : { expr } };
+    return { ok: true, value: head ? { name: head.name, expr } : { expr } };
   },
 
   serialize: (cell) => (cell.name ? `${cell.name} = ${cell.expr}` : cell.expr),

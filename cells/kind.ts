@@ -5,6 +5,7 @@
 
 import type { CalcDocument, Cell, CellKind } from '../runtime/document';
 import type { CellState } from '../runtime/engine-types';
+import { NAME_PATTERN } from '../runtime/formula/tokens';
 import type { HandCalcScope } from '../runtime/handcalc/index';
 
 /** A source that could not be read, with where (1-based column) and why. */
@@ -79,15 +80,23 @@ export function prettyUnits(text: string): string {
   return text.replace(/\^2(?![0-9])/g, '²').replace(/\^3(?![0-9])/g, '³').replace(/\*/g, '·');
 }
 
+/** `name =` at the start of a source (not `==`): the name, the = sign, the spaces after. */
+const HEAD = new RegExp(String.raw`^\s*(${NAME_PATTERN})?\s*(=(?!=))?\s*`);
+
+/** The name a source starts with (`name = ...`), and where what follows it starts (0-based). */
+export function assignedName(source: string): { name: string; end: number } | undefined {
+  const m = HEAD.exec(source)!;
+  return m[1] && m[2] ? { name: m[1], end: m[0].length } : undefined;
+}
+
 /** Columns in a `name = expr` source: where the expression starts (0-based offset). */
 export function exprOffset(source: string): number {
-  const m = /^\s*[A-Za-z_][A-Za-z0-9_]*\s*=(?!=)\s*/.exec(source);
-  return m ? m[0].length : 0;
+  return assignedName(source)?.end ?? 0;
 }
 
 /** Reads `name = rest`; `what` names the right-hand side in messages. */
 export function parseAssignment(source: string, what: string): ParsedSource<{ name: string; rest: string }> {
-  const m = /^\s*([A-Za-z_][A-Za-z0-9_]*)?\s*(=(?!=))?\s*/.exec(source)!;
+  const m = HEAD.exec(source)!;
   if (!m[1]) return { ok: false, message: 'start with the cell name, then = (e.g. M_u = 1.2 M_D + 1.6 M_L)', column: source.length - source.trimStart().length + 1 };
   if (!m[2]) return { ok: false, message: `put = after the name ${m[1]}`, column: m[0].length + 1 };
   const rest = source.slice(m[0].length).trim();

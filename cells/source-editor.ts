@@ -6,9 +6,10 @@ import { autocompletion, completionStatus, type Completion, type CompletionConte
 import { EditorState, Prec, RangeSetBuilder, StateEffect, StateField, type Extension } from '@codemirror/state';
 import { Decoration, EditorView, ViewPlugin, keymap, type DecorationSet, type ViewUpdate } from '@codemirror/view';
 import { minimalSetup } from 'codemirror';
+import { completionPlace, NAME_BEFORE, NAME_SO_FAR, sourceMarks, type SourceMode } from './source-marks';
 import type { Vocabulary } from './vocabulary';
 
-export type SourceMode = 'formula' | 'note';
+export type { SourceMode };
 
 export interface SourceEditorOptions {
   parent: HTMLElement;
@@ -54,57 +55,13 @@ const marksField = StateField.define<DecorationSet>({
   provide: (f) => EditorView.decorations.from(f),
 });
 
-const TOKEN = /([A-Za-z_][A-Za-z0-9_]*)|(\d+\.?\d*(?:[eE][-+]?\d+)?|\.\d+)|("[^"]*")/g;
-
-function classify(text: string, names: Set<string>, fns: Set<string>, units: Set<string>,
-  offset: number, builder: RangeSetBuilder<Decoration>): void {
-  TOKEN.lastIndex = 0;
-  let afterNumber = false;
-  for (let m = TOKEN.exec(text); m; m = TOKEN.exec(text)) {
-    const from = offset + m.index;
-    const to = from + m[0].length;
-    let cls: string | undefined;
-    if (m[2]) {
-      cls = 'cm-lt-num';
-      afterNumber = true;
-      builder.add(from, to, Decoration.mark({ class: cls }));
-      continue;
-    }
-    if (m[3]) cls = 'cm-lt-str';
-    else if (m[1]) {
-      const word = m[1];
-      const call = /^\s*\(/.test(text.slice(m.index + word.length));
-      if (call && fns.has(word)) cls = 'cm-lt-fn';
-      else if (names.has(word)) cls = 'cm-lt-name';
-      else if (units.has(word) || afterNumber) cls = 'cm-lt-unit';
-      else if (fns.has(word)) cls = 'cm-lt-fn';
-      else cls = 'cm-lt-unknown';
-    }
-    afterNumber = false;
-    if (cls) builder.add(from, to, Decoration.mark({ class: cls }));
-  }
-}
-
-/** Highlighting by our own small tokenizer: sources are one or a few lines. */
+/** Highlighting by the engine's tokenizer: sources are one or a few lines. */
 function highlighter(mode: SourceMode, vocabulary: () => Vocabulary) {
   const build = (view: EditorView): DecorationSet => {
     const voc = vocabulary();
-    const names = new Set(voc.names.map((n) => n.name));
-    const fns = new Set(voc.functions.map((f) => f.name));
-    const units = new Set(voc.units);
+    const words = { names: new Set(voc.names.map((n) => n.name)), functions: new Set(voc.functions.map((f) => f.name)), units: new Set(voc.units) };
     const builder = new RangeSetBuilder<Decoration>();
-    const text = view.state.doc.toString();
-    if (mode === 'formula') {
-      classify(text, names, fns, units, 0, builder);
-    } else {
-      // In notes only the $...$ math is code; mark the math and what is in it.
-      const re = /\$([^$\n]+)\$/g;
-      for (let m = re.exec(text); m; m = re.exec(text)) {
-        builder.add(m.index, m.index + 1, Decoration.mark({ class: 'cm-lt-mathmark' }));
-        classify(m[1], names, fns, units, m.index + 1, builder);
-        builder.add(m.index + m[0].length - 1, m.index + m[0].length, Decoration.mark({ class: 'cm-lt-mathmark' }));
-      }
-    }
+    for (const m of sourceMarks(view.state.doc.toString(), mode, words)) builder.add(m.from, m.to, Decoration.mark({ class: m.cls }));
     return builder.finish();
   };
   return ViewPlugin.fromClass(
@@ -123,11 +80,10 @@ function highlighter(mode: SourceMode, vocabulary: () => Vocabulary) {
 
 function completer(mode: SourceMode, vocabulary: () => Vocabulary) {
   return (context: CompletionContext): CompletionResult | null => {
-    const word = context.matchBefore(/[A-Za-z_][A-Za-z0-9_]*/);
+    const word = context.matchBefore(NAME_BEFORE);
     if (!word || (word.from === word.to && !context.explicit)) return null;
-    const before = context.state.doc.sliceString(0, word.from);
-    if (mode === 'note' && ((before.match(/\$/g)?.length ?? 0) % 2 === 0)) return null; // outside $...$
-    const afterNumber = /\d\s*$/.test(before);
+    const { complete, afterNumber } = completionPlace(context.state.doc.sliceString(0, word.from), mode);
+    if (!complete) return null;
     const voc = vocabulary();
     const options: Completion[] = [];
     for (const n of voc.names) {
@@ -143,7 +99,7 @@ function completer(mode: SourceMode, vocabulary: () => Vocabulary) {
       });
     }
     for (const u of voc.units) options.push({ label: u, type: 'unit', detail: 'unit', boost: afterNumber ? 20 : -20 });
-    return { from: word.from, options, validFor: /^[A-Za-z0-9_]*$/ };
+    return { from: word.from, options, validFor: NAME_SO_FAR };
   };
 }
 

@@ -3,6 +3,7 @@
 
 import type { CalcDocument, Cell, CellKind, DocMeta } from '../document';
 import { cellName } from '../document';
+import { isName, renameUses } from '../formula/tokens';
 import { hasFeetInches } from '../units/feet-inches';
 import { canonicalUnit, typedUnit } from '../units/systems';
 
@@ -11,7 +12,6 @@ export class EditError extends Error {
   override name = 'EditError';
 }
 
-const IDENT = /^[A-Za-z_][A-Za-z0-9_]*$/;
 const ID = /^[A-Za-z0-9_-]+$/;
 
 export function indexOfCell(doc: CalcDocument, id: string): number {
@@ -210,20 +210,14 @@ export function setCellFields(doc: CalcDocument, id: string, fields: CellFields)
 
 /** Why `name` cannot name cell `id` (syntax or already taken), or undefined. */
 export function nameClash(doc: CalcDocument, id: string, name: string): string | undefined {
-  if (!IDENT.test(name)) return `"${name}" is not a valid name: letters, digits and _, starting with a letter`;
+  if (!isName(name)) return `"${name}" is not a valid name: letters, digits and _, starting with a letter`;
   const other = doc.cells.find((c) => c.id !== id && cellName(c) === name);
   return other ? `"${name}" already names another cell` : undefined;
 }
 
-/** Rewrites whole-word uses of `from` as `to` in an expression (not function calls, not inside a number like 1e5). */
+/** Rewrites the uses of the name `from` as `to` in an expression (not function calls, quoted texts or numbers). */
 export function renameInExpr(expr: string, from: string, to: string): string {
-  return expr.replace(/[A-Za-z_][A-Za-z0-9_]*/g, (word, offset: number) => {
-    if (word !== from) return word;
-    const before = expr.slice(0, offset);
-    if (/[0-9.]$/.test(before)) return word; // part of a number like 1e5
-    if (/^\s*\(/.test(expr.slice(offset + word.length))) return word; // a function call
-    return to;
-  });
+  return renameUses(expr, from, to);
 }
 
 /**

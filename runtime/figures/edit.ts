@@ -3,6 +3,7 @@
 
 import type { CalcDocument, FigureCell, SweepCell } from '../document';
 import { EditError, updateCell } from '../edit/index';
+import { isName, NAME_PATTERN } from '../formula/tokens';
 
 export function setFigureExpr(doc: CalcDocument, id: string, expr: string): CalcDocument {
   return updateCell<FigureCell>(doc, id, (c) => {
@@ -27,7 +28,7 @@ export function sweepSource(c: Pick<SweepCell, 'input' | 'from' | 'to' | 'steps'
   return `${c.input} from ${c.from} to ${c.to}${c.steps === undefined ? '' : ` steps ${c.steps}`} plot ${c.outputs.join(', ')}`;
 }
 
-const SOURCE = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s+from\s+(.+?)\s+to\s+(.+?)(?:\s+steps\s+(\d+))?\s+plot\s+(.+?)\s*$/;
+const SOURCE = new RegExp(String.raw`^\s*(${NAME_PATTERN})\s+from\s+(.+?)\s+to\s+(.+?)(?:\s+steps\s+(\d+))?\s+plot\s+(.+?)\s*$`);
 
 /** Reads the sweep source, or says what is missing (column 1-based). */
 export function parseSweepSource(source: string): { ok: true; value: SweepFields } | { ok: false; message: string; column: number } {
@@ -40,7 +41,7 @@ export function parseSweepSource(source: string): { ok: true; value: SweepFields
     return { ok: false, message: `${missing}, e.g. h from 6 in to 12 in steps 12 plot punch_ok, phiVc`, column: 1 };
   }
   const outputs = m[5].split(',').map((s) => s.trim()).filter(Boolean);
-  const bad = outputs.find((o) => !/^[A-Za-z_][A-Za-z0-9_]*$/.test(o));
+  const bad = outputs.find((o) => !isName(o));
   if (bad !== undefined) return { ok: false, message: `"${bad}" is not a cell name`, column: source.indexOf(bad) + 1 };
   const value: SweepFields = { input: m[1], from: m[2], to: m[3], outputs };
   if (m[4] !== undefined) value.steps = Number(m[4]);

@@ -2,6 +2,7 @@
 // A quoted value is a JSON string literal (RFC 8259 §7), recognised by its
 // leading `"`, so any string survives the trip through a text file.
 
+import { isName } from '../formula/tokens';
 import type { Decoded } from './types';
 
 /**
@@ -15,11 +16,10 @@ const LONE_SURROGATE = /[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[
 /** The JSON escapes beyond what JSON.stringify does, so a quoted value is all visible text. */
 const ESCAPE_TOO = /[\u007f-\u009f\u200b-\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069\ufeff]/g;
 
-const IDENTIFIER = /^[A-Za-z_][A-Za-z0-9_]*$/;
 const CELL_ID = /^[A-Za-z0-9_-]+$/;
 
 export function isIdentifier(s: string): boolean {
-  return IDENTIFIER.test(s);
+  return isName(s);
 }
 
 export function isCellId(s: string): boolean {

@@ -95,9 +95,5 @@ export function symbolNames(node: MathNode): string[] {
   return out;
 }
 
-/** 1-based column of the first whole-word use of `name` in `source`, for error markers. */
-export function columnOf(source: string, name: string): number | undefined {
-  const re = new RegExp(`(^|[^A-Za-z0-9_.])(${name.replace(/[$]/g, '\\$')})(?![A-Za-z0-9_])`);
-  const m = re.exec(source);
-  return m ? m.index + m[1].length + 1 : undefined;
-}
+/** 1-based column of the first use of a name, for error markers (runtime/formula/tokens.ts). */
+export { columnOfName as columnOf } from './tokens';
