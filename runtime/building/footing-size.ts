@@ -41,7 +41,7 @@ export interface FootingResult {
 export type SizingOutcome = ({ sized: true } & FootingResult) | { sized: false; reason: string; check?: FootingCheck };
 
 /** Bars each way for a footing of given size: `bar`, enough for the moment, the minimum and the greatest spacing. */
-function barsFor(site: FootingSite, dem: FootingDemand, L: number, B: number, h: number, bar: string): FootingDesign | undefined {
+export function barsFor(site: FootingSite, dem: FootingDemand, L: number, B: number, h: number, bar: string): FootingDesign | undefined {
   const { area, dia } = barData(bar);
   const d = footingDepth(site, h, bar);
   if (d <= 0 || L <= dem.c1 || B <= dem.c2) return undefined;
