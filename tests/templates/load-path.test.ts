@@ -261,8 +261,10 @@ describe('load-path.lt at its defaults (ACI 318-19)', () => {
     near(run.num('rho_col'), Ast / Ag); // 0.0158
     near(run.num('phiPn'), phiPn / 1000); // 1067 kip
     near(run.ratio('axial_ok'), Pu / phiPn);
-    // kℓu/r = 1.0·(120 − 9)/(0.3·20) = 18.5 ≤ 34 − 12 = 22 (§6.2.5, r = 0.3h, CONFIRMED-indirect from memory)
-    near(run.num('slender'), 18.5);
+    // kℓu/r = 1.0·(120 − 9)/(0.3·20) = 18.5 ≤ 34 − 12 = 22 about each axis of the square column
+    // (ACI 318-19 §6.2.5.1(b), r = 0.3h §6.2.5.2(b), from memory)
+    near(run.num('slender_1'), 18.5);
+    near(run.num('slender_2'), 18.5);
     near(run.num('slender_max'), 22);
   });
 

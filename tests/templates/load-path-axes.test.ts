@@ -1,0 +1,64 @@
+// The main template pushed to ordinary cases where a check about one axis or one direction
+// only would pass when it should fail: a rectangular column (slenderness about each axis). Each result is
+// worked by hand here, in lb, in, ft, psi, psf, with the clause of each formula beside it.
+
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { near, runTemplate, type Run } from './helpers';
+
+const FILE = 'load-path.lt';
+
+// ---- loads common to the cases (defaults of the template) -------------------------
+const AT = 24 * 22; // ft², half-bay rule (common practice) = 528 ft²
+const D = (9 / 12) * 150 + 25; // psf, 9 in slab at 150 pcf + 25 psf = 137.5
+const Droof = (9 / 12) * 150 + 20; // psf = 132.5
+// Interior column live load reduction, KLL = 4, AT summed over 4 floors = 2112 ft²:
+// L/Lo = 0.25 + 15/√(4·2112) = 0.4132 ≥ 0.40 (ASCE 7-22 Eq. 4.7-1, §4.7.2; from memory).
+const PL = 4 * AT * 40 * (0.25 + 15 / Math.sqrt(4 * 4 * AT)); // 34,907 lb
+const PLr = AT * 20; // 10,560 lb, roof live load unreduced
+
+/** Factored load at the footing of a c1 × c2 in column (150 pcf, 5 storeys of 10 ft). */
+function puFooting(c1: number, c2: number): number {
+  const wCol = ((c1 * c2) / 144) * 150; // lb/ft
+  // Dead: roof + 4 floors over AT, 5 storeys of column (statics).
+  const PD = AT * (Droof + 4 * D) + 5 * wCol * 10;
+  // ASCE 7-22 §2.3.1 combinations 1–3 without wind (same factors as ASCE 7-16 §2.3.1 for D, L, Lr):
+  // 1.4D; 1.2D + 1.6L + 0.5Lr; 1.2D + 1.6Lr + L.
+  return Math.max(1.4 * PD, 1.2 * PD + 1.6 * PL + 0.5 * PLr, 1.2 * PD + 1.6 * PLr + PL);
+}
+
+function checksBy(run: Run, clause: RegExp): { name: string; ratio: number; status: string }[] {
+  return run.doc.cells
+    .filter((c) => c.kind === 'check' && clause.test(c.clause ?? ''))
+    .map((c) => {
+      const s = run.engine.state(c.id)!;
+      return { name: ('name' in c && c.name) || c.id, ratio: s.ratio ?? NaN, status: s.status };
+    });
+}
+
+describe('load-path.lt with a 30 × 14 in column: slenderness about each axis', () => {
+  let run: Run;
+  beforeAll(async () => {
+    run = await runTemplate(FILE, { c1: '30 in', c2: '14 in' });
+  });
+  afterAll(() => run.dispose());
+
+  it('fails about the weak axis, kℓu/r = 26.4 > 22, though the strong axis gives 12.3', () => {
+    // ℓu = 10 ft − 9 in = 111 in (clear height below the slab soffit, ACI 318-19 §6.2.5, from memory).
+    const lu = 120 - 9;
+    // r = 0.30 × the dimension in the direction stability is considered (ACI 318-19 §6.2.5.2(b), from memory):
+    // strong axis r = 0.3·30 = 9.0 in → kℓu/r = 1.0·111/9.0 = 12.33;
+    // weak axis   r = 0.3·14 = 4.2 in → kℓu/r = 1.0·111/4.2 = 26.43.
+    const strong = lu / (0.3 * 30);
+    const weak = lu / (0.3 * 14);
+    near(strong, 12.33, 1e-3);
+    near(weak, 26.43, 1e-3);
+    // Braced limit 34 + 12(M1/M2) ≤ 40 with single curvature M1/M2 = −1 → 22 (ACI 318-19 Eq. 6.2.5.1b, from memory).
+    const limit = 34 + 12 * -1;
+    const slender = checksBy(run, /§6\.2\.5/);
+    expect(slender.length).toBeGreaterThanOrEqual(2);
+    const ratios = slender.map((c) => c.ratio).sort((a, b) => a - b);
+    near(ratios[0], strong / limit);
+    near(ratios[ratios.length - 1], weak / limit);
+    expect(slender.find((c) => Math.abs(c.ratio - weak / limit) < 1e-6)?.status).toBe('fail');
+  });
+});
