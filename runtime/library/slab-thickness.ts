@@ -1,10 +1,11 @@
 // Minimum slab thickness for deflection control when deflections are not calculated.
 // One-way: ACI 318-19 Table 7.3.1.1 with its fy and lightweight modifiers (§7.3.1.1.1-2).
 // Two-way without interior beams: Table 8.3.1.1 with linear interpolation in fy and the
-// absolute minimums of §8.3.1.1 (5 in without, 4 in with drop panels).
+// absolute minimums of §8.3.1.1 (5 in without, 4 in with drop panels); its fy rows follow
+// the edition (318-19: 40/60/80 ksi, 318-14: 40/60/75 ksi).
 
 import { defineFunction, LibraryError, type LibFunction } from './types';
-import { bool, choice, positive, show } from './gravity-args';
+import { bool, choice, edition, positive, show, EDITIONS, type Edition } from './gravity-args';
 import { inch, pcf, psi } from '../units/si';
 
 export const ONE_WAY_SUPPORTS = ['simple', 'one-end', 'both-ends', 'cantilever'] as const;
@@ -35,27 +36,45 @@ export function hMinOneWay(l: number, support: OneWaySupport, fy = 60000 * psi, 
 export const PANELS = ['exterior', 'exterior-edge-beam', 'interior'] as const;
 export type Panel = (typeof PANELS)[number];
 
-/** ACI 318-19 Table 8.3.1.1 divisors at fy = 40, 60, 75 ksi (no drop panels / with drop panels). */
-const FY_KSI = [40, 60, 75];
-const TWO_WAY_DIVISOR: Record<'none' | 'drop', Record<Panel, number[]>> = {
-  none: { exterior: [33, 30, 28], 'exterior-edge-beam': [36, 33, 31], interior: [36, 33, 31] },
-  drop: { exterior: [36, 33, 31], 'exterior-edge-beam': [40, 36, 34], interior: [40, 36, 34] },
+/**
+ * Table 8.3.1.1 rows by edition: fy (ksi) and the divisors of ℓn, without / with drop panels.
+ * ACI 318-14: 40, 60, 75 ksi. ACI 318-19: 40, 60, 80 ksi (the 80 ksi row replaces 75; from memory).
+ */
+const TWO_WAY_ROWS: Record<Edition, { fyKsi: number[]; none: Record<Panel, number[]>; drop: Record<Panel, number[]> }> = {
+  '318-14': {
+    fyKsi: [40, 60, 75],
+    none: { exterior: [33, 30, 28], 'exterior-edge-beam': [36, 33, 31], interior: [36, 33, 31] },
+    drop: { exterior: [36, 33, 31], 'exterior-edge-beam': [40, 36, 34], interior: [40, 36, 34] },
+  },
+  '318-19': {
+    fyKsi: [40, 60, 80],
+    none: { exterior: [33, 30, 27], 'exterior-edge-beam': [36, 33, 30], interior: [36, 33, 30] },
+    drop: { exterior: [36, 33, 30], 'exterior-edge-beam': [40, 36, 33], interior: [40, 36, 33] },
+  },
 };
 
-/** ACI 318-19 Table 8.3.1.1: two-way slab without interior beams, h ≥ ℓn/divisor (h interpolated in fy), ≥ 5 in (4 in with drop panels). */
-export function hMinTwoWay(ln: number, panel: Panel, dropPanels = false, fy = 60000 * psi): number {
+/**
+ * ACI 318-19 / 318-14 Table 8.3.1.1: two-way slab without interior beams, h ≥ ℓn/divisor with ℓn the
+ * longer clear span, h interpolated linearly in fy between the rows of the edition; ≥ 5 in (4 in with drop panels).
+ */
+export function hMinTwoWay(ln: number, panel: Panel, dropPanels = false, fy = 60000 * psi, ed: Edition = '318-19'): number {
   const span = positive('ln', ln);
   const p = choice('panel', panel, PANELS);
   const drop = bool('drop_panels', dropPanels, false);
-  const k = positive('fy', fy) / psi / 1000;
-  if (k < 40 - 1e-9 || k > 75 + 1e-9) {
-    throw new LibraryError(`fy = ${show(k)} ksi is outside the 40-75 ksi range of Table 8.3.1.1`);
+  const rows = TWO_WAY_ROWS[edition(ed)];
+  const fyKsi = positive('fy', fy) / psi / 1000;
+  const [lo, , hi] = rows.fyKsi;
+  if (fyKsi < lo - 1e-9 || fyKsi > hi + 1e-9) {
+    throw new LibraryError(`fy = ${show(fyKsi)} ksi is outside the ${lo}-${hi} ksi range of ACI ${edition(ed)} Table 8.3.1.1`);
   }
-  const div = TWO_WAY_DIVISOR[drop ? 'drop' : 'none'][p];
-  const i = k <= 60 ? 0 : 1;
-  const t = (k - FY_KSI[i]) / (FY_KSI[i + 1] - FY_KSI[i]);
-  const h = span / div[i] + t * (span / div[i + 1] - span / div[i]);
-  return Math.max(h, (drop ? 4 : 5) * inch);
+  const divisors = rows[drop ? 'drop' : 'none'][p];
+  const row = fyKsi <= rows.fyKsi[1] ? 0 : 1;
+  const t = (fyKsi - rows.fyKsi[row]) / (rows.fyKsi[row + 1] - rows.fyKsi[row]);
+  const hLow = span / divisors[row];
+  const hHigh = span / divisors[row + 1];
+  const hTable = hLow + t * (hHigh - hLow);
+  const hAbsolute = (drop ? 4 : 5) * inch;
+  return Math.max(hTable, hAbsolute);
 }
 
 const L = { name: 'l', type: 'm', doc: 'span length' };
@@ -74,9 +93,10 @@ export const functions: LibFunction[] = [
     name: 'h_min_two_way',
     params: [{ name: 'ln', type: 'm', doc: 'clear span in the long direction' },
       { name: 'panel', type: 'text', choices: PANELS, doc: 'exterior, exterior-edge-beam (αf ≥ 0.8) or interior' },
-      { name: 'drop_panels', type: 'bool', doc: 'drop panels present (§8.2.4)' }, FY],
-    optional: 2, returns: 'm', clause: 'ACI 318-19 Table 8.3.1.1',
-    doc: 'Minimum thickness of a two-way slab without interior beams',
-    fn: (ln: number, p: Panel, drop?: boolean, fy?: number) => hMinTwoWay(ln, p, drop, fy),
+      { name: 'drop_panels', type: 'bool', doc: 'drop panels present (§8.2.4)' }, FY,
+      { name: 'edition', type: 'text', choices: EDITIONS, doc: "'318-19' (default; rows 40/60/80 ksi) or '318-14' (rows 40/60/75 ksi)" }],
+    optional: 3, returns: 'm', clause: 'ACI 318-19 Table 8.3.1.1, fy rows 40/60/80 ksi [80 ksi row from memory]; ACI 318-14 rows 40/60/75 ksi; linear in fy between rows',
+    doc: 'Minimum thickness of a two-way slab without interior beams (ℓn = longer clear span)',
+    fn: (ln: number, p: Panel, drop?: boolean, fy?: number, ed?: Edition) => hMinTwoWay(ln, p, drop, fy, edition(ed)),
   }),
 ];

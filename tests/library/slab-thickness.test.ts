@@ -28,7 +28,7 @@ describe('one-way slabs, ACI 318-19 Table 7.3.1.1 (US input)', () => {
 
 describe('two-way slabs without interior beams, ACI 318-19 Table 8.3.1.1', () => {
   const ln = 20 * ft; // 240 in
-  it('table values at 40, 60, 75 ksi (US input)', () => {
+  it('table values at 40, 60 ksi (both editions) and 75 ksi (318-14), US input', () => {
     // reference-values.md e.6 [CONFIRMED]
     expect(gn('h_min_two_way', ln, 'exterior', false, 60 * ksi) / inch).toBeCloseTo(240 / 30, 9);
     expect(gn('h_min_two_way', ln, 'exterior-edge-beam', false, 60 * ksi) / inch).toBeCloseTo(240 / 33, 9);
@@ -37,8 +37,9 @@ describe('two-way slabs without interior beams, ACI 318-19 Table 8.3.1.1', () =>
     expect(gn('h_min_two_way', ln, 'interior', true, 60 * ksi) / inch).toBeCloseTo(240 / 36, 9);
     expect(gn('h_min_two_way', ln, 'exterior', false, 40 * ksi) / inch).toBeCloseTo(240 / 33, 9);
     expect(gn('h_min_two_way', ln, 'interior', true, 40 * ksi) / inch).toBeCloseTo(240 / 40, 9);
-    expect(gn('h_min_two_way', ln, 'exterior', false, 75 * ksi) / inch).toBeCloseTo(240 / 28, 9);
-    expect(gn('h_min_two_way', ln, 'exterior-edge-beam', true, 75 * ksi) / inch).toBeCloseTo(240 / 34, 9);
+    // The 75 ksi row is ACI 318-14's (318-19 replaced it by 80 ksi):
+    expect(gn('h_min_two_way', ln, 'exterior', false, 75 * ksi, '318-14') / inch).toBeCloseTo(240 / 28, 9);
+    expect(gn('h_min_two_way', ln, 'exterior-edge-beam', true, 75 * ksi, '318-14') / inch).toBeCloseTo(240 / 34, 9);
   });
 
   it('linear interpolation in fy', () => {
@@ -59,13 +60,50 @@ describe('two-way slabs without interior beams, ACI 318-19 Table 8.3.1.1', () =>
   });
 });
 
+describe('Table 8.3.1.1 by edition: 318-19 rows 40 / 60 / 80 ksi, 318-14 rows 40 / 60 / 75 ksi', () => {
+  const ln = 20 * ft; // 240 in
+  it('318-19, Grade 80: ℓn/27, ℓn/30, ℓn/30 without drop panels; ℓn/30, ℓn/33, ℓn/33 with (row from memory)', () => {
+    // ACI 318-19 Table 8.3.1.1, fy = 80,000 psi row (from memory): exterior no edge beams ℓn/27,
+    // exterior with edge beams ℓn/30, interior ℓn/30; with drop panels ℓn/30, ℓn/33, ℓn/33.
+    expect(gn('h_min_two_way', ln, 'exterior', false, 80 * ksi, '318-19') / inch).toBeCloseTo(240 / 27, 9);
+    expect(gn('h_min_two_way', ln, 'exterior-edge-beam', false, 80 * ksi, '318-19') / inch).toBeCloseTo(240 / 30, 9);
+    expect(gn('h_min_two_way', ln, 'interior', false, 80 * ksi, '318-19') / inch).toBeCloseTo(240 / 30, 9);
+    expect(gn('h_min_two_way', ln, 'exterior', true, 80 * ksi, '318-19') / inch).toBeCloseTo(240 / 30, 9);
+    expect(gn('h_min_two_way', ln, 'interior', true, 80 * ksi, '318-19') / inch).toBeCloseTo(240 / 33, 9);
+    // The edition defaults to 318-19.
+    expect(gn('h_min_two_way', ln, 'interior', false, 80 * ksi) / inch).toBeCloseTo(240 / 30, 9);
+  });
+
+  it('318-19 interpolates between 60 and 80 ksi: 75 ksi is not the 318-14 row', () => {
+    // Table 8.3.1.1 note: linear interpolation for fy between the values given (from memory).
+    // Interior, no drop panels, 75 ksi: 240/33 + (15/20)(240/30 − 240/33) = 7.2727 + 0.75·0.7273 = 7.8182 in.
+    expect(gn('h_min_two_way', ln, 'interior', false, 75 * ksi, '318-19') / inch).toBeCloseTo(240 / 33 + 0.75 * (240 / 30 - 240 / 33), 9);
+    // Under 318-14 the 75 ksi row is in the table: ℓn/31 = 7.7419 in.
+    expect(gn('h_min_two_way', ln, 'interior', false, 75 * ksi, '318-14') / inch).toBeCloseTo(240 / 31, 9);
+    // 70 ksi, exterior without edge beams: 318-19 halfway 30 → 27: 8 + 0.5(8.8889 − 8) = 8.4444 in;
+    // 318-14 two thirds of the way 30 → 28: 8 + (10/15)(8.5714 − 8) = 8.3810 in.
+    expect(gn('h_min_two_way', ln, 'exterior', false, 70 * ksi, '318-19') / inch).toBeCloseTo(8 + 0.5 * (240 / 27 - 8), 9);
+    expect(gn('h_min_two_way', ln, 'exterior', false, 70 * ksi, '318-14') / inch).toBeCloseTo(8 + (10 / 15) * (240 / 28 - 8), 9);
+  });
+
+  it('each edition refuses fy beyond its own table', () => {
+    expectLibError(() => g('h_min_two_way', 6, 'interior', false, 80 * ksi, '318-14'), /outside the 40-75 ksi range of ACI 318-14 Table 8\.3\.1\.1/);
+    expectLibError(() => g('h_min_two_way', 6, 'interior', false, 85 * ksi, '318-19'), /outside the 40-80 ksi range of ACI 318-19 Table 8\.3\.1\.1/);
+  });
+
+  it('SI input: Grade 550 (79.8 ksi) under 318-19 is within 0.5 % of ℓn/30', () => {
+    // 550 MPa = 79.77 ksi: 318-19 Table 8.3.1.1 SI row for 550 MPa is ℓn/30 interior (from memory).
+    expectRel(gn('h_min_two_way', 6, 'interior', false, 550 * MPa, '318-19'), 6 / 30, 0.005);
+  });
+});
+
 describe('bad arguments', () => {
   it('refuses unknown supports and panels, fy outside the table, very light concrete', () => {
     expectLibError(() => g('h_min_one_way', 4, 'fixed'), /unknown support "fixed"/);
     expectLibError(() => g('h_min_one_way', -4, 'simple'), /l must be positive/);
     expectLibError(() => g('h_min_one_way', 4, 'simple', 60 * ksi, 80 * pcf), /below the 90 pcf/);
     expectLibError(() => g('h_min_two_way', 6, 'corner'), /unknown panel "corner"/);
-    expectLibError(() => g('h_min_two_way', 6, 'interior', false, 100 * ksi), /outside the 40-75 ksi range/);
+    expectLibError(() => g('h_min_two_way', 6, 'interior', false, 100 * ksi), /outside the 40-80 ksi range/);
     expectLibError(() => g('h_min_two_way', 6, 'interior', 'yes'), /drop_panels must be true or false/);
   });
 });

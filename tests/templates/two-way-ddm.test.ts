@@ -133,6 +133,32 @@ describe('two-way-ddm.lt with edition = 318-14', () => {
   });
 });
 
+describe('two-way-ddm.lt minimum thickness by edition and by panel', () => {
+  it('Grade 80 under 318-19 is not refused: ℓn/27 for the exterior panel (318-19 Table 8.3.1.1, from memory)', async () => {
+    const run = await runTemplate(FILE, { fy: '80 ksi' });
+    try {
+      // 80,000 psi row, exterior panel without edge beams: 18.667·12/27 = 8.296 in > h = 8 in, so h_ok fails.
+      near(run.num('h_min'), (ln * 12) / 27);
+      expect(run.state('h_ok').status).toBe('fail');
+      // Nothing else is refused for Grade 80 (every cell computes).
+      const errors = run.doc.cells.filter((c) => run.engine.state(c.id)?.status === 'error').map((c) => c.id);
+      expect(errors).toEqual([]);
+    } finally {
+      run.dispose();
+    }
+  });
+
+  it('Grade 80 under 318-14 is outside its 40–75 ksi table: the thickness cell says so', async () => {
+    const run = await runTemplate(FILE, { fy: '80 ksi', edition: '318-14' });
+    try {
+      expect(run.state('h_min').status).toBe('error');
+      expect(run.state('h_min').error?.message).toMatch(/40-75 ksi range of ACI 318-14 Table 8\.3\.1\.1/);
+    } finally {
+      run.dispose();
+    }
+  });
+});
+
 describe('two-way-ddm.lt as a document', () => {
   it('is well formed, round-trips and runs headless with exit code 0', async () => {
     expectWellFormed(FILE);
