@@ -77,6 +77,37 @@ export function hMinTwoWay(ln: number, panel: Panel, dropPanels = false, fy = 60
   return Math.max(hTable, hAbsolute);
 }
 
+/**
+ * The Table 8.3.1.1 panel for the slab around a column at grid lines (line1, line2), counted from
+ * 0 at one edge to n at the other: a line at or next to an edge (line ≤ 1 or ≥ n − 1) bounds an
+ * end span, whose panel has a discontinuous edge and is exterior (every interior line of a
+ * 3-span direction does). Edge beams, when present along that edge, give 'exterior-edge-beam'.
+ */
+export function panelAtColumn(n1: number, n2: number, line1: number, line2: number, edgeBeams = false): Panel {
+  const spans1 = wholeAtLeast('n1', n1, 1);
+  const spans2 = wholeAtLeast('n2', n2, 1);
+  const at1 = lineOf('line1', line1, spans1);
+  const at2 = lineOf('line2', line2, spans2);
+  const endSpan1 = at1 <= 1 || at1 >= spans1 - 1;
+  const endSpan2 = at2 <= 1 || at2 >= spans2 - 1;
+  const exterior = endSpan1 || endSpan2;
+  if (!exterior) return 'interior';
+  return bool('edge_beams', edgeBeams, false) ? 'exterior-edge-beam' : 'exterior';
+}
+
+function wholeAtLeast(name: string, v: unknown, min: number): number {
+  const x = positive(name, v);
+  if (!Number.isInteger(x) || x < min) throw new LibraryError(`${name} must be a whole number >= ${min} (got ${show(x)})`);
+  return x;
+}
+
+function lineOf(name: string, v: unknown, spans: number): number {
+  if (typeof v !== 'number' || !Number.isInteger(v) || v < 0 || v > spans) {
+    throw new LibraryError(`${name} must be a whole number from 0 (edge line) to ${spans} (got ${show(v)})`);
+  }
+  return v;
+}
+
 const L = { name: 'l', type: 'm', doc: 'span length' };
 const FY = { name: 'fy', type: 'Pa', doc: 'yield strength of the reinforcement (default 60 ksi)' };
 
@@ -98,5 +129,19 @@ export const functions: LibFunction[] = [
     optional: 3, returns: 'm', clause: 'ACI 318-19 Table 8.3.1.1, fy rows 40/60/80 ksi [80 ksi row from memory]; ACI 318-14 rows 40/60/75 ksi; linear in fy between rows',
     doc: 'Minimum thickness of a two-way slab without interior beams (ℓn = longer clear span)',
     fn: (ln: number, p: Panel, drop?: boolean, fy?: number, ed?: Edition) => hMinTwoWay(ln, p, drop, fy, edition(ed)),
+  }),
+  defineFunction({
+    name: 'panel_at_column',
+    params: [
+      { name: 'n1', type: '1', doc: 'number of spans in direction 1' },
+      { name: 'n2', type: '1', doc: 'number of spans in direction 2' },
+      { name: 'line1', type: '1', doc: 'column line in direction 1, 0 at the edge to n1' },
+      { name: 'line2', type: '1', doc: 'column line in direction 2, 0 at the edge to n2' },
+      { name: 'edge_beams', type: 'bool', doc: 'edge beams with αf ≥ 0.8 along the slab edges (default false)' },
+    ],
+    optional: 1, returns: 'text',
+    clause: 'ACI 318-19 Table 8.3.1.1: a panel with a discontinuous edge is exterior; a column on or next to an edge line bounds an end span',
+    doc: 'Panel of Table 8.3.1.1 that governs the slab around a column: interior, exterior or exterior-edge-beam',
+    fn: (n1: number, n2: number, a: number, b: number, e?: boolean) => panelAtColumn(n1, n2, a, b, e),
   }),
 ];

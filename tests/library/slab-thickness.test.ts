@@ -97,6 +97,31 @@ describe('Table 8.3.1.1 by edition: 318-19 rows 40 / 60 / 80 ksi, 318-14 rows 40
   });
 });
 
+describe('the Table 8.3.1.1 panel around a column: panel_at_column', () => {
+  // A panel with a discontinuous edge is an exterior panel (ACI 318-19 Table 8.3.1.1). With n spans the
+  // column lines are 0..n; lines 0 and n are edges, lines 1 and n − 1 bound the end spans (geometry).
+  it('3 spans: every interior line bounds an end span', () => {
+    expect(g('panel_at_column', 3, 5, 1, 2)).toBe('exterior');
+    expect(g('panel_at_column', 3, 5, 2, 2)).toBe('exterior');
+    expect(g('panel_at_column', 5, 3, 2, 1)).toBe('exterior');
+  });
+  it('5 spans: lines 2 and 3 touch interior spans only', () => {
+    expect(g('panel_at_column', 5, 5, 2, 3)).toBe('interior');
+    expect(g('panel_at_column', 5, 5, 1, 3)).toBe('exterior');
+    expect(g('panel_at_column', 4, 4, 2, 2)).toBe('interior');
+    expect(g('panel_at_column', 5, 5, 0, 3)).toBe('exterior'); // edge column
+  });
+  it('edge beams give the edge-beam row', () => {
+    expect(g('panel_at_column', 3, 5, 1, 2, true)).toBe('exterior-edge-beam');
+    expect(g('panel_at_column', 5, 5, 2, 2, true)).toBe('interior');
+  });
+  it('refuses a line outside the grid', () => {
+    expectLibError(() => g('panel_at_column', 3, 3, 4, 1), /line1 must be a whole number from 0 \(edge line\) to 3/);
+    expectLibError(() => g('panel_at_column', 3, 3, 1, 1.5), /line2 must be a whole number/);
+    expectLibError(() => g('panel_at_column', 0, 3, 0, 1), /n1 must be/);
+  });
+});
+
 describe('bad arguments', () => {
   it('refuses unknown supports and panels, fy outside the table, very light concrete', () => {
     expectLibError(() => g('h_min_one_way', 4, 'fixed'), /unknown support "fixed"/);

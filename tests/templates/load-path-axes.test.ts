@@ -1,5 +1,7 @@
 // The main template pushed to ordinary cases where a check about one axis or one direction
-// only would pass when it should fail: a rectangular column (slenderness about each axis). Each result is
+// only would pass when it should fail: a rectangular column (slenderness about each axis),
+// and a bay whose longer span is the second one, in a three-span direction (two-way slab
+// minimum thickness). Each result is
 // worked by hand here, in lb, in, ft, psi, psf, with the clause of each formula beside it.
 
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -60,5 +62,30 @@ describe('load-path.lt with a 30 × 14 in column: slenderness about each axis', 
     near(ratios[0], strong / limit);
     near(ratios[ratios.length - 1], weak / limit);
     expect(slender.find((c) => Math.abs(c.ratio - weak / limit) < 1e-6)?.status).toBe('fail');
+  });
+});
+
+describe('load-path.lt two-way slab thickness: the longer clear span, the exterior divisor', () => {
+  it('at the defaults: 3 spans north–south, so the column touches an end span: ℓn/30', async () => {
+    const run = await runTemplate(FILE);
+    try {
+      // ℓn = longer clear span = 24 ft − 20 in = 22.333 ft (ACI 318-19 Table 8.3.1.1, ℓn in the long direction).
+      // Every interior column line of a 3-span direction bounds an end span, whose panel is exterior:
+      // exterior panel without edge beams, fy = 60 ksi → ℓn/30 = 268/30 = 8.933 in (Table 8.3.1.1).
+      near(run.num('h_min'), (22.333333 * 12) / 30, 1e-5);
+    } finally {
+      run.dispose();
+    }
+  });
+
+  it('the longer span in direction 2: ℓn from l2', async () => {
+    const run = await runTemplate(FILE, { l1: '22 ft', l2: '26 ft', n2: '4', line2: '2' });
+    try {
+      // ℓn = max(22 − 20/12, 26 − 20/12) = 24.333 ft; n1 = 4, n2 = 4 spans: the interior column at
+      // line 2 of 4 in both directions touches no end span → interior panel, ℓn/33 = 292/33 = 8.848 in.
+      near(run.num('h_min'), (24.333333 * 12) / 33, 1e-5);
+    } finally {
+      run.dispose();
+    }
   });
 });

@@ -37,10 +37,11 @@ function lldFactor(n: number): number {
   return Math.min(1, Math.max(0.25 + 15 / Math.sqrt(influence), n >= 2 ? 0.4 : 0.5));
 }
 
-// Slab. ℓn = 24 − 20/12 = 22.333 ft; h_min = ℓn/33 = 8.121 in (ACI 318-19 Table
-// 8.3.1.1, interior panel, fy = 60 ksi, CONFIRMED).
+// Slab. ℓn = 24 − 20/12 = 22.333 ft, the longer clear span (22 − 20/12 = 20.333 ft the other way).
+// Three spans north–south: the column's line bounds an end span, so the exterior-panel row of
+// ACI 318-19 Table 8.3.1.1 (no edge beams, fy = 60 ksi, CONFIRMED) applies: h_min = ℓn/30 = 8.933 in.
 const ln = l1 - c / 12;
-const hMin = (ln * 12) / 33;
+const hMin = (ln * 12) / 30;
 // d = 9 − 0.75 − 0.625 (#5, ASTM A615 Table, CONFIRMED) = 7.625 in.
 const d = h - 0.75 - 0.625;
 // Mo = qu ℓ2 ℓn²/8 = 229·22·22.333²/8 = 314,097 lb·ft (ACI 318-19 Eq. 8.10.3.2, CONFIRMED).
@@ -193,8 +194,9 @@ describe('load-path.lt at its defaults (ACI 318-19)', () => {
   it('slab: action, thickness and DDM moments', () => {
     expect(run.val('action')).toBe('two-way'); // 24/22 = 1.09 ≤ 2 (e.6, CONFIRMED limit)
     near(run.num('ln'), ln); // 22.33 ft
-    near(run.num('h_min'), hMin); // 8.121 in
-    near(run.num('h_min'), 8.121);
+    expect(run.val('panel')).toBe('exterior');
+    near(run.num('h_min'), hMin); // 8.933 in
+    near(run.num('h_min'), 8.933);
     near(run.num('d'), 7.625);
     near(run.num('Mo'), Mo / 1000); // 314.1 kip·ft
     near(run.num('Mo'), 314.1);

@@ -157,6 +157,17 @@ describe('two-way-ddm.lt minimum thickness by edition and by panel', () => {
       run.dispose();
     }
   });
+
+  it('an interior span in direction 1 that is an end span in direction 2 is an exterior panel', async () => {
+    const run = await runTemplate(FILE, { span_type: 'interior', span_type_2: 'end' });
+    try {
+      // Table 8.3.1.1: a panel with a discontinuous edge in either direction is exterior: ℓn/30 (no edge beam).
+      expect(run.val('panel')).toBe('exterior');
+      near(run.num('h_min'), (ln * 12) / 30);
+    } finally {
+      run.dispose();
+    }
+  });
 });
 
 describe('two-way-ddm.lt as a document', () => {
