@@ -1,5 +1,6 @@
 // The main template pushed to ordinary cases where a check about one axis or one direction
-// only would pass when it should fail: a rectangular column (slenderness about each axis),
+// only would pass when it should fail: a rectangular column (slenderness about each axis,
+// footing moment and one-way shear in each direction),
 // and a bay whose longer span is the second one, in a three-span direction (two-way slab
 // minimum thickness). Each result is
 // worked by hand here, in lb, in, ft, psi, psf, with the clause of each formula beside it.
@@ -62,6 +63,60 @@ describe('load-path.lt with a 30 × 14 in column: slenderness about each axis', 
     near(ratios[0], strong / limit);
     near(ratios[ratios.length - 1], weak / limit);
     expect(slender.find((c) => Math.abs(c.ratio - weak / limit) < 1e-6)?.status).toBe('fail');
+  });
+});
+
+describe('load-path.lt footing under a rectangular column: both directions', () => {
+  it('30 × 14 in column, h_f = 30 in: one-way shear in the c2 direction is 1.02 (fails)', async () => {
+    const run = await runTemplate(FILE, { c1: '30 in', c2: '14 in', h_f: '30 in' });
+    try {
+      const Pu = puFooting(30, 14); // 1.4D governs: 1.4·382,235 = 535,129 lb
+      near(Pu, 535_129, 1e-5);
+      const B = 14; // ft
+      const qu = Pu / (B * B); // 2730.3 psf, qu = Pu/(B·L) (ACI 318-19 §13.2.6.1, from memory)
+      const d = 30 - 3 - 1.0; // 26 in: 3 in cover, to the contact of two #8 layers
+      // Critical section at d from the column face in each direction (ACI 318-19 §13.2.7.2, §7.4.3.2, from memory):
+      // along c2: (168 − 14)/2 − 26 = 51 in → Vu = 2730.3·14·51/12 = 162,451 lb.
+      const Vu2 = (qu * B * ((B * 12 - 14) / 2 - d)) / 12;
+      near(Vu2, 162_451, 1e-4);
+      // Steel each way at the minimum 0.0018·168·30 = 9.072 in² (ACI 318-19 §13.3.3.1 → §7.6.1.1, from memory;
+      // Whitney gives 6.8 in² in the c2 direction) → 12 #8 = 9.48 in².
+      const rhoW = (12 * 0.79) / (168 * d); // 0.00217
+      // φVc = 0.75·8λs(ρw)^(1/3)√f'c·bw·d, λs = √(2/(1 + d/10)) (ACI 318-19 Table 22.5.5.1(c), §22.5.5.1.3)
+      //     = 0.75·8·0.7454·0.1295·63.25·168·26 = 160,000 lb.
+      const lamS = Math.sqrt(2 / (1 + d / 10));
+      const phiVc = 0.75 * 8 * lamS * Math.cbrt(rhoW) * Math.sqrt(4000) * 168 * d;
+      near(phiVc, 160_000, 2e-3);
+      const expected = Vu2 / phiVc; // 1.015
+      near(expected, 1.015, 2e-3);
+      const oneWay = checksBy(run, /§22\.5/).filter((c) => /one-way|shear1/i.test(c.name));
+      const worst = oneWay.reduce((a, b) => (b.ratio > a.ratio ? b : a));
+      near(worst.ratio, expected);
+      expect(worst.status).toBe('fail');
+    } finally {
+      run.dispose();
+    }
+  });
+
+  it('24 × 12 in column: Mu at the face in the c2 direction is 17 % above the c1 direction', async () => {
+    const run = await runTemplate(FILE, { c1: '24 in', c2: '12 in' });
+    try {
+      const Pu = puFooting(24, 12); // 1.4·375,360 = 525,504 lb
+      const qu = Pu / 196; // 2681.1 psf
+      // Mu = qu·B·ℓ²/2 at the column face (ACI 318-19 §13.2.7.1, from memory):
+      // c1 direction ℓ = (168 − 24)/2 = 72 in = 6 ft → 675,637 lb·ft;
+      // c2 direction ℓ = (168 − 12)/2 = 78 in = 6.5 ft → 792,937 lb·ft, 1.174 times as much.
+      const Mu1 = (qu * 14 * 6 ** 2) / 2;
+      const Mu2 = (qu * 14 * 6.5 ** 2) / 2;
+      near(Mu2 / Mu1, 1.1736, 1e-4);
+      const moments = run.doc.cells
+        .flatMap((c) => (c.kind === 'formula' && /^Mu_f/.test(c.name) ? [run.num(c.name)] : []));
+      expect(moments.length).toBeGreaterThanOrEqual(2);
+      near(Math.min(...moments), Mu1 / 1000);
+      near(Math.max(...moments), Mu2 / 1000);
+    } finally {
+      run.dispose();
+    }
   });
 });
 
