@@ -110,8 +110,8 @@ export const functions: LibFunction[] = [
       { name: 'fs', type: 'Pa', doc: 'service stress in the bars (2/3 fy permitted)' },
       { name: 'cc', type: 'm', doc: 'clear cover to the bars' },
     ],
-    returns: 'm', clause: 'ACI 318-19 Table 24.3.2',
-    doc: 'Maximum bar spacing for crack control',
+    returns: 'm', clause: 'ACI 318-19 Table 24.3.2: s ≤ 15(40,000/fs) − 2.5cc and ≤ 12(40,000/fs), fs = (2/3)fy permitted (§24.3.2.1) [from memory]; for one-way slabs and beams (§24.3.1), footings through §13.3.3.1 → Ch. 7 [from memory]',
+    doc: 'Maximum spacing of the flexural bars nearest the tension face for crack control',
     fn: (fs: number, cc: number) => sMaxCrack(fs, cc),
   }),
 ];

@@ -126,11 +126,11 @@ const Bft = 14, hf = 32, Df = 4.5, gs = 120;
 // q_net = 3000 − (32/12)·150 − (4.5 − 32/12)·120 − 100 = 3000 − 400 − 220 − 100 = 2280 psf (common practice).
 const qNet = 3000 - (hf / 12) * wc - (Df - hf / 12) * gs - 100;
 const Areq = Ps / qNet; // ACI 318-19 §13.3.1.1: service loads on the net pressure
-const df = hf - 3 - 1.0; // 3 in cover (Table 20.5.1.3.1, from memory), #8 bar 1.0 in → 28 in
+const df = hf - 3 - 0.75; // 3 in cover (Table 20.5.1.3.1, from memory), #6 bar 0.75 in → 28.25 in
 const Bin = Bft * 12;
 const quF = Pu / (Bft * Bft); // psf
-// Two-way: Vu = Pu − qu (c + d)², bo = 4(c + d) = 192 in, λs = √(2/3.8) = 0.7255 (318-19),
-// vc = 4λs√f'c = 183.5 psi ((b) 6 and (c) 2 + 40·28/192 = 7.83 are larger).
+// Two-way: Vu = Pu − qu (c + d)², bo = 4(c + d) = 193 in, λs = √(2/3.825) = 0.7231 (318-19),
+// vc = 4λs√f'c = 182.9 psi ((b) 6 and (c) 2 + 40·28.25/193 = 7.85 are larger).
 const VuF2 = Pu - quF * ((c + df) / 12) ** 2;
 const boF = 4 * (c + df);
 const lamSF = Math.sqrt(2 / (1 + df / 10));
@@ -138,10 +138,14 @@ const phiVcF2 = (lam: number) => 0.75 * 4 * lam * sqrtFcF * boF * df;
 // Flexure at the column face: Mu = qu B ((B − c)/2)²/2 = 2723·14·6.167²/2 (ACI 318-19 §13.2.7.1, from memory).
 const arm = (Bin - c) / 2 / 12; // ft
 const MuF = (quF * Bft * arm * arm) / 2;
-// As = max(Whitney, 0.0018 B h) = max(≈5.6, 0.0018·168·32 = 9.677) in² → 13 #8 (10.27 in²).
+// As = max(Whitney, 0.0018 B h) = max(≈5.6, 0.0018·168·32 = 9.677) in² → 22 #6 (0.44 in², ASTM A615);
+// but the bars may be no more than min(2h, 18 in, crack control) apart: Table 24.3.2 (from memory) at
+// fs = 40 ksi, cc = 3 in gives min(15 − 7.5, 12) = 7.5 in, so (168 − 6 − 0.75)/7.5 = 21.5 → 22 spaces,
+// 23 bars (10.12 in²) at 161.25/22 = 7.33 in.
 const AsF = Math.max(asWhitney(MuF, Bft, df, fcF), 0.0018 * Bin * hf);
-const nF = Math.ceil(AsF / 0.79);
-const AsProvF = nF * 0.79;
+const nF = Math.max(Math.ceil(AsF / 0.44), Math.ceil((Bin - 6 - 0.75) / 7.5) + 1);
+const sF = (Bin - 6 - 0.75) / (nF - 1);
+const AsProvF = nF * 0.44;
 const aF = (AsProvF * fy) / (0.85 * fcF * Bin);
 const phiMnF = (0.9 * AsProvF * fy * (df - aF / 2)) / 12; // lb·ft
 // One-way at d from the face: Vu = qu B ((B − c)/2 − d) = 2723·14·46/12 lb.
@@ -151,9 +155,9 @@ const rhoW = AsProvF / (Bin * df);
 // 318-14 §22.5.5.1: Vc = 2√f'c bw d.
 const phiVcF1_19 = 0.75 * 8 * lamSF * Math.cbrt(rhoW) * sqrtFcF * Bin * df;
 const phiVcF1_14 = 0.75 * 2 * sqrtFcF * Bin * df;
-// ℓd = fy ψt ψe ψg/(20 λ √f'c) db for #7 and larger (Table 25.4.2.3, from memory) = 47.43 in;
-// available (168 − 20)/2 − 3 = 71 in.
-const ld = (fy / (20 * sqrtFcF)) * 1.0;
+// ℓd = fy ψt ψe ψg/(25 λ √f'c) db for #6 and smaller (Table 25.4.2.3, from memory)
+// = 60,000/(25·63.25)·0.75 = 28.46 in; available (168 − 20)/2 − 3 = 71 in.
+const ld = (fy / (25 * sqrtFcF)) * 0.75;
 // Bearing: φBn = 0.65·0.85 f'c A1 (column) and ·min(√(A2/A1), 2) (footing), A2 from a 1:2 frustum:
 // side 20 + 2·min(2·32, 74) = 148 in (ACI 318-19 §22.8.3.2, CONFIRMED-indirect).
 const A2 = (c + 2 * Math.min(2 * hf, (Bin - c) / 2)) ** 2;
@@ -274,21 +278,22 @@ describe('load-path.lt at its defaults (ACI 318-19)', () => {
     near(run.num('q_net'), qNet); // 2280 psf
     near(run.num('A_req'), Areq); // 182.5 ft²
     near(run.ratio('area_ok'), Areq / 196);
-    near(run.num('d_f'), 28);
-    near(run.num('Vu_f2'), VuF2 / 1000); // 490.1 kip
-    near(run.num('vc_f'), 4 * lamSF * sqrtFcF); // 183.5 psi
-    near(run.num('phiVc_f2'), phiVcF2(lamSF) / 1000); // 740.0 kip
+    near(run.num('d_f'), 28.25);
+    near(run.num('Vu_f2'), VuF2 / 1000); // 489.7 kip
+    near(run.num('vc_f'), 4 * lamSF * sqrtFcF); // 182.9 psi
+    near(run.num('phiVc_f2'), phiVcF2(lamSF) / 1000); // 748.0 kip
+    near(run.num('s_max_f'), 7.5);
     // Square column: the same in both directions (§13.2.7.1, §13.2.7.2 in each direction).
     for (const k of ['1', '2']) {
       near(run.num(`Mu_f${k}`), MuF / 1000); // 724.8 kip·ft
       near(run.num(`As_f${k}`), AsF); // 9.677 in² (minimum governs)
-      expect(run.num(`n_f${k}`)).toBe(13);
-      near(run.num(`s_f${k}`), (Bin - 6 - 1) / 12); // 13.42 in
+      expect(run.num(`n_f${k}`)).toBe(23);
+      near(run.num(`s_f${k}`), sF); // 7.33 in
       near(run.ratio(`flexure_f${k}_ok`), MuF / phiMnF);
-      near(run.num(`Vu_ow${k}`), VuF1 / 1000); // 146.1 kip
-      near(run.num(`phiVc_ow${k}`), phiVcF1_19 / 1000); // 168.0 kip
+      near(run.num(`Vu_ow${k}`), VuF1 / 1000); // 145.3 kip
+      near(run.num(`phiVc_ow${k}`), phiVcF1_19 / 1000); // 167.6 kip
     }
-    near(run.num('ld'), ld); // 47.43 in
+    near(run.num('ld'), ld); // 28.46 in
     near(run.num('ld_avail'), 71);
     near(run.num('A2'), A2 / 144); // 152.1 ft²
     near(run.num('phiBn_col'), phiBnCol / 1000); // 1105 kip
@@ -315,9 +320,9 @@ describe('load-path.lt with edition = 318-14', () => {
     // No λs in 318-14: footing vc = 4√f'c = 253.0 psi, φVc = 0.75·253.0·192·28 = 1020 kip.
     near(run.num('vc_f'), 4 * sqrtFcF);
     near(run.num('phiVc_f2'), phiVcF2(1) / 1000);
-    // One-way: φVc = 0.75·2√f'c·bw·d = 0.75·2·63.25·168·28 = 446.3 kip.
+    // One-way: φVc = 0.75·2√f'c·bw·d = 0.75·2·63.25·168·28.25 = 450.2 kip.
     near(run.num('phiVc_ow1'), phiVcF1_14 / 1000);
-    near(run.num('phiVc_ow2'), 446.3);
+    near(run.num('phiVc_ow2'), 450.2);
     // §8.6.1.2 is new in 318-19: no minimum top steel over the column.
     expect(run.val('top_min')).toBe(false);
     expect(run.num('As_top_min')).toBe(0);
