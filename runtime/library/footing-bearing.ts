@@ -1,9 +1,10 @@
-// Bearing at the column–footing interface (ACI 318-19 §22.8) and the minimum dowels
-// across it (§16.3.4.1). Table 22.8.3.2 and the clause numbers are from memory;
+// Bearing at the column–footing interface (ACI 318-19 §22.8) and the dowels across it:
+// the compression beyond the bearing strength (§16.3.1.2(a)) and at least 0.005 Ag (§16.3.4.1). Table 22.8.3.2 and the clause numbers are from memory;
 // the form Bn = 0.85 f'c A1 √(A2/A1), √(A2/A1) ≤ 2, φ = 0.65 is the textbook one.
 
 import { LibraryError, defineFunction, type LibFunction } from './types';
-import { optional, positive } from './support-args';
+import { nonNegative, optional, positive } from './support-args';
+import { ksi } from '../units/si';
 
 /**
  * A2: base of the largest frustum with 1 vertical : 2 horizontal sides wholly inside the
@@ -38,6 +39,32 @@ export function phiBnBearing(fc: number, a1: number, a2?: number): number {
 /** As,min of dowels = 0.005 Ag of the supported column (ACI 318-19 §16.3.4.1). */
 export function asDowelMin(ag: number): number {
   return 0.005 * positive('Ag', ag);
+}
+
+/** φ of bars in compression across the interface: compression-controlled, tied (Table 21.2.2; textbook use, from memory). */
+const PHI_DOWEL = 0.65;
+/** fy of bars in axial compression is not taken above 80 ksi (ACI 318-19 §22.4.2.1 / Table 20.2.2.4(a), from memory). */
+const FY_AXIAL_CAP = 80 * ksi;
+
+export interface DowelDemand {
+  excess: number; // Pu − φBn, not below 0, N
+  fyUsed: number; // Pa
+  asExcess: number; // (Pu − φBn)/(φ fy), m²
+  asMin: number; // 0.005 Ag, m²
+  asReq: number; // the larger, m²
+}
+
+/**
+ * Dowels across the column–footing interface: the compression beyond the design bearing strength
+ * goes to the bars, As ≥ (Pu − φBn)/(φ fy) (ACI 318-19 §16.3.1.2(a), from memory), and As ≥ 0.005 Ag (§16.3.4.1).
+ */
+export function dowelDemand(pu: number, phiBn: number, fy: number, ag: number): DowelDemand {
+  const excess = Math.max(0, nonNegative('Pu', pu) - positive('φBn', phiBn));
+  const fyUsed = Math.min(positive('fy', fy), FY_AXIAL_CAP);
+  const asExcess = excess / (PHI_DOWEL * fyUsed);
+  const asMin = asDowelMin(ag);
+  const asReq = Math.max(asExcess, asMin);
+  return { excess, fyUsed, asExcess, asMin, asReq };
 }
 
 const bearingParams = [
@@ -86,5 +113,18 @@ export const functions: LibFunction[] = [
     clause: 'ACI 318-19 §16.3.4.1: dowels across the column–footing interface ≥ 0.005Ag',
     doc: 'Minimum area of dowels between a column and its footing',
     fn: asDowelMin,
+  }),
+  defineFunction({
+    name: 'as_dowel_req',
+    params: [
+      { name: 'Pu', type: 'N', doc: 'factored column load at the interface' },
+      { name: 'phiBn', type: 'N', doc: 'design bearing strength, the lesser of the column and the footing' },
+      { name: 'fy', type: 'Pa', doc: 'dowel yield strength (taken ≤ 80 ksi in compression)' },
+      { name: 'Ag', type: 'm^2', doc: 'gross area of the supported column' },
+    ],
+    returns: 'm^2',
+    clause: 'ACI 318-19 §16.3.1.2(a): As ≥ (Pu − φBn)/(φ·fy), φ = 0.65, fy ≤ 80 ksi [from memory]; §16.3.4.1: As ≥ 0.005Ag',
+    doc: 'Dowel area needed across the column–footing interface: the bearing excess and the minimum, the larger',
+    fn: (pu: number, pb: number, fy: number, ag: number) => dowelDemand(pu, pb, fy, ag).asReq,
   }),
 ];

@@ -33,6 +33,18 @@ describe('bearing at the column–footing interface, ACI 318-19 §22.8', () => {
     expect(num('phi_bn_bearing', 25 * MPa, 0.2025, a2) / kN).toBeCloseTo(5594.0625, 4);
   });
 
+  it('dowels carry the bearing excess: As ≥ max((Pu − φBn)/(φ fy), 0.005 Ag)', () => {
+    // ACI 318-19 §16.3.1.2(a) and §16.3.4.1 (from memory), φ = 0.65 (textbook use, from memory):
+    // Pu = 600 kip on φBn = 447.5 kip, Grade 60: (600 − 447.5)/(0.65·60) = 3.910 in² > 0.005·324 = 1.62 in².
+    expect(num('as_dowel_req', 600 * kip, 447.5 * kip, 60000 * psi, 324 * in2) / in2).toBeCloseTo(152.5 / 39, 9);
+    // No excess: the minimum governs.
+    expect(num('as_dowel_req', 400 * kip, 447.5 * kip, 60000 * psi, 324 * in2) / in2).toBeCloseTo(1.62, 9);
+    // fy is not taken above 80 ksi for bars in compression (§22.4.2.1, from memory): 152.5/(0.65·80) = 2.933 in².
+    expect(num('as_dowel_req', 600 * kip, 447.5 * kip, 100000 * psi, 324 * in2) / in2).toBeCloseTo(152.5 / 52, 9);
+    // SI: Pu = 3000 kN, φBn = 2500 kN, fy = 420 MPa, Ag = 0.16 m²: 500e3/(0.65·420e6) = 1831.5 mm² > 800 mm².
+    expect(num('as_dowel_req', 3000 * kN, 2500 * kN, 420 * MPa, 0.16) / (mm * mm)).toBeCloseTo(500e3 / (0.65 * 420), 6);
+  });
+
   it('dowels: 0.005 Ag', () => {
     // reference-values.md e.5 [CONFIRMED-indirect]: 0.005·324 = 1.62 in²
     expect(num('as_dowel_min', 324 * in2) / in2).toBeCloseTo(1.62, 10);
