@@ -8,11 +8,16 @@ import { functions as punchingDropPanel } from './punching-drop-panel';
 import { functions as punchingMomentTransfer } from './punching-moment-transfer';
 import { functions as columnAxial } from './column-axial';
 import { functions as columnSlenderness } from './column-slenderness';
+import { functions as columnInteraction } from './column-interaction';
+import { functions as columnBiaxial } from './column-biaxial';
+import { functions as columnMoment } from './column-moment';
+import { functions as columnPosition } from './column-position';
 import { functions as footingArea } from './footing-area';
 import { functions as footingShear } from './footing-shear';
 import { functions as footingFlexure } from './footing-flexure';
 import { functions as footingDevelopment } from './footing-development';
 import { functions as footingBearing } from './footing-bearing';
+import { functions as footingDowels } from './footing-dowels';
 import { functions as soilPresumptive } from './soil-presumptive';
 import { functions as soilBearingTerzaghi } from './soil-bearing-terzaghi';
 import { functions as soilBearingGeneral } from './soil-bearing-general';
@@ -25,11 +30,16 @@ export const supportFunctions: LibFunction[] = [
   ...punchingMomentTransfer,
   ...columnAxial,
   ...columnSlenderness,
+  ...columnInteraction,
+  ...columnBiaxial,
+  ...columnMoment,
+  ...columnPosition,
   ...footingArea,
   ...footingShear,
   ...footingFlexure,
   ...footingDevelopment,
   ...footingBearing,
+  ...footingDowels,
   ...soilPresumptive,
   ...soilBearingTerzaghi,
   ...soilBearingGeneral,

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { supportFunctions } from '../../runtime/library/group-support';
 
-const TYPES = new Set(['m', 'Pa', 'N', 'N*m', 'N/m', 'N/m^2', 'N/m^3', 'm^2', 'm^4', 'rad', '1', 'text', 'bool']);
+const TYPES = new Set(['m', 'Pa', 'N', 'N*m', 'N/m', 'N/m^2', 'N/m^3', 'm^2', 'm^4', 'N*m^2', 'rad', '1', 'text', 'bool']);
 
 describe('support group: the contract the engine relies on', () => {
   it('names are unique, lower_snake, and every function has a clause and doc', () => {
@@ -40,7 +40,8 @@ describe('support group: the contract the engine relies on', () => {
   it('the support files stay DOM-free and do not reach into cells/', () => {
     const files = ['support-args', 'shear-size-effect', 'punching-perimeter', 'punching-stress', 'punching-drop-panel',
       'punching-moment-transfer', 'column-axial', 'column-slenderness', 'footing-area', 'footing-shear',
-      'footing-flexure', 'footing-development', 'footing-bearing', 'soil-presumptive', 'soil-bearing-terzaghi',
+      'footing-flexure', 'footing-development', 'footing-bearing', 'footing-dowels', 'column-section',
+      'column-interaction', 'column-biaxial', 'column-moment', 'column-position', 'soil-presumptive', 'soil-bearing-terzaghi',
       'soil-bearing-general', 'group-support'];
     for (const f of files) {
       const src = readFileSync(new URL(`../../runtime/library/${f}.ts`, import.meta.url), 'utf8');

@@ -1,0 +1,197 @@
+// What changes along the load path when a column sits at a slab edge or corner rather than
+// inside: the tributary area, KLL, the direct design moments at the column line, the
+// effective slab width for moment transfer by flexure, and the punching stress with the
+// unbalanced moments about both axes. The slab edge is taken flush with the outer column
+// faces. Convention as in punching-perimeter.ts: c1 is the column side perpendicular to the
+// edge (direction 1, the span whose moment is transferred), c2 the side along it. Plain
+// functions on SI numbers with the position as an argument, so a building model can call
+// them per column mark.
+
+import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
+import { finite, nonNegative, optional, positive } from './support-args';
+import { POSITIONS, boPunch, criticalSection, position, type Position } from './punching-perimeter';
+import { gammaV, sectionProperties } from './punching-moment-transfer';
+import { kll } from './loads-reduction';
+import { tribArea } from './loads-tributary';
+import { END_CASES, ddmCsFraction, ddmEndCoef, ddmInteriorCoef, type EndCase } from './slab-ddm';
+
+/** KLL of ASCE 7-22 Table 4.7-1: 4 interior and exterior columns without cantilever slabs; 3 edge, 2 corner with them. */
+export function kllColumn(pos: Position, cantilever = false): number {
+  if (pos === 'interior' || !cantilever) return kll(pos === 'interior' ? 'interior-column' : 'exterior-column');
+  return kll(pos === 'edge' ? 'edge-column-cantilever' : 'corner-column-cantilever');
+}
+
+/** Tributary area with the slab edge flush with the outer column faces (half-bay rule, common practice). */
+export function tribAreaColumn(l1: number, l2: number, c1: number, c2: number, pos: Position): number {
+  positive('c1', c1);
+  positive('c2', c2);
+  if (pos === 'interior') return tribArea(l1, l2, 'interior');
+  if (pos === 'edge') return tribArea(l1, l2, 'edge', c1 / 2);
+  return tribArea(l1, l2, 'corner', c1 / 2, c2 / 2);
+}
+
+/** Width of the design frame in direction 1: ℓ2, or for a corner the edge frame ℓ2/2 + c2/2 (ACI 318-19 §8.4.1.2, common practice for the edge). */
+export function frameWidth(l2: number, c2: number, pos: Position): number {
+  positive('l2', l2);
+  positive('c2', c2);
+  return pos === 'corner' ? l2 / 2 + c2 / 2 : l2;
+}
+
+/** Negative moment at the column line as a fraction of Mo: 0.65 interior span (§8.10.4.1), the exterior negative of Table 8.10.4.2 at an edge. */
+export function ddmColumnCoef(pos: Position, endCase: EndCase = 'no-beams'): number {
+  return pos === 'interior' ? ddmInteriorCoef('negative') : ddmEndCoef(endCase, 'negative-exterior');
+}
+
+/** Positive moment of the span next to the column: 0.35 interior (§8.10.4.1), the end span of Table 8.10.4.2 at an edge. */
+export function ddmSpanCoef(pos: Position, endCase: EndCase = 'no-beams'): number {
+  return pos === 'interior' ? ddmInteriorCoef('positive') : ddmEndCoef(endCase, 'positive');
+}
+
+/** Column-strip share of that negative moment: Table 8.10.5.1 interior, Table 8.10.5.2 exterior (βt of the edge beam). */
+export function csColumnFraction(pos: Position, l2OverL1: number, alphaRatio = 0, betaT = 0): number {
+  return ddmCsFraction(pos === 'interior' ? 'negative-interior' : 'negative-exterior', l2OverL1, alphaRatio, betaT);
+}
+
+/** bslab = c2 + 1.5h each side of the column; at a corner one side only (ACI 318-19 §8.4.2.2.3). */
+export function bSlabTransfer(c2: number, h: number, pos: Position): number {
+  positive('c2', c2);
+  positive('h', h);
+  return pos === 'corner' ? c2 + 1.5 * h : c2 + 3 * h;
+}
+
+export interface AcrossProperties {
+  /** γv for the moment about the axis perpendicular to the edge (roles of b1 and b2 swapped). */
+  gammaV: number;
+  c: number;
+  jc: number;
+}
+
+/**
+ * The critical section's properties for the moment about the second axis (the axis along
+ * direction 1): interior and corner by swapping c1 and c2; edge by the sum over its three
+ * sides, symmetric about that axis (ACI 318-19 R8.4.4.2.3, same sum of sides).
+ */
+export function acrossProperties(c1: number, c2: number, d: number, pos: Position): AcrossProperties {
+  if (pos !== 'edge') {
+    const s = criticalSection(c2, c1, d, pos);
+    const p = sectionProperties(c2, c1, d, pos);
+    return { gammaV: gammaV(s.b1, s.b2), c: p.cAB, jc: p.jc };
+  }
+  const { b1, b2 } = criticalSection(c1, c2, d, pos);
+  // The b2 face (across the axis) counts its polar moment; the two b1 faces lie at ±b2/2.
+  const jc = (d * b2 ** 3) / 12 + (b2 * d ** 3) / 12 + 2 * b1 * d * (b2 / 2) ** 2;
+  return { gammaV: gammaV(b2, b1), c: b2 / 2, jc };
+}
+
+export interface BiaxialPunching {
+  direct: number;
+  fromM1: number;
+  fromM2: number;
+  vu: number;
+}
+
+/**
+ * vu = Vu/(bo d) + γv1 Msc1 c1/Jc1 + γv2 Msc2 c2/Jc2, the three added at the corner of the
+ * section where they meet (ACI 318-19 R8.4.4.2.3; adding both is conservative, common practice).
+ */
+export function vuPunchBiaxial(vu: number, msc1: number, msc2: number, c1: number, c2: number, d: number, pos: Position): BiaxialPunching {
+  const V = nonNegative('Vu', vu);
+  const M1 = Math.abs(finite('Msc1', msc1));
+  const M2 = Math.abs(finite('Msc2', msc2));
+  const s = criticalSection(c1, c2, d, pos);
+  const p1 = sectionProperties(c1, c2, d, pos);
+  const direct = V / (boPunch(c1, c2, d, pos) * d);
+  const fromM1 = (gammaV(s.b1, s.b2) * M1 * p1.cAB) / p1.jc;
+  const across = acrossProperties(c1, c2, d, pos);
+  const fromM2 = (across.gammaV * M2 * across.c) / across.jc;
+  return { direct, fromM1, fromM2, vu: direct + fromM1 + fromM2 };
+}
+
+// ---- formula functions ----------------------------------------------------------------
+
+const POS: LibParam = { name: 'position', type: 'text', choices: POSITIONS, doc: "'interior', 'edge' or 'corner'" };
+const END: LibParam = { name: 'end_case', type: 'text', choices: END_CASES, doc: "Table 8.10.4.2 row (default 'no-beams': flat plate without edge beam)" };
+const endCase = (v: unknown): EndCase => optional(v, 'no-beams' as EndCase, (x) => {
+  if (typeof x === 'string' && (END_CASES as string[]).includes(x)) return x as EndCase;
+  throw new LibraryError(`unknown end_case ${String(x)}; expected one of ${END_CASES.join(', ')}`);
+});
+
+export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'kll_column',
+    params: [POS, { name: 'cantilever', type: 'bool', doc: 'cantilever slab beyond the edge (default false)' }],
+    optional: 1,
+    returns: '1',
+    clause: 'ASCE 7-22 Table 4.7-1 (columns: 4; edge with cantilever slabs 3, corner with cantilever slabs 2)',
+    doc: 'Live load element factor KLL of a column by its position',
+    fn: (p: string, cant?: boolean) => kllColumn(position(p), cant === undefined ? false : Boolean(cant)),
+  }),
+  defineFunction({
+    name: 'trib_area_col',
+    params: [{ name: 'l1', type: 'm', doc: 'span in direction 1 (perpendicular to the edge)' },
+      { name: 'l2', type: 'm', doc: 'span in direction 2 (along the edge)' },
+      { name: 'c1', type: 'm', doc: 'column side in direction 1' }, { name: 'c2', type: 'm', doc: 'column side in direction 2' }, POS],
+    returns: 'm^2',
+    clause: 'Half-bay rule, slab edge flush with the outer column faces (common practice)',
+    doc: 'Tributary area of an interior, edge or corner column',
+    fn: (l1: number, l2: number, c1: number, c2: number, p: string) => tribAreaColumn(l1, l2, c1, c2, position(p)),
+  }),
+  defineFunction({
+    name: 'frame_width',
+    params: [{ name: 'l2', type: 'm', doc: 'transverse span' }, { name: 'c2', type: 'm', doc: 'column side along the edge' }, POS],
+    returns: 'm',
+    clause: 'ACI 318-19 §8.4.1.2 design strip; edge frame ℓ2/2 + c2/2 at a corner (common practice)',
+    doc: 'Width of the frame whose moment the column takes in direction 1',
+    fn: (l2: number, c2: number, p: string) => frameWidth(l2, c2, position(p)),
+  }),
+  defineFunction({
+    name: 'ddm_column_coef',
+    params: [POS, END],
+    optional: 1,
+    returns: '1',
+    clause: 'ACI 318-19 §8.10.4.1 (interior 0.65), Table 8.10.4.2 exterior negative (edge, corner)',
+    doc: 'Negative moment at the column line as a fraction of Mo',
+    fn: (p: string, e?: string) => ddmColumnCoef(position(p), endCase(e)),
+  }),
+  defineFunction({
+    name: 'ddm_span_coef',
+    params: [POS, END],
+    optional: 1,
+    returns: '1',
+    clause: 'ACI 318-19 §8.10.4.1 (interior 0.35), Table 8.10.4.2 positive (end span)',
+    doc: 'Positive moment of the span next to the column as a fraction of Mo',
+    fn: (p: string, e?: string) => ddmSpanCoef(position(p), endCase(e)),
+  }),
+  defineFunction({
+    name: 'cs_column_fraction',
+    params: [POS, { name: 'l2_l1', type: '1', doc: 'ℓ2/ℓ1' }, { name: 'alpha_l2_l1', type: '1', doc: 'αf1ℓ2/ℓ1 (0 for a flat plate)' },
+      { name: 'beta_t', type: '1', doc: 'torsional stiffness ratio βt of an edge beam (0 without one)' }],
+    optional: 2,
+    returns: '1',
+    clause: 'ACI 318-19 Table 8.10.5.1 (interior), Table 8.10.5.2 (exterior) [from memory]',
+    doc: 'Column-strip share of the negative moment at the column line',
+    fn: (p: string, r: number, a?: number, b?: number) =>
+      csColumnFraction(position(p), r, optional(a, 0, (v) => nonNegative('alpha_l2_l1', v)), optional(b, 0, (v) => nonNegative('beta_t', v))),
+  }),
+  defineFunction({
+    name: 'b_slab_transfer',
+    params: [{ name: 'c2', type: 'm', doc: 'column side along the edge (across the moment)' }, { name: 'h', type: 'm', doc: 'slab (or drop) thickness' }, POS],
+    returns: 'm',
+    clause: 'ACI 318-19 §8.4.2.2.3: bslab = c2 + 1.5h each side (one side at a corner)',
+    doc: 'Effective slab width that takes γf Msc by flexure',
+    fn: (c2: number, h: number, p: string) => bSlabTransfer(c2, h, position(p)),
+  }),
+  defineFunction({
+    name: 'vu_punch_biaxial',
+    params: [{ name: 'Vu', type: 'N', doc: 'factored shear on the critical section' },
+      { name: 'Msc1', type: 'N*m', doc: 'unbalanced moment from the direction-1 span' },
+      { name: 'Msc2', type: 'N*m', doc: 'unbalanced moment from the direction-2 span' },
+      { name: 'c1', type: 'm', doc: 'column side in direction 1 (perpendicular to the edge)' },
+      { name: 'c2', type: 'm', doc: 'column side in direction 2' }, { name: 'd', type: 'm', doc: 'effective depth' }, POS],
+    returns: 'Pa',
+    clause: 'ACI 318-19 §8.4.4.2.3, R8.4.4.2.3: vu = Vu/(bo d) + Σ γv Msc c/Jc about both axes (added: common practice)',
+    doc: 'Largest punching shear stress with unbalanced moments about both axes',
+    fn: (v: number, m1: number, m2: number, c1: number, c2: number, d: number, p: string) =>
+      vuPunchBiaxial(v, m1, m2, c1, c2, d, position(p)).vu,
+  }),
+];
