@@ -7,10 +7,11 @@ import { OCCUPANCIES, type Occupancy } from '../library/loads-reduction';
 import { solvePlate, TABLE_NU } from '../library/plate';
 import { criticalSection, boPunch, POSITIONS, position } from '../library/punching-perimeter';
 import { BARS, barDia } from '../library/rebar';
-import { choice, nonNegative, positive } from '../library/support-args';
+import { choice, finite, nonNegative, positive } from '../library/support-args';
+import { SECTION_PARAMS, interactionCurve, momentStrengthAt, pmRatio, sectionOf } from '../library/column-interaction';
 import { LibraryError, type LibFunction, type LibParam } from '../library/types';
 import { EDGE_DOC } from '../plate/edges';
-import type { FigureSpec, FootingSpec, LoadPathSpec, PlateField, PlateSpec, PunchingSpec } from './spec';
+import type { FigureSpec, FootingSpec, InteractionSpec, LoadPathSpec, PlateField, PlateSpec, PunchingSpec } from './spec';
 
 /** A figure function: typed like a library function, returning a spec (units filled in by the engine). */
 export interface FigureFunction {
@@ -89,6 +90,26 @@ export function loadPath(floors: number, AT: number, Dfloor: number, Lfloor: num
   return { ...BLANK, figure: 'load-path', hStorey, levels };
 }
 
+export function interactionDiagram(pu: number, mu: number, fc: number, fy: number, b: number, h: number,
+  nB: number, nH: number, bar: string, dS: number, ed?: string): InteractionSpec {
+  const s = sectionOf(fc, fy, b, h, nB, nH, bar, dS, ed);
+  const P = nonNegative('Pu', pu);
+  const M = Math.abs(finite('Mu', mu));
+  const curve = interactionCurve(s, 140);
+  const cap = curve.limits.phiPnMax;
+  return {
+    ...BLANK, figure: 'interaction', b, h, bar, db: barDia(bar), nB, nH, dS,
+    nominal: curve.points.map((q) => ({ p: q.pn, m: q.mn })),
+    // The design curve stops at φPn,max (ACI 318-19 §22.4.2.1): flat across the top.
+    design: curve.points.map((q) => ({ p: Math.min(q.phiPn, cap), m: q.phiMn })),
+    phiPnMax: cap,
+    balanced: { p: curve.balanced.pn, m: curve.balanced.mn },
+    demand: { p: P, m: M },
+    phiMnAtPu: momentStrengthAt(s, P).phiMn,
+    ratio: pmRatio(s, P, M),
+  };
+}
+
 const P = (name: string, type: string, doc: string, choices?: readonly string[]): LibParam =>
   choices ? { name, type, doc, choices } : { name, type, doc };
 
@@ -146,6 +167,14 @@ export const FIGURE_FUNCTIONS: readonly FigureFunction[] = [
     clause: 'ASCE 7-16 §2.3.1, §2.4.1 on loads accumulated per ASCE 7-22 §4.7',
     doc: 'Elevation of the column from roof to footing with the axial load accumulated at each level',
     build: loadPath,
+  },
+  {
+    name: 'interaction_diagram',
+    params: [P('Pu', 'N', 'factored axial load (compression positive)'), P('Mu', 'N*m', 'factored moment about the same axis'), ...SECTION_PARAMS],
+    optional: 1,
+    clause: 'ACI 318-19 §22.2 (strain compatibility), Table 21.2.2 (φ from εt), §22.4.2.1 (φPn,max)',
+    doc: 'P–M interaction diagram of a tied rectangular column, nominal and design, with the factored demand',
+    build: interactionDiagram,
   },
 ];
 

@@ -3,6 +3,7 @@
 import type { Cell } from '../document';
 import type { CellState } from '../engine-types';
 import { renderFootingDrawing } from './footing';
+import { renderInteraction } from './interaction';
 import { renderLoadPath } from './load-path';
 import { renderPlateMap } from './plate';
 import { renderPunching } from './punching';
@@ -15,6 +16,7 @@ export function renderFigure(spec: FigureSpec): string {
     case 'footing': return renderFootingDrawing(spec);
     case 'plate': return renderPlateMap(spec);
     case 'load-path': return renderLoadPath(spec);
+    case 'interaction': return renderInteraction(spec);
   }
 }
 

@@ -77,7 +77,35 @@ export interface LoadPathSpec extends FigureBase {
   levels: LoadLevel[];
 }
 
-export type FigureSpec = PunchingSpec | FootingSpec | PlateSpec | LoadPathSpec;
+/** A point of an interaction diagram: axial force (compression positive), N, and moment, N·m. */
+export interface PMPoint {
+  p: number;
+  m: number;
+}
+
+export interface InteractionSpec extends FigureBase {
+  figure: 'interaction';
+  /** Section: b across the bending axis, h in the direction of bending, m; bars on each face. */
+  b: number;
+  h: number;
+  bar: string;
+  db: number;
+  nB: number;
+  nH: number;
+  dS: number;
+  /** Nominal (Pn, Mn) and design (φPn, φMn) curves from pure compression to pure tension. */
+  nominal: PMPoint[];
+  design: PMPoint[];
+  /** The cap φPn,max (ACI 318-19 §22.4.2.1) and the balanced point (nominal). */
+  phiPnMax: number;
+  balanced: PMPoint;
+  /** The factored demand (Pu, Mu), φMn at Pu and the ratio along the load line. */
+  demand: PMPoint;
+  phiMnAtPu: number;
+  ratio: number;
+}
+
+export type FigureSpec = PunchingSpec | FootingSpec | PlateSpec | LoadPathSpec | InteractionSpec;
 
 /** One plotted result of a sweep. */
 export interface SweepSeries {

@@ -5,17 +5,17 @@ import { formatNumber } from '../formula/display';
 import { unitInfo } from '../units/dimension';
 import type { FigureBase, UnitSystem } from './spec';
 
-export type Quantity = 'length' | 'span' | 'force' | 'pressure' | 'soil' | 'moment' | 'deflection';
+export type Quantity = 'length' | 'span' | 'force' | 'pressure' | 'soil' | 'moment' | 'bending' | 'deflection';
 
 /** Usual unit per quantity and system: [unit to convert with, text to show]. */
 const DEFAULTS: Record<UnitSystem, Record<Quantity, [string, string]>> = {
   US: {
     length: ['in', 'in'], span: ['ft', 'ft'], force: ['kip', 'kip'], pressure: ['psf', 'psf'],
-    soil: ['ksf', 'ksf'], moment: ['kip', 'kip·ft/ft'], deflection: ['in', 'in'],
+    soil: ['ksf', 'ksf'], moment: ['kip', 'kip·ft/ft'], bending: ['kip*ft', 'kip·ft'], deflection: ['in', 'in'],
   },
   SI: {
     length: ['mm', 'mm'], span: ['m', 'm'], force: ['kN', 'kN'], pressure: ['kPa', 'kPa'],
-    soil: ['kPa', 'kPa'], moment: ['kN', 'kN·m/m'], deflection: ['mm', 'mm'],
+    soil: ['kPa', 'kPa'], moment: ['kN', 'kN·m/m'], bending: ['kN*m', 'kN·m'], deflection: ['mm', 'mm'],
   },
 };
 
