@@ -29,7 +29,25 @@ async function loadDocument(file: string, err: (s: string) => void): Promise<{ d
   return { doc, broken: errors.length > 0 || source.problems.length > 0 };
 }
 
+/**
+ * What the CLI says when Loadtrace itself fails (a fault of ours, not of the document):
+ * exit 2, never 1, which means "a check fails".
+ */
+export function crashMessage(e: unknown): string {
+  const what = e instanceof Error ? `${e.name}: ${e.message}` : String(e);
+  return `the engine failed (${what}); this is a fault in Loadtrace, not a result: no check was decided`;
+}
+
 export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
+  try {
+    return await calc(args, out, err);
+  } catch (e) {
+    err(crashMessage(e));
+    return 2;
+  }
+}
+
+async function calc(args: CalcArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
   const loaded = await loadDocument(args.file, err);
   if (!loaded) return 2;
   let doc: CalcDocument = loaded.doc;
@@ -86,6 +104,13 @@ async function main(): Promise<void> {
     }
     throw e;
   }
+  // A fault outside runCalc's own await (a timer, a stray promise) is still exit 2.
+  const crash = (e: unknown) => {
+    console.error(crashMessage(e));
+    process.exit(2);
+  };
+  process.on('uncaughtException', crash);
+  process.on('unhandledRejection', crash);
   const code = await runCalc(args, (s) => console.log(s), (s) => console.error(s));
   process.exitCode = code;
 }

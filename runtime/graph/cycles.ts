@@ -68,19 +68,23 @@ export function loopMessages(ids: string[], edges: (id: string) => string[], nam
   return out;
 }
 
+/** How many steps of a loop a message spells out; a longer loop is counted, not listed. */
+const LOOP_STEPS = 8;
+
 /** "a reads c, c reads b, b reads a": the loop walked along what each cell reads. */
 function describeLoop(loop: string[], edges: (id: string) => string[], nameOf: (id: string) => string): string {
   const members = new Set(loop);
   const steps: string[] = [];
   const visited = new Set<string>();
   let at = loop[0];
-  while (!visited.has(at)) {
+  while (!visited.has(at) && steps.length < LOOP_STEPS) {
     visited.add(at);
     const next = edges(at).find((e) => members.has(e) && (!visited.has(e) || e === loop[0]));
     if (!next) break;
     steps.push(`${nameOf(at)} reads ${nameOf(next)}`);
     at = next;
   }
+  if (loop.length > LOOP_STEPS) return `${steps.join(', ')}, … (a loop of ${loop.length} cells)`;
   const missed = loop.filter((id) => !visited.has(id)).map(nameOf);
   return steps.join(', ') + (missed.length ? `; also in the loop: ${missed.join(', ')}` : '');
 }

@@ -27,6 +27,7 @@ import { whatIfRun, type WhatIfGraph } from './what-if';
 import { Pacer } from './pacer';
 import { computeAfterThisTask } from './scheduling';
 import { CellNames } from './cell-names';
+import { upstreamFirst } from './upstream-first';
 
 export interface EngineOptions {
   functions?: readonly LibFunction[];
@@ -238,16 +239,15 @@ class DocEngine implements Engine {
   /** Compiles the affected cells, upstream first, then any reader whose input type changed. */
   private recompile(affected: Set<string>): void {
     const done = new Set<string>();
-    const visiting = new Set<string>();
     const queue = [...affected];
-    const ensure = (id: string) => {
-      if (done.has(id) || visiting.has(id)) return;
+    const { slots, owners } = this;
+    // Lazy, so a cell added to `affected` meanwhile is still waited for.
+    const upstream = function* (id: string) {
+      for (const r of slots.get(id)?.refs ?? []) for (const up of owners.get(r) ?? []) if (affected.has(up)) yield up;
+    };
+    const compile = (id: string) => {
       const slot = this.slots.get(id);
       if (!slot) return;
-      visiting.add(id);
-      for (const r of slot.refs) for (const up of this.owners.get(r) ?? []) if (affected.has(up)) ensure(up);
-      visiting.delete(id);
-      done.add(id);
       const before = slot.program?.type;
       const unitBefore = slot.program?.unit;
       this.compileSlot(slot);
@@ -265,7 +265,7 @@ class DocEngine implements Engine {
         }
       }
     };
-    for (let i = 0; i < queue.length; i++) ensure(queue[i]);
+    upstreamFirst(queue, upstream, compile, done);
   }
 
   private compileSlot(slot: Slot): void {

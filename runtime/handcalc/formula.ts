@@ -111,7 +111,18 @@ function buildTemplate(node: MathNode, isCell: (name: string) => boolean): TexTe
   });
   const slots: TexTemplate['slots'] = [];
   const options = (mode: Mode) => {
-    const handler = (n: any, opts: any): string | undefined => {
+    // mathjs's templates typeset a call's arguments twice (2^depth for nested calls):
+    // each node's TeX is made once per pass and reused, so typesetting stays linear.
+    const done = new Map<MathNode, string>();
+    const once = (n: any, opts: any): string => {
+      let tex = done.get(n);
+      if (tex === undefined) {
+        tex = own(n, opts) ?? (n._toTex(opts) as string);
+        done.set(n, tex);
+      }
+      return tex;
+    };
+    const own = (n: any, opts: any): string | undefined => {
       if (n.type === 'SymbolNode') {
         const name: string = n.name;
         if (isCell(name)) {
@@ -131,7 +142,7 @@ function buildTemplate(node: MathNode, isCell: (name: string) => boolean): TexTe
       if (n.type === 'ConstantNode' && typeof n.value === 'boolean') return textTex(n.value ? 'yes' : 'no');
       return undefined;
     };
-    return { implicit: 'hide', parenthesis: 'keep', handler } as any;
+    return { implicit: 'hide', parenthesis: 'keep', handler: once } as any;
   };
   const names = [...new Set(node.filter((n: any) => n.type === 'SymbolNode').map((n: any) => n.name as string))];
   const symbolic = node.toTex(options('symbolic'));
