@@ -13,7 +13,9 @@ export function inlineHtml(text: string): string {
   let out = '';
   let i = 0;
   // Order matters: code and math first, so their contents are not read as Markdown.
-  const re = /`([^`]+)`|\$([^$\n]+)\$|\*\*([^*]+)\*\*|\*([^*\s][^*]*)\*|\[([^\]]+)\]\(([^)\s]+)\)/g;
+  // No bracket inside a link's text or address: each try stops at the next one, so hostile
+  // text ("[a](" repeated) is read in linear time, not quadratic.
+  const re = /`([^`]+)`|\$([^$\n]+)\$|\*\*([^*]+)\*\*|\*([^*\s][^*]*)\*|\[([^[\]]+)\]\(([^()[\]\s]+)\)/g;
   for (let m = re.exec(text); m; m = re.exec(text)) {
     out += escapeHtml(text.slice(i, m.index));
     if (m[1] !== undefined) out += `<code>${escapeHtml(m[1])}</code>`;

@@ -15,7 +15,9 @@ function inline(text: string, depth = 0): string {
   if (depth > 4) return escapeHtml(text);
   let out = '';
   let i = 0;
-  const re = /`([^`]+)`|\$([^$\n]+)\$|\*\*([^*]+)\*\*|\*([^*\s][^*]*)\*|\[([^\]]+)\]\(([^)\s]+)\)/g;
+  // No bracket inside a link's text or address: each try stops at the next one, so hostile
+  // text ("[a](" repeated) is read in linear time, not quadratic.
+  const re = /`([^`]+)`|\$([^$\n]+)\$|\*\*([^*]+)\*\*|\*([^*\s][^*]*)\*|\[([^[\]]+)\]\(([^()[\]\s]+)\)/g;
   for (let m = re.exec(text); m; m = re.exec(text)) {
     out += escapeHtml(text.slice(i, m.index));
     if (m[1] !== undefined) out += `<code>${escapeHtml(m[1])}</code>`;
