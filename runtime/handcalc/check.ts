@@ -4,7 +4,7 @@
 import type { MathNode } from 'mathjs';
 import type { CellState } from '../engine-types';
 import { exprTex, parseForDisplay, type HandCalcScope } from './formula';
-import { nameTex, textTex } from './names';
+import { clippedTex, nameTex, textTex } from './names';
 import { numberTex, quantityTex } from './quantity';
 
 const RELATIONS: Record<string, { tex: string; demandFirst: boolean }> = {
@@ -46,7 +46,7 @@ export function checkTex(
   node: MathNode | undefined = parseForDisplay(expr),
 ): CheckTex {
   if (!node) {
-    const condition = textTex(expr);
+    const condition = clippedTex(expr);
     return { condition, line: condition };
   }
   const condition = exprTex(node, scope, 'symbolic');

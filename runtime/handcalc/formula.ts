@@ -3,9 +3,9 @@
 // to parse and typeset; nothing is evaluated.
 
 import type { MathNode } from 'mathjs';
-import { math } from '../units/math';
+import { MAX_FORMULA_LENGTH, parseFormula } from '../formula/parse';
 import type { CellState, DisplayValue } from '../engine-types';
-import { nameTex, textTex } from './names';
+import { clippedTex, nameTex, textTex } from './names';
 import { needsBrackets, quantityTex } from './quantity';
 
 /** What the typesetter needs to know about the cells a formula reads. */
@@ -33,16 +33,20 @@ function remember<K, V>(cache: Map<K, V>, key: K, value: V): V {
   return value;
 }
 
-/** Parses for display only; undefined when the text does not parse (the engine reports why). Cached by text. */
+/**
+ * Parses for display only, within the engine's limits (length, bracket depth); undefined
+ * when the text does not parse or is over them (the engine reports why). Cached by text.
+ */
 export function parseForDisplay(expr: string): MathNode | undefined {
   if (parsed.has(expr)) return parsed.get(expr);
   let node: MathNode | undefined;
   try {
-    node = math.parse(expr);
+    node = parseFormula(expr);
   } catch {
     node = undefined;
   }
-  return remember(parsed, expr, node);
+  // A text over the limit is not kept as a key: the cache holds formulas, not 10 MB strings.
+  return expr.length > MAX_FORMULA_LENGTH ? node : remember(parsed, expr, node);
 }
 
 type Mode = 'symbolic' | 'values';
@@ -222,7 +226,7 @@ export function formulaTex(
       parts.push(substituted);
     }
   } else {
-    symbolic = textTex(expr);
+    symbolic = clippedTex(expr);
     parts.push(symbolic);
   }
   const result = own && (own.status === 'ok' || own.status === 'fail') && own.display

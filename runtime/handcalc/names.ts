@@ -83,3 +83,12 @@ export function textTex(text: string): string {
   });
   return `\\text{${escaped}}`;
 }
+
+/** Longest text a hand calc sets as it is; longer text is cut and its length said. */
+const SHOWN_TEXT = 200;
+
+/** A formula the engine cannot read, set as text: cut short when long, so display stays small. */
+export function clippedTex(text: string): string {
+  if (text.length <= SHOWN_TEXT) return textTex(text);
+  return `${textTex(`${text.slice(0, SHOWN_TEXT)}…`)}\ \text{(${text.length.toLocaleString('en-US')} characters)}`;
+}

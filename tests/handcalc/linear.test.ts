@@ -39,3 +39,20 @@ describe('hand-calc typesetting is linear in the formula', () => {
     expect(() => katex.renderToString(t.line, { throwOnError: true, strict: 'ignore' })).not.toThrow();
   });
 });
+
+describe('a formula too long or too deep for the engine', () => {
+  it('a 10 MB formula typesets as a short text saying how long it is, without throwing', () => {
+    const expr = 'n + '.repeat(2_500_000) + 'n';
+    const t = formulaTex('big', expr, undefined, scope);
+    expect(t.symbolic!.length).toBeLessThan(400);
+    expect(t.symbolic).toMatch(/10,000,001 characters/);
+    expect(() => katex.renderToString(t.line, { throwOnError: true, strict: 'ignore' })).not.toThrow();
+  });
+
+  it('a check over 41-deep brackets typesets as its text', async () => {
+    const { checkTex } = await import('../../runtime/handcalc/index');
+    const expr = `${nested('sqrt', 41)} <= n`;
+    const t = checkTex(expr, undefined, scope);
+    expect(t.condition).toMatch(/^\\text\{sqrt\(sqrt/);
+  });
+});
