@@ -3,6 +3,7 @@
 // renderer draws. They are offered to figure cells only, so no formula holds a drawing.
 
 import { colPs, colPu } from '../library/loads-accumulation';
+import { ASCE_EDITIONS, asceEdition } from '../library/loads-combinations';
 import { OCCUPANCIES, type Occupancy } from '../library/loads-reduction';
 import { solvePlate, TABLE_NU } from '../library/plate';
 import { criticalSection, boPunch, POSITIONS, position } from '../library/punching-perimeter';
@@ -78,16 +79,16 @@ export function plateMap(a: number, b: number, edges: string, field: string, q?:
 }
 
 export function loadPath(floors: number, AT: number, Dfloor: number, Lfloor: number, Droof: number, Lroof: number,
-  wCol: number, hStorey: number, KLL: number, occupancy?: string): LoadPathSpec {
+  wCol: number, hStorey: number, KLL: number, occupancy?: string, Sroof?: number, asce?: string): LoadPathSpec {
   if (!Number.isInteger(floors) || floors < 0 || floors > 60) throw new LibraryError('floors must be a whole number from 0 to 60');
   positive('h_storey', hStorey);
   const occ = occupancy === undefined ? undefined : choice('occupancy', occupancy, OCCUPANCIES);
   const levels = [];
   for (let k = 0; k <= floors; k++) {
-    const c = { floors: k, AT, Dfloor, Lfloor, Droof, Lroof, wCol, hStorey, KLL, occupancy: occ as Occupancy | undefined };
+    const c = { floors: k, AT, Dfloor, Lfloor, Droof, Lroof, wCol, hStorey, KLL, occupancy: occ as Occupancy | undefined, Sroof, asce: asceEdition(asce) };
     levels.push({ name: k === 0 ? 'Roof' : `Level ${floors - k + 2}`, Pu: colPu(c), Ps: colPs(c) });
   }
-  return { ...BLANK, figure: 'load-path', hStorey, levels };
+  return { ...BLANK, figure: 'load-path', hStorey, asce: asceEdition(asce), levels };
 }
 
 export function interactionDiagram(pu: number, mu: number, fc: number, fy: number, b: number, h: number,
@@ -162,9 +163,11 @@ export const FIGURE_FUNCTIONS: readonly FigureFunction[] = [
       P('Lr', 'N/m^2', 'roof live load'), P('w_col', 'N/m', 'column self-weight per length'),
       P('h_storey', 'm', 'storey height'), P('KLL', '1', 'live load element factor'),
       P('occupancy', 'text', 'general, assembly or garage', OCCUPANCIES),
+      P('S_roof', 'N/m^2', 'roof snow load (strength-level under ASCE 7-22; default 0)'),
+      P('asce', 'text', "ASCE 7 edition: '7-22' (default) or '7-16'", ASCE_EDITIONS),
     ],
-    optional: 1,
-    clause: 'ASCE 7-16 §2.3.1, §2.4.1 on loads accumulated per ASCE 7-22 §4.7',
+    optional: 3,
+    clause: "ASCE 7-22 §2.3.1, §2.4.1 (edition '7-16': ASCE 7-16) on loads accumulated per ASCE 7-22 §4.7",
     doc: 'Elevation of the column from roof to footing with the axial load accumulated at each level',
     build: loadPath,
   },

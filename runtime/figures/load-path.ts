@@ -45,7 +45,7 @@ export function renderLoadPath(spec: LoadPathSpec): string {
   body += line(colX - 90, bottom + 22, colX + 90, bottom + 22, 'outline');
   body += text(colX + 56, bottom + 16, 'footing', 'small');
   const last = spec.levels[storeys - 1];
-  body += text(12, height - 18, `On the footing: Pu = ${show(spec, 'Pu', 'force', last.Pu)} (factored, ASCE 7-16 §2.3.1), Ps = ${show(spec, 'Ps', 'force', last.Ps)} (service, §2.4.1).`, 'small');
+  body += text(12, height - 18, `On the footing: Pu = ${show(spec, 'Pu', 'force', last.Pu)} (factored, ASCE ${spec.asce} §2.3.1), Ps = ${show(spec, 'Ps', 'force', last.Ps)} (service, §2.4.1).`, 'small');
 
   return svgDoc(W, height, 'Load path from roof to footing', body, { 'data-figure': 'load-path' });
 }

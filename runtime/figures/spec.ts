@@ -73,6 +73,8 @@ export interface LoadLevel {
 export interface LoadPathSpec extends FigureBase {
   figure: 'load-path';
   hStorey: number;
+  /** ASCE 7 edition of the load combinations, e.g. '7-22'. */
+  asce: string;
   /** From the roof down; the last one bears on the footing. */
   levels: LoadLevel[];
 }

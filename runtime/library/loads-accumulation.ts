@@ -2,12 +2,13 @@
 // section, each with the same tributary area, and one storey of column self-weight per
 // level carried (the section is at the foot of its own storey). Floor live load is reduced
 // once for the summed area of all floors supported (ASCE 7-22 §4.7.2, AT summed over the
-// floors, commentary C4.7); roof live load is taken unreduced (conservative).
+// floors, commentary C4.7); roof live load and snow are taken unreduced (conservative). The
+// combinations follow the ASCE 7 edition given (7-22 by default; it matters for snow only).
 
 import { defineFunction, type LibFunction } from './types';
 import { choice, count, nonNegative, positive } from './gravity-args';
 import { liveReduced, OCCUPANCIES, type Occupancy } from './loads-reduction';
-import { comboAsd, comboUGoverning } from './loads-combinations';
+import { ASCE_EDITIONS, asceEdition, comboAsd, comboUGoverning, type AsceEdition } from './loads-combinations';
 
 export interface ColumnLoads {
   floors: number;
@@ -20,6 +21,8 @@ export interface ColumnLoads {
   hStorey: number; // storey height, m
   KLL: number;
   occupancy?: Occupancy;
+  Sroof?: number; // roof snow load, Pa (strength-level under ASCE 7-22)
+  asce?: AsceEdition;
 }
 
 function checked(c: ColumnLoads): Required<ColumnLoads> {
@@ -34,6 +37,8 @@ function checked(c: ColumnLoads): Required<ColumnLoads> {
     hStorey: positive('h_storey', c.hStorey),
     KLL: positive('KLL', c.KLL),
     occupancy: choice('occupancy', c.occupancy, OCCUPANCIES, 'general'),
+    Sroof: c.Sroof === undefined ? 0 : nonNegative('S_roof', c.Sroof),
+    asce: asceEdition(c.asce),
   };
 }
 
@@ -57,14 +62,22 @@ export function colRoofLive(c: ColumnLoads): number {
   return k.AT * k.Lroof;
 }
 
-/** Factored axial load: governing ASCE 7-16 §2.3.1 gravity combination of the accumulated D, L, Lr. */
-export function colPu(c: ColumnLoads): number {
-  return comboUGoverning(colDead(c), colLive(c), colRoofLive(c)).value;
+/** Roof snow carried (unreduced). */
+export function colRoofSnow(c: ColumnLoads): number {
+  const k = checked(c);
+  return k.AT * k.Sroof;
 }
 
-/** Service axial load: governing ASCE 7-16 §2.4.1 gravity combination of the accumulated D, L, Lr. */
+/** Factored axial load: governing ASCE 7-22 §2.3.1 (or 7-16) gravity combination of the accumulated D, L, Lr, S. */
+export function colPu(c: ColumnLoads): number {
+  const ed = checked(c).asce;
+  return comboUGoverning(colDead(c), colLive(c), colRoofLive(c), colRoofSnow(c), 0, ed).value;
+}
+
+/** Service axial load: governing ASCE 7-22 §2.4.1 (or 7-16) gravity combination of the accumulated D, L, Lr, S. */
 export function colPs(c: ColumnLoads): number {
-  return comboAsd(colDead(c), colLive(c), colRoofLive(c));
+  const ed = checked(c).asce;
+  return comboAsd(colDead(c), colLive(c), colRoofLive(c), colRoofSnow(c), 0, ed);
 }
 
 // ---- formula functions ------------------------------------------------------------
@@ -80,17 +93,19 @@ const PARAMS = [
   { name: 'h_storey', type: 'm', doc: 'storey height' },
   { name: 'KLL', type: '1', doc: 'live load element factor' },
   { name: 'occupancy', type: 'text', choices: OCCUPANCIES, doc: 'general, assembly or garage' },
+  { name: 'S_roof', type: 'N/m^2', doc: 'roof snow load (strength-level under ASCE 7-22; default 0)' },
+  { name: 'asce', type: 'text', choices: ASCE_EDITIONS, doc: "ASCE 7 edition: '7-22' (default) or '7-16'" },
 ];
 
-type Args = [number, number, number, number, number, number, number, number, number, Occupancy?];
-const pack = ([floors, AT, Dfloor, Lfloor, Droof, Lroof, wCol, hStorey, KLL, occupancy]: Args): ColumnLoads =>
-  ({ floors, AT, Dfloor, Lfloor, Droof, Lroof, wCol, hStorey, KLL, occupancy });
+type Args = [number, number, number, number, number, number, number, number, number, Occupancy?, number?, AsceEdition?];
+const pack = ([floors, AT, Dfloor, Lfloor, Droof, Lroof, wCol, hStorey, KLL, occupancy, Sroof, asce]: Args): ColumnLoads =>
+  ({ floors, AT, Dfloor, Lfloor, Droof, Lroof, wCol, hStorey, KLL, occupancy, Sroof, asce });
 
 function entry(name: string, clause: string, doc: string, f: (c: ColumnLoads) => number): LibFunction {
   return defineFunction({
-    name, params: PARAMS, optional: 1, returns: 'N', clause, doc,
-    fn: (a: number, b: number, c: number, d: number, e: number, g: number, h: number, i: number, j: number, k?: Occupancy) =>
-      f(pack([a, b, c, d, e, g, h, i, j, k])),
+    name, params: PARAMS, optional: 3, returns: 'N', clause, doc,
+    fn: (a: number, b: number, c: number, d: number, e: number, g: number, h: number, i: number, j: number, k?: Occupancy, sr?: number, ed?: AsceEdition) =>
+      f(pack([a, b, c, d, e, g, h, i, j, k, sr, ed])),
   });
 }
 
@@ -99,8 +114,8 @@ export const functions: LibFunction[] = [
     'Accumulated dead load at the foot of the storey', colDead),
   entry('col_live', 'ASCE 7-22 §4.7.2-4.7.5 (AT summed over floors)',
     'Accumulated reduced floor live load', colLive),
-  entry('col_pu', 'ASCE 7-16 §2.3.1 on accumulated D, L (ASCE 7-22 §4.7), Lr',
+  entry('col_pu', "ASCE 7-22 §2.3.1 on accumulated D, L (§4.7), Lr, S (edition '7-16': ASCE 7-16 §2.3.1) [7-22 snow factors from memory]",
     'Factored column axial load, governing gravity combination', colPu),
-  entry('col_ps', 'ASCE 7-16 §2.4.1 on accumulated D, L (ASCE 7-22 §4.7), Lr',
+  entry('col_ps', "ASCE 7-22 §2.4.1 on accumulated D, L (§4.7), Lr, S (edition '7-16': ASCE 7-16 §2.4.1) [7-22 snow factors from memory]",
     'Service column axial load, governing ASD gravity combination', colPs),
 ];

@@ -1,57 +1,77 @@
-// Gravity load combinations. Strength design: ASCE 7-16 §2.3.1 (same factors as ASCE 7-10
-// §2.3.2 and IBC §1605.2) with wind, earthquake and other lateral actions left out. ASD:
-// ASCE 7-16 §2.4.1, used for service loads on the soil. The snow factors are those of
-// 7-16: ASCE 7-22 moved to strength-level snow loads and changed how S enters the
-// combinations (from memory), so S is not labelled 7-22 here.
+// Gravity load combinations, wind, earthquake and other lateral actions left out. Strength
+// design: ASCE 7-22 §2.3.1; ASD: ASCE 7-22 §2.4.1, used for service loads on the soil. The
+// edition matters for snow only: ASCE 7-22 gives strength-level snow loads, entering as 1.0S
+// where it leads and 0.3S as a companion, 0.7S in ASD; ASCE 7-16 (service-level S) has 1.6S,
+// 0.5S and 1.0S (7-22 factors from memory). D, L, Lr and R take the same factors in both.
 //
 // Each combination is written once on plain numbers; the formula functions come in two
 // dimensions: pressures (N/m^2, area loads) and forces (N, column and footing loads).
 
 import { defineFunction, type LibFunction, type LibParam } from './types';
-import { nonNegative } from './gravity-args';
+import { choice, nonNegative } from './gravity-args';
 
-/** The variable roof load of the combinations: the larger of Lr, S and R. */
-function roofLoad(Lr: number, S: number, R: number): number {
-  return Math.max(Lr, S, R);
+export const ASCE_EDITIONS = ['7-22', '7-16'] as const;
+export type AsceEdition = (typeof ASCE_EDITIONS)[number];
+
+/** Factors on S: leading (comb. 3), companion (comb. 2), and in ASD (comb. 3 and 4). */
+interface SnowFactors { leading: number; companion: number; asd: number }
+const SNOW: Record<AsceEdition, SnowFactors> = {
+  '7-16': { leading: 1.6, companion: 0.5, asd: 1.0 },
+  '7-22': { leading: 1.0, companion: 0.3, asd: 0.7 },
+};
+
+/** The ASCE 7 edition; '7-22' when left out. */
+export function asceEdition(v: unknown): AsceEdition {
+  return choice('ASCE 7 edition', v, ASCE_EDITIONS, '7-22');
 }
 
-/** ASCE 7-16 §2.3.1 combination 1: 1.4D. */
+/** §2.3.1 combination 1: 1.4D. */
 export function comboU1(D: number): number {
   return 1.4 * D;
 }
 
-/** ASCE 7-16 §2.3.1 combination 2: 1.2D + 1.6L + 0.5(Lr or S or R). */
-export function comboU2(D: number, L: number, Lr = 0, S = 0, R = 0): number {
-  return 1.2 * D + 1.6 * L + 0.5 * roofLoad(Lr, S, R);
+/** §2.3.1 combination 2: 1.2D + 1.6L + the companion roof load 0.5Lr, 0.5R or (0.5S | 0.3S by edition). */
+export function comboU2(D: number, L: number, Lr = 0, S = 0, R = 0, ed: AsceEdition = '7-22'): number {
+  const roofCompanion = Math.max(0.5 * Lr, SNOW[ed].companion * S, 0.5 * R);
+  return 1.2 * D + 1.6 * L + roofCompanion;
 }
 
-/** ASCE 7-16 §2.3.1 combination 3 without wind: 1.2D + 1.6(Lr or S or R) + 1.0L (L factor not relaxed to 0.5). */
-export function comboU3(D: number, L: number, Lr = 0, S = 0, R = 0): number {
-  return 1.2 * D + 1.6 * roofLoad(Lr, S, R) + L;
+/** §2.3.1 combination 3 without wind: 1.2D + the leading roof load 1.6Lr, 1.6R or (1.6S | 1.0S) + 1.0L. */
+export function comboU3(D: number, L: number, Lr = 0, S = 0, R = 0, ed: AsceEdition = '7-22'): number {
+  const roofLeading = Math.max(1.6 * Lr, SNOW[ed].leading * S, 1.6 * R);
+  return 1.2 * D + roofLeading + L;
 }
 
-export const STRENGTH_COMBOS = [
-  '1.4D',
-  '1.2D + 1.6L + 0.5(Lr or S or R)',
-  '1.2D + 1.6(Lr or S or R) + L',
-] as const;
+/** The combinations as printed for the hand calc, by edition. */
+const COMBO_TEXT: Record<AsceEdition, readonly string[]> = {
+  '7-16': ['1.4D', '1.2D + 1.6L + 0.5(Lr or S or R)', '1.2D + 1.6(Lr or S or R) + L'],
+  '7-22': ['1.4D', '1.2D + 1.6L + (0.5Lr or 0.3S or 0.5R)', '1.2D + (1.6Lr or 1.0S or 1.6R) + L'],
+};
 
-/** Governing ASCE 7-16 §2.3.1 gravity combination: its value and its index in STRENGTH_COMBOS. */
-export function comboUGoverning(D: number, L: number, Lr = 0, S = 0, R = 0): { value: number; index: number } {
-  const values = [comboU1(D), comboU2(D, L, Lr, S, R), comboU3(D, L, Lr, S, R)];
+/** ASCE 7-16 text of the strength combinations (kept for callers that name the 7-16 forms). */
+export const STRENGTH_COMBOS = COMBO_TEXT['7-16'];
+
+/** Text of the strength combinations of an edition, in the order of comboUGoverning's index. */
+export function strengthCombos(ed: AsceEdition = '7-22'): readonly string[] {
+  return COMBO_TEXT[ed];
+}
+
+/** Governing §2.3.1 gravity combination: its value and its index in strengthCombos(ed). */
+export function comboUGoverning(D: number, L: number, Lr = 0, S = 0, R = 0, ed: AsceEdition = '7-22'): { value: number; index: number } {
+  const values = [comboU1(D), comboU2(D, L, Lr, S, R, ed), comboU3(D, L, Lr, S, R, ed)];
   let index = 0;
   for (let i = 1; i < values.length; i++) if (values[i] > values[index]) index = i;
   return { value: values[index], index };
 }
 
-/** ASCE 7-16 §2.4.1 combination 2: D + L (service load on the soil). */
+/** §2.4.1 combination 2: D + L (service load on the soil). */
 export function comboService(D: number, L: number): number {
   return D + L;
 }
 
-/** Governing ASCE 7-16 §2.4.1 gravity combination: D; D + L; D + (Lr or S or R); D + 0.75L + 0.75(Lr or S or R). */
-export function comboAsd(D: number, L: number, Lr = 0, S = 0, R = 0): number {
-  const roof = roofLoad(Lr, S, R);
+/** Governing §2.4.1 gravity combination: D; D + L; D + (Lr or S' or R); D + 0.75L + 0.75(Lr or S' or R), S' = 1.0S (7-16) or 0.7S (7-22). */
+export function comboAsd(D: number, L: number, Lr = 0, S = 0, R = 0, ed: AsceEdition = '7-22'): number {
+  const roof = Math.max(Lr, SNOW[ed].asd * S, R);
   return Math.max(D, D + L, D + roof, D + 0.75 * L + 0.75 * roof);
 }
 
@@ -63,26 +83,31 @@ const DIMS: Dim[] = [
   { suffix: '_force', type: 'N', what: 'force' },
 ];
 
-const CLAUSE_U = 'ASCE 7-16 §2.3.1 (= ASCE 7-10 §2.3.2)';
-const CLAUSE_ASD = 'ASCE 7-16 §2.4.1';
+const FROM_MEMORY = '7-22 snow factors from memory';
+const CLAUSE_U = `ASCE 7-22 §2.3.1 (1.0S leading, 0.3S companion; edition '7-16': ASCE 7-16 §2.3.1, 1.6S, 0.5S) [${FROM_MEMORY}]`;
+const CLAUSE_ASD = `ASCE 7-22 §2.4.1 (0.7S; edition '7-16': ASCE 7-16 §2.4.1, 1.0S) [${FROM_MEMORY}]`;
+
+const ASCE: LibParam = { name: 'asce', type: 'text', choices: ASCE_EDITIONS, doc: "ASCE 7 edition: '7-22' (default, strength-level S) or '7-16'" };
 
 function loadParams(type: string, names: string[]): LibParam[] {
   const docs: Record<string, string> = {
-    D: 'dead load', L: 'floor live load', Lr: 'roof live load', S: 'snow load', R: 'rain load',
+    D: 'dead load', L: 'floor live load', Lr: 'roof live load', S: 'snow load (strength-level under 7-22)', R: 'rain load',
   };
   return names.map((name) => ({ name, type, doc: docs[name] }));
 }
 
-/** Reads and checks the load arguments (all >= 0; roof loads default to 0). */
-function loads(args: unknown[]): [number, number, number, number, number] {
+/** Reads and checks the load arguments (all >= 0; roof loads default to 0) and the edition. */
+function loads(args: unknown[]): [number, number, number, number, number, AsceEdition] {
   const names = ['D', 'L', 'Lr', 'S', 'R'];
   const v = names.map((n, i) => (i >= 2 && args[i] === undefined ? 0 : nonNegative(n, args[i])));
-  return [v[0], v[1], v[2], v[3], v[4]];
+  return [v[0], v[1], v[2], v[3], v[4], asceEdition(args[5])];
 }
 
 function forDim(d: Dim): LibFunction[] {
   const n = (base: string) => base + d.suffix;
-  const all = loadParams(d.type, ['D', 'L', 'Lr', 'S', 'R']);
+  const all = [...loadParams(d.type, ['D', 'L', 'Lr', 'S', 'R']), ASCE];
+  const fn = (f: (...a: ReturnType<typeof loads>) => number | string) =>
+    (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown, ed?: unknown) => f(...loads([D, L, Lr, S, R, ed]));
   return [
     defineFunction({
       name: n('combo_u1'), params: loadParams(d.type, ['D']), returns: d.type, clause: `${CLAUSE_U} comb. 1`,
@@ -90,28 +115,24 @@ function forDim(d: Dim): LibFunction[] {
       fn: (D: unknown) => comboU1(nonNegative('D', D)),
     }),
     defineFunction({
-      name: n('combo_u2'), params: all, optional: 3, returns: d.type, clause: `${CLAUSE_U} comb. 2`,
-      doc: `Factored ${d.what} 1.2D + 1.6L + 0.5(Lr or S or R)`,
-      fn: (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown) =>
-        comboU2(...loads([D, L, Lr, S, R])),
+      name: n('combo_u2'), params: all, optional: 4, returns: d.type, clause: `${CLAUSE_U} comb. 2`,
+      doc: `Factored ${d.what} 1.2D + 1.6L + companion roof load`,
+      fn: fn(comboU2),
     }),
     defineFunction({
-      name: n('combo_u3'), params: all, optional: 3, returns: d.type, clause: `${CLAUSE_U} comb. 3`,
-      doc: `Factored ${d.what} 1.2D + 1.6(Lr or S or R) + L (no wind)`,
-      fn: (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown) =>
-        comboU3(...loads([D, L, Lr, S, R])),
+      name: n('combo_u3'), params: all, optional: 4, returns: d.type, clause: `${CLAUSE_U} comb. 3`,
+      doc: `Factored ${d.what} 1.2D + leading roof load + L (no wind)`,
+      fn: fn(comboU3),
     }),
     defineFunction({
-      name: n('combo_u'), params: all, optional: 3, returns: d.type, clause: `${CLAUSE_U} comb. 1-3`,
+      name: n('combo_u'), params: all, optional: 4, returns: d.type, clause: `${CLAUSE_U} comb. 1-3`,
       doc: `Governing factored gravity ${d.what} (largest of combinations 1-3)`,
-      fn: (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown) =>
-        comboUGoverning(...loads([D, L, Lr, S, R])).value,
+      fn: fn((...a) => comboUGoverning(...a).value),
     }),
     defineFunction({
-      name: n('combo_u_governs'), params: all, optional: 3, returns: 'text', clause: `${CLAUSE_U} comb. 1-3`,
+      name: n('combo_u_governs'), params: all, optional: 4, returns: 'text', clause: `${CLAUSE_U} comb. 1-3`,
       doc: 'Which strength combination governs, as text for the hand calc',
-      fn: (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown) =>
-        STRENGTH_COMBOS[comboUGoverning(...loads([D, L, Lr, S, R])).index],
+      fn: fn((...a) => strengthCombos(a[5])[comboUGoverning(...a).index]),
     }),
     defineFunction({
       name: n('combo_service'), params: loadParams(d.type, ['D', 'L']), returns: d.type, clause: `${CLAUSE_ASD} comb. 2`,
@@ -120,10 +141,9 @@ function forDim(d: Dim): LibFunction[] {
         comboService(nonNegative('D', D), nonNegative('L', L)),
     }),
     defineFunction({
-      name: n('combo_asd'), params: all, optional: 3, returns: d.type, clause: `${CLAUSE_ASD} comb. 1-4`,
+      name: n('combo_asd'), params: all, optional: 4, returns: d.type, clause: `${CLAUSE_ASD} comb. 1-4`,
       doc: `Governing service (ASD) gravity ${d.what}`,
-      fn: (D?: unknown, L?: unknown, Lr?: unknown, S?: unknown, R?: unknown) =>
-        comboAsd(...loads([D, L, Lr, S, R])),
+      fn: fn(comboAsd),
     }),
   ];
 }

@@ -1,5 +1,5 @@
 // Can the slab carry its own weight as a one-way strip? A sanity flag for thin or long
-// slabs: the factored self-weight moment of a 1 m strip (1.4D, ASCE 7-16 §2.3.1 comb. 1)
+// slabs: the factored self-weight moment of a 1 m strip (1.4D, ASCE 7-22 §2.3.1 comb. 1, the same in 7-16)
 // against φMn of the same strip with only the minimum steel (0.0018 b h, ACI 318-19
 // Table 7.6.1.1). Elastic moment coefficients of a uniform beam (common practice): simple
 // wℓ²/8, one end continuous (propped) wℓ²/8, both ends continuous (fixed) wℓ²/12,
@@ -47,7 +47,7 @@ const PARAMS = [
   { name: 'wc', type: 'N/m^3', doc: 'unit weight of the concrete' },
   { name: 'edition', type: 'text', choices: EDITIONS, doc: "ACI 318 edition, '318-19' (default) or '318-14'" },
 ];
-const CLAUSE = 'ASCE 7-16 §2.3.1 (1.4D); ACI 318-19 Table 7.6.1.1, §22.2';
+const CLAUSE = 'ASCE 7-22 §2.3.1 (1.4D); ACI 318-19 Table 7.6.1.1, §22.2';
 
 export const functions: LibFunction[] = [
   defineFunction({

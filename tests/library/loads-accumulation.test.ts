@@ -30,6 +30,18 @@ describe('column load accumulated floor by floor (US input)', () => {
     expect(gn('col_pu', ...us(0)) / lbf).toBeCloseTo(99860, 6);
   });
 
+  it('roof snow by the ASCE 7 edition: top storey with S = 30 psf', () => {
+    // D = 66,550 lb, Lr = 12,500 lb, S = 625·30 = 18,750 lb on AT.
+    // ASCE 7-22 §2.3.1 (1.0S leading, factors from memory): comb. 3 = 1.2·66,550 + max(1.6·12,500, 18,750) = 79,860 + 20,000 = 99,860 lb.
+    expect(gn('col_pu', ...us(0), 'general', 30 * psf) / lbf).toBeCloseTo(99860, 6);
+    expect(gn('col_pu', ...us(0), 'general', 30 * psf, '7-22') / lbf).toBeCloseTo(99860, 6);
+    // ASCE 7-16 §2.3.1: comb. 3 = 79,860 + 1.6·18,750 = 109,860 lb.
+    expect(gn('col_pu', ...us(0), 'general', 30 * psf, '7-16') / lbf).toBeCloseTo(109860, 6);
+    // ASD: 7-22 D + max(Lr, 0.7S) = 66,550 + 13,125 = 79,675 lb; 7-16 D + S = 85,300 lb.
+    expect(gn('col_ps', ...us(0), 'general', 30 * psf) / lbf).toBeCloseTo(79675, 6);
+    expect(gn('col_ps', ...us(0), 'general', 30 * psf, '7-16') / lbf).toBeCloseTo(85300, 6);
+  });
+
   it('one floor: the 0.50 limit does not bind at KLL·AT = 2500 ft²', () => {
     // Eq. 4.7-1: 0.25 + 15/50 = 0.55 → 27.5 psf · 625 = 17,187.5 lb (reference-values.md d [CONFIRMED eq.])
     expect(gn('col_live', ...us(1)) / lbf).toBeCloseTo(17187.5, 6);

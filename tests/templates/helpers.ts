@@ -12,6 +12,7 @@ import { parse, serialize } from '../../runtime/format/index';
 import { runCalc } from '../../runtime/cli/main';
 import { parseFormula } from '../../runtime/formula/parse';
 import { libraryFunctions } from '../../runtime/library/index';
+import { FIGURE_FUNCTIONS } from '../../runtime/figures/functions';
 
 export const CAUTION = "Results are an aid to, not a substitute for, a licensed engineer's judgement; local codes govern.";
 
@@ -109,34 +110,36 @@ export function expectWellFormed(file: string): CalcDocument {
   const again = parse(serialize(doc));
   expect(again.errors).toEqual([]);
   expect(again.doc).toEqual(doc);
-  if (doc.cells.some((c) => c.kind === 'input' && c.name === 'edition')) {
-    expect(expectEditionPassedThrough(doc)).toBeGreaterThan(0);
+  for (const param of ['edition', 'asce']) {
+    if (doc.cells.some((c) => c.kind === 'input' && c.name === param)) {
+      expect(expectEditionPassedThrough(doc, param)).toBeGreaterThan(0);
+    }
   }
   return doc;
 }
 
 /**
- * With an `edition` input, every call of a library function that takes an edition passes
- * that input (so switching the edition reaches every clause that depends on it).
- * Returns the number of such calls.
+ * With an `edition` input (ACI 318) or an `asce` input (ASCE 7), every call of a library
+ * function that takes that parameter passes that input (so switching the edition reaches
+ * every clause that depends on it). Returns the number of such calls.
  */
-export function expectEditionPassedThrough(doc: CalcDocument): number {
+export function expectEditionPassedThrough(doc: CalcDocument, param = 'edition'): number {
   const takesEdition = new Map<string, number>();
-  for (const f of libraryFunctions) {
-    const i = f.params.findIndex((p) => p.name === 'edition');
+  for (const f of [...libraryFunctions, ...FIGURE_FUNCTIONS]) {
+    const i = f.params.findIndex((p) => p.name === param);
     if (i >= 0) takesEdition.set(f.name, i);
   }
   let calls = 0;
   const missing: string[] = [];
   for (const cell of doc.cells) {
-    if (cell.kind !== 'formula' && cell.kind !== 'check') continue;
+    if (cell.kind !== 'formula' && cell.kind !== 'check' && cell.kind !== 'figure') continue;
     (parseFormula(cell.expr) as any).traverse((n: any) => {
       if (n.type !== 'FunctionNode') return;
       const i = takesEdition.get(n.fn.name);
       if (i === undefined) return;
       calls++;
       const arg = n.args[i];
-      if (arg?.type !== 'SymbolNode' || arg.name !== 'edition') missing.push(`${cell.id}: ${n.fn.name}`);
+      if (arg?.type !== 'SymbolNode' || arg.name !== param) missing.push(`${cell.id}: ${n.fn.name}`);
     });
   }
   expect(missing).toEqual([]);

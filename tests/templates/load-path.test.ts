@@ -188,7 +188,7 @@ describe('load-path.lt at its defaults (ACI 318-19)', () => {
     near(run.num('AT'), 528); // ft²
     near(run.num('D'), 137.5); // psf
     near(run.num('qu'), 229); // psf, 1.2D + 1.6L governs over 1.4D
-    expect(run.val('qu_combo')).toBe('1.2D + 1.6L + 0.5(Lr or S or R)');
+    expect(run.val('qu_combo')).toBe('1.2D + 1.6L + (0.5Lr or 0.3S or 0.5R)'); // ASCE 7-22 §2.3.1 comb. 2
     // 0.25 + 15/√8448 = 0.4132 ≥ 0.40 (two or more floors)
     near(run.num('F_LL'), 0.25 + 15 / Math.sqrt(8448));
     near(run.num('F_LL'), 0.4132);
@@ -330,6 +330,28 @@ describe('load-path.lt with edition = 318-14', () => {
     // Unchanged: the slab punching (d < 10 in, λs = 1 in 318-19 too) and the flexure.
     near(run.num('phiVc'), phiVc / 1000);
     near(run.num('As_cs_neg'), asStrip(MuCsNeg, bcs));
+  });
+});
+
+describe('load-path.lt with asce = 7-16', () => {
+  it('takes the 25 psf roof snow at 1.6S and 0.5S: the load below the roof rises', async () => {
+    const a = await runTemplate(FILE);
+    const b = await runTemplate(FILE, { asce: '7-16' });
+    try {
+      // Below the roof: D = 528·132.5 + 4167 = 74,127 lb, Lr = 10,560 lb, S = 528·25 = 13,200 lb.
+      // ASCE 7-22 §2.3.1 (1.0S, from memory): 1.2D + max(1.6Lr, 1.0S) = 88,952 + 16,896 = 105,848 lb (Lr leads).
+      // ASCE 7-16 §2.3.1: 1.2D + 1.6S = 88,952 + 21,120 = 110,072 lb.
+      const D0 = deadAt(0);
+      near(a.num('Pu_0'), (1.2 * D0 + Math.max(1.6 * PLr, 13200)) / 1000);
+      near(b.num('Pu_0'), (1.2 * D0 + 1.6 * 13200) / 1000);
+      near(b.num('Pu_0'), 110.07);
+      // At the footing 1.4D governs under both editions (snow is small beside four floors of dead load).
+      near(b.num('Pu'), a.num('Pu'));
+      expect(b.val('qu_combo')).toBe('1.2D + 1.6L + 0.5(Lr or S or R)');
+    } finally {
+      a.dispose();
+      b.dispose();
+    }
   });
 });
 

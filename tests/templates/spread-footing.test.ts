@@ -64,7 +64,7 @@ describe('spread-footing.lt at its defaults (ACI 318-19)', () => {
     near(run.num('q_net'), qNet); // 3350 psf
     near(run.num('A_req'), Ps / qNet); // 82.09 ft²
     near(run.num('Pu'), Pu / 1000); // 368 kip
-    expect(run.val('Pu_combo')).toBe('1.2D + 1.6L + 0.5(Lr or S or R)');
+    expect(run.val('Pu_combo')).toBe('1.2D + 1.6L + (0.5Lr or 0.3S or 0.5R)'); // ASCE 7-22 §2.3.1 comb. 2
     near(run.num('qu'), qu / 1000); // 4.089 ksf
     near(run.num('d_L'), dL);
     near(run.num('d_B'), 23.875);
