@@ -1,6 +1,10 @@
-// Terzaghi (1943) bearing capacity: Nq, Nc in closed form; Nγ has none, so it comes from
-// Das, Principles of Foundation Engineering, Table 3.1 (Nγ after Kumbhojkar 1993) at 5° steps,
-// interpolated log-linearly (linearly between 0° and 5°). Rows 45° and 50° are from memory.
+// Terzaghi (1943) bearing capacity: Nq, Nc in closed form; Nγ has none, and printed tables of
+// it differ. Two families, never mixed: 'das' (the default), Das, Principles of Foundation
+// Engineering, Table 3.1 (Nγ after Kumbhojkar 1993), whose local-shear factors (Table 3.2) are the
+// same table read at φ' = atan((2/3)tan φ); and 'bowles', the Terzaghi table reproduced in
+// Bowles, Foundation Analysis and Design (attribution from memory), with a higher Nγ (9.7 against
+// 8.34 at 25°), so a higher, less conservative capacity: offered only when asked for. Rows are
+// interpolated log-linearly (linearly up from Nγ = 0). Das rows 45° and 50° are from memory.
 
 import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
 import { choice, finite, nonNegative, positive } from './support-args';
@@ -11,12 +15,40 @@ export const SHEAR_MODES = ['general', 'local'] as const;
 type Shape = (typeof SHAPES)[number];
 type ShearMode = (typeof SHEAR_MODES)[number];
 
-/** Das Table 3.1, Nγ (Kumbhojkar 1993): [φ in degrees, Nγ]. */
-const NGAMMA_ROWS: readonly (readonly [number, number])[] = [
-  [0, 0], [5, 0.14], [10, 0.56], [15, 1.52], [20, 3.64], [25, 8.34],
-  [30, 19.13], [35, 45.41], [40, 115.31],
-  [45, 325.34], [50, 1072.8], // from memory
-];
+export const NGAMMA_FAMILIES = ['das', 'bowles'] as const;
+export type NgammaFamily = (typeof NGAMMA_FAMILIES)[number];
+
+type Rows = readonly (readonly [number, number])[];
+/** [φ in degrees, Nγ] by family. */
+const NGAMMA_ROWS: Record<NgammaFamily, Rows> = {
+  // Das Table 3.1, Nγ after Kumbhojkar (1993).
+  das: [
+    [0, 0], [5, 0.14], [10, 0.56], [15, 1.52], [20, 3.64], [25, 8.34],
+    [30, 19.13], [35, 45.41], [40, 115.31],
+    [45, 325.34], [50, 1072.8], // from memory
+  ],
+  // The Terzaghi table of Bowles (attribution from memory; values read in a public reproduction).
+  bowles: [
+    [0, 0], [5, 0.5], [10, 1.2], [15, 2.5], [20, 5.0], [25, 9.7],
+    [30, 19.7], [34, 35.0], [35, 42.4], [40, 100.4], [45, 297.5],
+  ],
+};
+
+/** Where each family's factors are printed, general and local shear, for the output. */
+const TABLE_NAME: Record<NgammaFamily, Record<'general' | 'local', string>> = {
+  das: {
+    general: 'Das, Principles of Foundation Engineering, Table 3.1 (Terzaghi general shear; Nγ after Kumbhojkar 1993)',
+    local: "Das, Principles of Foundation Engineering, Table 3.2 (Terzaghi local shear: Table 3.1 read at φ' = atan((2/3)tan φ))",
+  },
+  bowles: {
+    general: 'Terzaghi Nγ table of Bowles, Foundation Analysis and Design [attribution from memory] (higher Nγ: less conservative)',
+    local: "Terzaghi Nγ table of Bowles read at φ' = atan((2/3)tan φ) [attribution from memory] (printed charts of this family give N'γ 3.2 at 25°, this 3.42)",
+  },
+};
+
+export function ngammaFamily(v: unknown): NgammaFamily {
+  return v === undefined ? 'das' : choice('Nγ table', v, NGAMMA_FAMILIES);
+}
 
 /** A friction angle in radians, 0 ≤ φ ≤ 50°, the range of the table. */
 export function frictionAngle(v: unknown): number {
@@ -45,28 +77,37 @@ export function ncTerzaghi(phi: number): number {
   return (nqTerzaghi(p) - 1) / Math.tan(p);
 }
 
-/** Nγ from Das Table 3.1 (Kumbhojkar 1993), log-linear between the 5° rows. */
-export function ngammaTerzaghi(phi: number): number {
+/** Nγ from the family's table (Das Table 3.1 by default), log-linear between its rows. */
+export function ngammaTerzaghi(phi: number, family: NgammaFamily = 'das'): number {
+  const rows = NGAMMA_ROWS[family];
   const d = frictionAngle(phi) / deg;
-  const i = Math.min(Math.floor(d / 5), NGAMMA_ROWS.length - 2);
-  const [p0, n0] = NGAMMA_ROWS[i];
-  const [p1, n1] = NGAMMA_ROWS[i + 1];
+  const last = rows[rows.length - 1][0];
+  if (d > last + 1e-9) throw new LibraryError(`the ${family} Nγ table stops at ${last} deg (given ${d.toFixed(2)} deg)`);
+  let i = 0;
+  while (i < rows.length - 2 && d > rows[i + 1][0]) i++;
+  const [p0, n0] = rows[i];
+  const [p1, n1] = rows[i + 1];
   const t = (d - p0) / (p1 - p0);
   if (n0 === 0) return n0 + t * (n1 - n0);
   return n0 * Math.pow(n1 / n0, t);
 }
 
+/** Name of the printed table the factors come from, for the output. */
+export function terzaghiTable(mode: ShearMode = 'general', family: NgammaFamily = 'das'): string {
+  return TABLE_NAME[family][mode];
+}
+
 export interface TerzaghiFactors { nc: number; nq: number; ngamma: number; }
 
-/** The three factors at φ (general shear) or at φ' (local shear). */
-export function terzaghiFactors(phi: number, mode: ShearMode = 'general'): TerzaghiFactors {
+/** The three factors at φ (general shear) or at φ' (local shear), Nγ from one family. */
+export function terzaghiFactors(phi: number, mode: ShearMode = 'general', family: NgammaFamily = 'das'): TerzaghiFactors {
   const p = mode === 'local' ? localPhi(phi) : frictionAngle(phi);
-  return { nc: ncTerzaghi(p), nq: nqTerzaghi(p), ngamma: ngammaTerzaghi(p) };
+  return { nc: ncTerzaghi(p), nq: nqTerzaghi(p), ngamma: ngammaTerzaghi(p, family) };
 }
 
 /** qu = s_c c Nc + q Nq + s_γ γ B Nγ: strip 1/0.5, square 1.3/0.4, circular 1.3/0.3 (Terzaghi 1943; Das §3.3). */
-export function quTerzaghi(c: number, q: number, gamma: number, b: number, phi: number, shape: Shape, mode: ShearMode = 'general'): number {
-  const f = terzaghiFactors(phi, mode);
+export function quTerzaghi(c: number, q: number, gamma: number, b: number, phi: number, shape: Shape, mode: ShearMode = 'general', family: NgammaFamily = 'das'): number {
+  const f = terzaghiFactors(phi, mode, family);
   const cc = nonNegative('c', c) * (mode === 'local' ? 2 / 3 : 1);
   const sc = shape === 'strip' ? 1 : 1.3;
   const sg = shape === 'strip' ? 0.5 : shape === 'square' ? 0.4 : 0.3;
@@ -75,8 +116,9 @@ export function quTerzaghi(c: number, q: number, gamma: number, b: number, phi: 
 
 const phiParam: LibParam = { name: 'phi', type: 'rad', doc: 'soil friction angle' };
 const modeParam: LibParam = { name: 'shear', type: 'text', choices: SHEAR_MODES, doc: "'general' (default) or 'local' (φ' = atan(2/3 tan φ))" };
+const familyParam: LibParam = { name: 'ngamma_table', type: 'text', choices: NGAMMA_FAMILIES, doc: "'das' (default, Das Tables 3.1/3.2) or 'bowles' (higher Nγ, less conservative; only when chosen)" };
 const mode = (v: unknown): ShearMode => (v === undefined ? 'general' : choice('shear mode', v, SHEAR_MODES));
-const factor = (k: keyof TerzaghiFactors) => (phi: number, m?: string) => terzaghiFactors(phi, mode(m))[k];
+const factor = (k: keyof TerzaghiFactors) => (phi: number, m?: string, fam?: string) => terzaghiFactors(phi, mode(m), ngammaFamily(fam))[k];
 const LOCAL = "; local shear at φ' = atan((2/3)tanφ) [from memory]";
 
 export const functions: LibFunction[] = [
@@ -91,9 +133,15 @@ export const functions: LibFunction[] = [
     doc: 'Terzaghi bearing capacity factor Nc', fn: factor('nc'),
   }),
   defineFunction({
-    name: 'ngamma_terzaghi', params: [phiParam, modeParam], optional: 1, returns: '1',
-    clause: 'Das, Principles of Foundation Engineering, Table 3.1 (Nγ after Kumbhojkar 1993), 5° rows, log-linear interpolation' + LOCAL,
+    name: 'ngamma_terzaghi', params: [phiParam, modeParam, familyParam], optional: 2, returns: '1',
+    clause: "Das, Principles of Foundation Engineering, Table 3.1 (Nγ after Kumbhojkar 1993) and Table 3.2 (local shear, at φ'); or, when chosen, the Terzaghi table of Bowles [from memory]; log-linear between rows" + LOCAL,
     doc: 'Terzaghi bearing capacity factor Nγ (tabulated, interpolated)', fn: factor('ngamma'),
+  }),
+  defineFunction({
+    name: 'terzaghi_table', params: [modeParam, familyParam], optional: 2, returns: 'text',
+    clause: 'Das, Principles of Foundation Engineering, Tables 3.1 and 3.2; Bowles, Foundation Analysis and Design [from memory]',
+    doc: 'The printed table the Terzaghi factors come from, as text for the output',
+    fn: (m?: string, fam?: string) => terzaghiTable(mode(m), ngammaFamily(fam)),
   }),
   defineFunction({
     name: 'qu_terzaghi',
@@ -105,12 +153,13 @@ export const functions: LibFunction[] = [
       phiParam,
       { name: 'shape', type: 'text', choices: SHAPES, doc: "'strip', 'square' or 'circular'" },
       modeParam,
+      familyParam,
     ],
-    optional: 1,
+    optional: 2,
     returns: 'Pa',
     clause: 'Terzaghi (1943): qu = cNc + qNq + 0.5γBNγ; square 1.3cNc + qNq + 0.4γBNγ; circular 1.3cNc + qNq + 0.3γBNγ (Das §3.3); Nγ from Das Table 3.1' + LOCAL + ", c' = 2c/3",
     doc: 'Ultimate bearing capacity by Terzaghi, general or local shear',
-    fn: (c: number, q: number, g: number, b: number, phi: number, s: string, m?: string) =>
-      quTerzaghi(c, q, g, b, phi, choice('shape', s, SHAPES), mode(m)),
+    fn: (c: number, q: number, g: number, b: number, phi: number, s: string, m?: string, fam?: string) =>
+      quTerzaghi(c, q, g, b, phi, choice('shape', s, SHAPES), mode(m), ngammaFamily(fam)),
   }),
 ];

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { num } from './support-call';
+import { call, num } from './support-call';
 import { LibraryError } from '../../runtime/library/types';
 import { deg, kN, kPa, m } from '../../runtime/units/si';
 
@@ -40,6 +40,42 @@ describe('Terzaghi factors (general shear)', () => {
     // N'γ = 3.2 in that source comes from another Nγ tabulation; ours follows Das Table 3.1 at
     // φ' = 17.27°: between 1.52 (15°) and 3.64 (20°), log-linear → 2.26
     expect(num('ngamma_terzaghi', 25 * deg, 'local')).toBeCloseTo(2.26, 2);
+  });
+});
+
+describe('which Nγ table: Das (default) or, only when chosen, the higher Bowles family', () => {
+  it("the output names the table: Das Table 3.1 for general shear, Table 3.2 for local shear", () => {
+    expect(call('terzaghi_table')).toMatch(/^Das, Principles of Foundation Engineering, Table 3\.1/);
+    expect(call('terzaghi_table', 'local')).toMatch(/^Das, Principles of Foundation Engineering, Table 3\.2/);
+    expect(call('terzaghi_table', 'general', 'bowles')).toMatch(/Bowles/);
+  });
+
+  it("Das Table 3.2 (from memory): N'γ = 1.12, 2.25, 4.39, 8.35 at φ = 20, 25, 30, 35° — Table 3.1 read at φ'", () => {
+    // φ' = atan((2/3)tan φ): 20° → 13.64°, 25° → 17.27°, 30° → 21.05°, 35° → 25.02°; Table 3.1 read there,
+    // log-linear between its 5° rows, gives 1.158, 2.259, 4.334, 8.373: within 4 % of the printed values
+    // (the book reads finer rows of Table 3.1), and 2.26 against 2.25 at 25°.
+    const das32: [number, number][] = [[20, 1.12], [25, 2.25], [30, 4.39], [35, 8.35]];
+    for (const [phi, ng] of das32) expect(Math.abs(num('ngamma_terzaghi', phi * deg, 'local') / ng - 1)).toBeLessThanOrEqual(0.04);
+    expect(num('ngamma_terzaghi', 25 * deg, 'local')).toBeCloseTo(2.26, 2);
+  });
+
+  it('the Bowles family, read in a public reproduction of the Terzaghi table: Nγ 5.0, 9.7, 19.7, 42.4 at 20, 25, 30, 35°', () => {
+    const bowles: [number, number][] = [[10, 1.2], [20, 5.0], [25, 9.7], [30, 19.7], [34, 35.0], [35, 42.4], [40, 100.4]];
+    for (const [phi, ng] of bowles) expect(num('ngamma_terzaghi', phi * deg, 'general', 'bowles')).toBeCloseTo(ng, 9);
+    // Local shear stays in the same family: Nγ of the Bowles table at φ' = 17.27° (φ = 25°), log-linear
+    // between 2.5 (15°) and 5.0 (20°): 2.5·2^(2.269/5) = 3.42 (printed charts of the family read 3.2).
+    const phiL = Math.atan((2 / 3) * Math.tan(25 * deg)) / deg;
+    expect(num('ngamma_terzaghi', 25 * deg, 'local', 'bowles')).toBeCloseTo(2.5 * Math.pow(2, (phiL - 15) / 5), 9);
+    expect(num('ngamma_terzaghi', 25 * deg, 'local', 'bowles')).toBeCloseTo(3.42, 2);
+    // The family reaches 45° only.
+    expect(() => num('ngamma_terzaghi', 48 * deg, 'general', 'bowles')).toThrow(/stops at 45 deg/);
+  });
+
+  it('qu follows the family chosen; the default is Das', () => {
+    // φ = 25°, c = q = 0, γ = 18 kN/m³, B = 2 m, square: 0.4·18·2·Nγ = 14.4·Nγ.
+    expect(num('qu_terzaghi', 0, 0, 18 * kN, 2, 25 * deg, 'square') / kPa).toBeCloseTo(14.4 * 8.34, 6);
+    expect(num('qu_terzaghi', 0, 0, 18 * kN, 2, 25 * deg, 'square', 'general', 'bowles') / kPa).toBeCloseTo(14.4 * 9.7, 6);
+    expect(() => num('qu_terzaghi', 0, 0, 18 * kN, 2, 25 * deg, 'square', 'general', 'meyerhof')).toThrow(/unknown Nγ table 'meyerhof'/);
   });
 });
 

@@ -113,6 +113,37 @@ describe('bearing-capacity.lt with local shear', () => {
   });
 });
 
+describe('bearing-capacity.lt names its Terzaghi table and offers the other Nγ family only when chosen', () => {
+  it('by default: Das Table 3.1 (general) and Table 3.2 (local), named in the output', async () => {
+    const a = await runTemplate(FILE);
+    const b = await runTemplate(FILE, { shear: 'local', phi_s: '25 deg' });
+    try {
+      expect(a.val('table_T')).toMatch(/Das, Principles of Foundation Engineering, Table 3\.1/);
+      near(a.num('Ng_T'), 19.13); // Das Table 3.1 at 30° (Kumbhojkar 1993)
+      expect(b.val('table_T')).toMatch(/Table 3\.2/);
+      // Das Table 3.2 (from memory) prints N'γ = 2.25 at 25°; Table 3.1 at φ' = 17.27° gives 2.26.
+      expect(Math.abs(b.num('Ng_T') - 2.25)).toBeLessThanOrEqual(0.015);
+    } finally {
+      a.dispose();
+      b.dispose();
+    }
+  });
+
+  it('ng_table = bowles: Nγ = 19.7 at 30° (the Terzaghi table reproduced in Bowles), a higher capacity', async () => {
+    const a = await runTemplate(FILE);
+    const b = await runTemplate(FILE, { ng_table: 'bowles' });
+    try {
+      expect(b.val('table_T')).toMatch(/Bowles/);
+      near(b.num('Ng_T'), 19.7);
+      // Only the γ term changes: 0.4·γ·B·(19.7 − 19.13) = 0.4·118·8·0.57 = 215.2 psf more.
+      near(b.num('qu_T') - a.num('qu_T'), (0.4 * 118 * 8 * (19.7 - 19.13)) / 1000, 1e-3);
+    } finally {
+      a.dispose();
+      b.dispose();
+    }
+  });
+});
+
 describe('bearing-capacity.lt as a document', () => {
   it('is well formed, round-trips and runs headless with exit code 0', async () => {
     expectWellFormed(FILE);
