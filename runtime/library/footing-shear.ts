@@ -6,7 +6,7 @@
 
 import { defineFunction, type LibFunction, type LibParam } from './types';
 import { EDITIONS, edition, lambdaFactor, nonNegative, optional, positive, type Edition } from './support-args';
-import { lambdaS, sqrtFcShearPsi } from './shear-size-effect';
+import { lambdaS, neglectLs, sqrtFcShearPsi, NEGLECT_LS_CLAUSE, NEGLECT_LS_PARAM } from './shear-size-effect';
 import { quFooting } from './footing-area';
 import { psi } from '../units/si';
 
@@ -30,17 +30,19 @@ export interface OnewayShear {
 }
 
 /** Vc one-way, no shear reinforcement, Nu = 0: 318-19 Table 22.5.5.1(c) capped at 5λ√f'c bw d; 318-14 2λ√f'c bw d. */
-export function onewayShear(fc: number, bw: number, d: number, rhoW: number, lambda = 1, ed: Edition = '318-19'): OnewayShear {
+export function onewayShear(fc: number, bw: number, d: number, rhoW: number, lambda = 1, ed: Edition = '318-19', neglectSizeEffect = false): OnewayShear {
   const root = sqrtFcShearPsi(fc) * psi;
   const area = positive('bw', bw) * positive('d', d);
   nonNegative('rho_w', rhoW);
   if (ed === '318-14') {
     return { vc: 2 * lambda * root * area, rule: "ACI 318-14 §22.5.5.1: Vc = 2λ√f'c·bw·d" };
   }
-  const c = 8 * lambdaS(d, ed) * lambda * Math.cbrt(rhoW) * root * area;
+  const ls = lambdaS(d, ed, neglectSizeEffect);
+  const c = 8 * ls * lambda * Math.cbrt(rhoW) * root * area;
   const cap = 5 * lambda * root * area;
+  const neglected = neglectSizeEffect ? ', λs neglected (§13.2.6.2)' : '';
   return c <= cap
-    ? { vc: c, rule: "ACI 318-19 Table 22.5.5.1(c): Vc = 8λsλ(ρw)^(1/3)√f'c·bw·d (Av < Av,min)" }
+    ? { vc: c, rule: `ACI 318-19 Table 22.5.5.1(c): Vc = 8λsλ(ρw)^(1/3)√f'c·bw·d (Av < Av,min)${neglected}` }
     : { vc: cap, rule: "ACI 318-19 §22.5.5.1.1: Vc capped at 5λ√f'c·bw·d" };
 }
 
@@ -51,12 +53,13 @@ const vcParams: LibParam[] = [
   { name: 'rho_w', type: '1', doc: 'As/(bw·d) of the flexural tension steel (unused by 318-14)' },
   { name: 'lambda', type: '1', doc: 'lightweight concrete factor (default 1.0)' },
   { name: 'edition', type: 'text', choices: EDITIONS, doc: "'318-19' (default) or '318-14'" },
+  NEGLECT_LS_PARAM,
 ];
 const vc = (pick: (s: OnewayShear) => number | string) =>
-  (fc: number, bw: number, d: number, rho: number, lambda?: number, ed?: string) =>
-    pick(onewayShear(fc, bw, d, rho, optional(lambda, 1, lambdaFactor), edition(ed)));
+  (fc: number, bw: number, d: number, rho: number, lambda?: number, ed?: string, n?: boolean) =>
+    pick(onewayShear(fc, bw, d, rho, optional(lambda, 1, lambdaFactor), edition(ed), neglectLs(n)));
 
-const VC_CLAUSE = "ACI 318-19 Table 22.5.5.1(c) with λs and ρw (no shear reinforcement), ≤ 5λ√f'c bw d; edition '318-14': §22.5.5.1 Vc = 2λ√f'c bw d; √f'c ≤ 100 psi";
+const VC_CLAUSE = `ACI 318-19 Table 22.5.5.1(c) with λs and ρw (no shear reinforcement), ≤ 5λ√f'c bw d; edition '318-14': §22.5.5.1 Vc = 2λ√f'c bw d; √f'c ≤ 100 psi; ${NEGLECT_LS_CLAUSE}`;
 
 export const functions: LibFunction[] = [
   defineFunction({
@@ -91,7 +94,7 @@ export const functions: LibFunction[] = [
   defineFunction({
     name: 'vc_oneway',
     params: vcParams,
-    optional: 2,
+    optional: 3,
     returns: 'N',
     clause: VC_CLAUSE,
     doc: 'Nominal one-way shear strength Vc of a slab or footing without stirrups (Nu = 0)',
@@ -100,7 +103,7 @@ export const functions: LibFunction[] = [
   defineFunction({
     name: 'vc_oneway_rule',
     params: vcParams,
-    optional: 2,
+    optional: 3,
     returns: 'text',
     clause: VC_CLAUSE,
     doc: 'Which one-way shear expression vc_oneway used, as text for the hand calc',

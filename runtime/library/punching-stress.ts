@@ -5,7 +5,7 @@
 import { defineFunction, type LibFunction, type LibParam } from './types';
 import { EDITIONS, edition, lambdaFactor, nonNegative, optional, phiFactor, type Edition } from './support-args';
 import { POSITIONS, boPunch, areaInsidePunch, geometryParams, position, type Position } from './punching-perimeter';
-import { lambdaS, sqrtFcShearPsi } from './shear-size-effect';
+import { lambdaS, neglectLs, sqrtFcShearPsi, NEGLECT_LS_CLAUSE, NEGLECT_LS_PARAM } from './shear-size-effect';
 import { psi } from '../units/si';
 
 /** αs: 40 interior, 30 edge, 20 corner columns (ACI 318-19 Table 22.6.5.2). */
@@ -29,18 +29,19 @@ export interface PunchingStrength {
 /** The three vc expressions of ACI 318-19 Table 22.6.5.2 (318-14: same, without λs) and the least. */
 export function punchingStrength(
   fc: number, c1: number, c2: number, d: number, pos: Position,
-  lambda = 1, ed: Edition = '318-19',
+  lambda = 1, ed: Edition = '318-19', neglectSizeEffect = false,
 ): PunchingStrength {
   const bo = boPunch(c1, c2, d, pos);
-  const ls = lambdaS(d, ed);
+  const ls = lambdaS(d, ed, neglectSizeEffect);
   const root = sqrtFcShearPsi(fc);
   const beta = Math.max(c1, c2) / Math.min(c1, c2);
   const k = ls * lambda * root * psi;
   const a = 4 * k;
   const b = (2 + 4 / beta) * k;
   const c = (2 + (alphaS(pos) * d) / bo) * k;
-  const s = ed === '318-19' ? 'λs·λ·√f\'c' : 'λ·√f\'c';
+  const s = ed === '318-19' && !neglectSizeEffect ? 'λs·λ·√f\'c' : 'λ·√f\'c';
   const table = ed === '318-19' ? 'ACI 318-19 Table 22.6.5.2' : 'ACI 318-14 Table 22.6.5.2';
+  const neglected = ed === '318-19' && neglectSizeEffect ? ', λs neglected (§13.2.6.2)' : '';
   let vc = a;
   let governs = `${table}(a) 4${s}`;
   if (b < vc) {
@@ -51,7 +52,7 @@ export function punchingStrength(
     vc = c;
     governs = `${table}(c) (2 + αs·d/bo)${s}, αs = ${alphaS(pos)}`;
   }
-  return { a, b, c, vc, governs, lambdaS: ls, beta, bo };
+  return { a, b, c, vc, governs: governs + neglected, lambdaS: ls, beta, bo };
 }
 
 /** Factored shear on the section: column reaction less the factored load inside it (ACI 318-19 §22.6.4.1). */
@@ -71,13 +72,14 @@ export const strengthParams: LibParam[] = [
   ...geometryParams,
   { name: 'lambda', type: '1', doc: 'lightweight concrete factor (default 1.0)' },
   { name: 'edition', type: 'text', choices: EDITIONS, doc: "'318-19' (default) or '318-14'" },
+  NEGLECT_LS_PARAM,
 ];
 
 const strength = (pick: (s: PunchingStrength, d: number) => number | string) =>
-  (fc: number, c1: number, c2: number, d: number, p: string, lambda?: number, ed?: string) =>
-    pick(punchingStrength(fc, c1, c2, d, position(p), optional(lambda, 1, lambdaFactor), edition(ed)), d);
+  (fc: number, c1: number, c2: number, d: number, p: string, lambda?: number, ed?: string, n?: boolean) =>
+    pick(punchingStrength(fc, c1, c2, d, position(p), optional(lambda, 1, lambdaFactor), edition(ed), neglectLs(n)), d);
 
-const CLAUSE = "ACI 318-19 §22.6.5.2, Table 22.6.5.2 (√f'c ≤ 100 psi, §22.6.3.1; 318-14: no λs)";
+const CLAUSE = `ACI 318-19 §22.6.5.2, Table 22.6.5.2 (√f'c ≤ 100 psi, §22.6.3.1; 318-14: no λs); ${NEGLECT_LS_CLAUSE}`;
 
 const loadParams: LibParam[] = [
   { name: 'Vu', type: 'N', doc: 'factored column reaction' },
@@ -106,7 +108,7 @@ export const functions: LibFunction[] = [
   defineFunction({
     name: 'vc_punch',
     params: strengthParams,
-    optional: 2,
+    optional: 3,
     returns: 'Pa',
     clause: CLAUSE,
     doc: 'Two-way shear stress capacity vc: least of the three Table 22.6.5.2 expressions',
@@ -115,7 +117,7 @@ export const functions: LibFunction[] = [
   defineFunction({
     name: 'vc_punch_governs',
     params: strengthParams,
-    optional: 2,
+    optional: 3,
     returns: 'text',
     clause: CLAUSE,
     doc: 'Which expression of Table 22.6.5.2 governs vc, as text for the hand calc',
@@ -124,7 +126,7 @@ export const functions: LibFunction[] = [
   defineFunction({
     name: 'vc_punch_a',
     params: strengthParams,
-    optional: 2,
+    optional: 3,
     returns: 'Pa',
     clause: "ACI 318-19 Table 22.6.5.2(a): 4λsλ√f'c",
     doc: 'Two-way shear expression (a)',
@@ -133,7 +135,7 @@ export const functions: LibFunction[] = [
   defineFunction({
     name: 'vc_punch_b',
     params: strengthParams,
-    optional: 2,
+    optional: 3,
     returns: 'Pa',
     clause: "ACI 318-19 Table 22.6.5.2(b): (2 + 4/β)λsλ√f'c",
     doc: 'Two-way shear expression (b), β = long/short side of the column',
@@ -142,7 +144,7 @@ export const functions: LibFunction[] = [
   defineFunction({
     name: 'vc_punch_c',
     params: strengthParams,
-    optional: 2,
+    optional: 3,
     returns: 'Pa',
     clause: "ACI 318-19 Table 22.6.5.2(c): (2 + αs d/bo)λsλ√f'c",
     doc: 'Two-way shear expression (c), αs = 40/30/20',
@@ -151,7 +153,7 @@ export const functions: LibFunction[] = [
   defineFunction({
     name: 'vn_punch',
     params: strengthParams,
-    optional: 2,
+    optional: 3,
     returns: 'N',
     clause: CLAUSE + '; Vc = vc·bo·d',
     doc: 'Nominal two-way shear force capacity without shear reinforcement, vc·bo·d',

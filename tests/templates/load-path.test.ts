@@ -355,6 +355,19 @@ describe('load-path.lt with asce = 7-16', () => {
   });
 });
 
+describe('load-path.lt with neglect_ls_f = yes', () => {
+  it('drops λs from the footing shears only (ACI 318-19 §13.2.6.2, from memory): the slab keeps it', async () => {
+    const run = await runTemplate(FILE, { neglect_ls_f: 'yes' });
+    try {
+      near(run.num('vc_f'), 4 * sqrtFcF); // 4√f'c = 253.0 psi (Table 22.6.5.2(a), λs = 1)
+      near(run.num('phiVc_ow1'), (0.75 * 8 * Math.cbrt(rhoW) * sqrtFcF * Bin * df) / 1000); // Table 22.5.5.1(c), λs = 1
+      expect(run.num('lam_s')).toBe(1); // the slab's own λs: d = 7.625 in ≤ 10 in gives 1.0 anyway
+    } finally {
+      run.dispose();
+    }
+  });
+});
+
 describe('load-path.lt as a document', () => {
   it('is well formed and round-trips through the format', () => {
     const doc = expectWellFormed(FILE);

@@ -128,6 +128,23 @@ describe('spread-footing.lt with edition = 318-14', () => {
   });
 });
 
+describe('spread-footing.lt with λs neglected (neglect_ls = yes)', () => {
+  it('takes λs = 1 in both shears, as ACI 318-19 §13.2.6.2 permits for isolated footings (from memory)', async () => {
+    const run = await runTemplate(FILE, { neglect_ls: 'yes' });
+    try {
+      expectAllPass(run);
+      // Two-way: vc = 4λ√f'c = 4·63.25 = 253.0 psi (Table 22.6.5.2(a), λs = 1).
+      near(run.num('vc'), 4 * sqrtFc);
+      expect(run.val('vc_rule')).toMatch(/λs neglected/);
+      // One-way: φVc = 0.75·8·1·(ρw)^(1/3)√f'c·bw·d (Table 22.5.5.1(c), λs = 1).
+      near(run.num('phiVc_L'), (0.75 * 8 * Math.cbrt(rhoL) * sqrtFc * B * dL) / 1000);
+      near(run.num('phiVc_B'), (0.75 * 8 * Math.cbrt(rhoB) * sqrtFc * L * dB) / 1000);
+    } finally {
+      run.dispose();
+    }
+  });
+});
+
 describe('spread-footing.lt as a document', () => {
   it('is well formed, round-trips and runs headless with exit code 0', async () => {
     expectWellFormed(FILE);
