@@ -27,9 +27,14 @@ const smallBar = (db: number) => db / inch <= 0.8;
 
 /** ℓd from ACI 318-19 Table 25.4.2.3 (simplified), ψt = 1, ≥ 12 in (§25.4.2.1), √f'c ≤ 100 psi (§25.4.1.4). */
 export function ldBottom(db: number, fy: number, fc: number, spacingOk = true, lambda = 1, psie = 1, ed: Edition = '318-19'): number {
+  return ldStraight(db, fy, fc, spacingOk, lambda, psie, ed, 1);
+}
+
+/** The same with the casting-position factor ψt (1.3 for top bars, Table 25.4.2.5); ψtψe ≤ 1.7. */
+export function ldStraight(db: number, fy: number, fc: number, spacingOk: boolean, lambda: number, psie: number, ed: Edition, psiT: number): number {
   positive('db', db);
   const root = sqrtFcShearPsi(fc); // same 100 psi cap applies to development (§25.4.1.4)
-  const psiProduct = Math.min(1 * psiE(psie), 1.7) * psiG(fy, ed);
+  const psiProduct = Math.min(psiT * psiE(psie), 1.7) * psiG(fy, ed);
   const denom = spacingOk ? (smallBar(db) ? 25 : 20) : (smallBar(db) ? 50 / 3 : 40 / 3);
   const ld = ((fy / psi) * psiProduct / (denom * lambda * root)) * db;
   return Math.max(ld, 12 * inch);

@@ -16,9 +16,11 @@ import { functions as selfWeight } from './slab-self-weight';
 import { functions as ddm } from './slab-ddm';
 import { functions as flexure } from './flexure';
 import { functions as ribbed } from './slab-ribbed';
+import { functions as slabOnewayShear } from './slab-oneway-shear';
+import { functions as slabIntegrity } from './slab-integrity';
 
 export const gravityFunctions: LibFunction[] = [
   ...combinations, ...tributary, ...reduction, ...accumulation,
   ...concrete, ...rebar, ...limits, ...phi,
-  ...action, ...thickness, ...selfWeight, ...ddm, ...flexure, ...ribbed,
+  ...action, ...thickness, ...selfWeight, ...ddm, ...flexure, ...ribbed, ...slabOnewayShear, ...slabIntegrity,
 ];

@@ -6,6 +6,8 @@ import { functions as punchingPerimeter } from './punching-perimeter';
 import { functions as punchingStress } from './punching-stress';
 import { functions as punchingDropPanel } from './punching-drop-panel';
 import { functions as punchingMomentTransfer } from './punching-moment-transfer';
+import { functions as punchingOpenings } from './punching-openings';
+import { functions as columnThroughFloor } from './column-through-floor';
 import { functions as columnAxial } from './column-axial';
 import { functions as columnSlenderness } from './column-slenderness';
 import { functions as columnInteraction } from './column-interaction';
@@ -28,6 +30,8 @@ export const supportFunctions: LibFunction[] = [
   ...punchingStress,
   ...punchingDropPanel,
   ...punchingMomentTransfer,
+  ...punchingOpenings,
+  ...columnThroughFloor,
   ...columnAxial,
   ...columnSlenderness,
   ...columnInteraction,

@@ -65,7 +65,7 @@ describe('load-path.lt: the same rule at the foot of the traced column', () => {
     // As = (523,170 − 353,600)/(0.65·60,000) = 4.348 in² > 0.005·256 = 1.28 in²; 8 #7 = 4.80 in².
     const need = Math.max((PuLp - bearing) / (0.65 * 60000), 0.005 * 256);
     near(need, 4.348, 1e-3);
-    const run = await runTemplate('load-path.lt', { c1: '16 in', c2: '16 in', fc: '2500 psi', n_dowel: '8' });
+    const run = await runTemplate('load-path.lt', { c1: '16 in', c2: '16 in', fc_col: '2500 psi', n_dowel: '8' });
     try {
       near(run.num('P_excess'), (PuLp - bearing) / 1000);
       near(run.ratio('dowel_ok'), need / (8 * 0.6)); // #7 = 0.60 in² (ASTM A615)
