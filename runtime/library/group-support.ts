@@ -23,6 +23,7 @@ import { functions as footingDowels } from './footing-dowels';
 import { functions as soilPresumptive } from './soil-presumptive';
 import { functions as soilBearingTerzaghi } from './soil-bearing-terzaghi';
 import { functions as soilBearingGeneral } from './soil-bearing-general';
+import { functions as soilBearingConditions } from './soil-bearing-conditions';
 
 export const supportFunctions: LibFunction[] = [
   ...sizeEffect,
@@ -47,4 +48,5 @@ export const supportFunctions: LibFunction[] = [
   ...soilPresumptive,
   ...soilBearingTerzaghi,
   ...soilBearingGeneral,
+  ...soilBearingConditions,
 ];

@@ -79,14 +79,15 @@ export function depthMeyerhof(phi: number, df: number, b: number): Depth {
 /** qu = c Nc sc dc + q Nq sq dq + ½γB Nγ sγ dγ (Meyerhof 1963 / Vesic 1973 general form). */
 export function quGeneral(
   c: number, q: number, gamma: number, b: number, l: number, df: number, phi: number,
-  ng: NgammaMethod = 'vesic', dm: DepthMethod = 'hansen',
+  ng: NgammaMethod = 'vesic', dm: DepthMethod = 'hansen', bDepth = b,
 ): number {
   const nq = nqVesic(phi);
   const nc = ncVesic(phi);
   const ngamma = ng === 'vesic' ? ngammaVesic(phi) : ng === 'meyerhof' ? ngammaMeyerhof(phi) : ngammaHansen(phi);
   const s = shapeDeBeer(phi, b, l);
   nonNegative('Df', df);
-  const d = dm === 'hansen' ? depthHansen(phi, df, b) : dm === 'meyerhof' ? depthMeyerhof(phi, df, b) : { dc: 1, dq: 1, dg: 1 };
+  // Depth factors on the full width even when B is an effective width B' (Das, effective-area method [from memory]).
+  const d = dm === 'hansen' ? depthHansen(phi, df, bDepth) : dm === 'meyerhof' ? depthMeyerhof(phi, df, bDepth) : { dc: 1, dq: 1, dg: 1 };
   return nonNegative('c', c) * nc * s.sc * d.dc + nonNegative('q', q) * nq * s.sq * d.dq +
     0.5 * nonNegative('gamma', gamma) * b * ngamma * s.sg * d.dg;
 }
@@ -134,15 +135,17 @@ export const functions: LibFunction[] = [
       phiP,
       { name: 'ngamma', type: 'text', choices: NGAMMA_METHODS, doc: "Nγ: 'vesic' (default), 'meyerhof' or 'hansen'" },
       { name: 'depth', type: 'text', choices: DEPTH_METHODS, doc: "depth factors: 'hansen' (default), 'meyerhof' or 'none'" },
+      { name: 'B_depth', type: 'm', doc: "width for the depth factors (default B; the full width when B is an eccentric load's B')" },
     ],
-    optional: 2,
+    optional: 3,
     returns: 'Pa',
     clause: `qu = cNc·sc·dc + qNq·sq·dq + ½γBNγ·sγ·dγ (Meyerhof 1963 / Vesic 1973); ${SHAPE}; ${HANSEN} or ${MEYERHOF}`,
     doc: 'Ultimate bearing capacity, general equation with shape and depth factors',
-    fn: (c: number, q: number, g: number, b: number, l: number, df: number, p: number, ng?: string, dm?: string) =>
+    fn: (c: number, q: number, g: number, b: number, l: number, df: number, p: number, ng?: string, dm?: string, bd?: number) =>
       quGeneral(c, q, g, b, l, df, p,
         ng === undefined ? 'vesic' : choice('Nγ method', ng, NGAMMA_METHODS),
-        dm === undefined ? 'hansen' : choice('depth factor method', dm, DEPTH_METHODS)),
+        dm === undefined ? 'hansen' : choice('depth factor method', dm, DEPTH_METHODS),
+        bd === undefined ? b : positive('B_depth', bd)),
   }),
   defineFunction({
     name: 'q_allow_fs',

@@ -10,7 +10,7 @@ import { LibraryError, defineFunction, type LibFunction, type LibParam } from '.
 import { choice, finite, nonNegative, positive } from './support-args';
 import { deg } from '../units/si';
 
-export const SHAPES = ['strip', 'square', 'circular'] as const;
+export const SHAPES = ['strip', 'square', 'circular', 'rectangular'] as const;
 export const SHEAR_MODES = ['general', 'local'] as const;
 type Shape = (typeof SHAPES)[number];
 type ShearMode = (typeof SHEAR_MODES)[number];
@@ -105,12 +105,16 @@ export function terzaghiFactors(phi: number, mode: ShearMode = 'general', family
   return { nc: ncTerzaghi(p), nq: nqTerzaghi(p), ngamma: ngammaTerzaghi(p, family) };
 }
 
-/** qu = s_c c Nc + q Nq + s_γ γ B Nγ: strip 1/0.5, square 1.3/0.4, circular 1.3/0.3 (Terzaghi 1943; Das §3.3). */
+/**
+ * qu = s_c c Nc + q Nq + s_γ γ B Nγ: strip 1/0.5, square 1.3/0.4, circular 1.3/0.3 (Terzaghi 1943; Das §3.3).
+ * Terzaghi gave no rectangle; 'rectangular' (e.g. the effective area B' × L of an eccentric load) takes the
+ * lower of his strip and square factors for each term, 1.0 and 0.4, which bounds any rectangle from below.
+ */
 export function quTerzaghi(c: number, q: number, gamma: number, b: number, phi: number, shape: Shape, mode: ShearMode = 'general', family: NgammaFamily = 'das'): number {
   const f = terzaghiFactors(phi, mode, family);
   const cc = nonNegative('c', c) * (mode === 'local' ? 2 / 3 : 1);
-  const sc = shape === 'strip' ? 1 : 1.3;
-  const sg = shape === 'strip' ? 0.5 : shape === 'square' ? 0.4 : 0.3;
+  const sc = shape === 'strip' || shape === 'rectangular' ? 1 : 1.3;
+  const sg = shape === 'strip' ? 0.5 : shape === 'circular' ? 0.3 : 0.4;
   return sc * cc * f.nc + nonNegative('q', q) * f.nq + sg * nonNegative('gamma', gamma) * positive('B', b) * f.ngamma;
 }
 
@@ -151,13 +155,13 @@ export const functions: LibFunction[] = [
       { name: 'gamma', type: 'N/m^3', doc: 'unit weight of the soil below the base' },
       { name: 'B', type: 'm', doc: 'footing width (diameter if circular)' },
       phiParam,
-      { name: 'shape', type: 'text', choices: SHAPES, doc: "'strip', 'square' or 'circular'" },
+      { name: 'shape', type: 'text', choices: SHAPES, doc: "'strip', 'square', 'circular' or 'rectangular' (lower bound 1.0cNc, 0.4γBNγ)" },
       modeParam,
       familyParam,
     ],
     optional: 2,
     returns: 'Pa',
-    clause: 'Terzaghi (1943): qu = cNc + qNq + 0.5γBNγ; square 1.3cNc + qNq + 0.4γBNγ; circular 1.3cNc + qNq + 0.3γBNγ (Das §3.3); Nγ from Das Table 3.1' + LOCAL + ", c' = 2c/3",
+    clause: 'Terzaghi (1943): qu = cNc + qNq + 0.5γBNγ; square 1.3cNc + qNq + 0.4γBNγ; circular 1.3cNc + qNq + 0.3γBNγ (Das §3.3); rectangular: the lower strip/square factors, cNc + qNq + 0.4γBNγ (a bound, no Terzaghi form); Nγ from Das Table 3.1' + LOCAL + ", c' = 2c/3",
     doc: 'Ultimate bearing capacity by Terzaghi, general or local shear',
     fn: (c: number, q: number, g: number, b: number, phi: number, s: string, m?: string, fam?: string) =>
       quTerzaghi(c, q, g, b, phi, choice('shape', s, SHAPES), mode(m), ngammaFamily(fam)),
