@@ -11,6 +11,9 @@ import { printDiff } from './diff';
 import { exitCode, resultRows, table } from './report';
 import { exportRecord, readDocumentSource } from '../record/index';
 import { recordShellFile } from './record-shell';
+import { withMeta } from './meta';
+import { openPrinter, sheetsPage } from './pdf';
+import type { Engine } from '../engine-types';
 
 /** A file's document, its faults reported through `err`; undefined when it cannot be read at all. */
 async function loadDocument(file: string, err: (s: string) => void): Promise<{ doc: CalcDocument; broken: boolean } | undefined> {
@@ -50,7 +53,7 @@ export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s:
 async function calc(args: CalcArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
   const loaded = await loadDocument(args.file, err);
   if (!loaded) return 2;
-  let doc: CalcDocument = loaded.doc;
+  let doc: CalcDocument = withMeta(loaded.doc, args.metas ?? []);
   for (const { name, value } of args.sets) {
     const cell = doc.cells.find((c) => c.kind === 'input' && c.name === name);
     if (!cell) {
@@ -88,9 +91,31 @@ async function calc(args: CalcArgs, out: (s: string) => void, err: (s: string) =
       return 2;
     }
   }
+  if (args.pdfTo !== undefined && !(await writePdf(doc, engine, args, err))) {
+    engine.dispose();
+    return 2;
+  }
   out(args.json ? JSON.stringify(rows, null, 2) : table(rows, engine));
   engine.dispose();
   return loaded.broken ? 2 : exitCode(rows);
+}
+
+/** `--pdf`: the record's sheets through Chromium; false (with the reason told) when it cannot. */
+async function writePdf(doc: CalcDocument, engine: Engine, args: CalcArgs, err: (s: string) => void): Promise<boolean> {
+  const to = args.pdfTo!;
+  try {
+    const printer = await openPrinter();
+    try {
+      const bytes = await printer.print(await sheetsPage(doc, (id) => engine.state(id)), to, args.paper ?? 'Letter');
+      err(`PDF written: ${to} (${(bytes / 1e6).toFixed(2)} MB, ${args.paper ?? 'Letter'})`);
+    } finally {
+      await printer.close();
+    }
+    return true;
+  } catch (e) {
+    err(`--pdf ${to}: ${(e as Error).message}`);
+    return false;
+  }
 }
 
 async function main(): Promise<void> {

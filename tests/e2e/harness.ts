@@ -12,10 +12,9 @@ export const ROOT = resolve(import.meta.dirname, '../..');
 export const ARTIFACTS = join(ROOT, 'test-artifacts');
 const VITE = join(ROOT, 'node_modules/.bin/vite');
 
-export const CHROMIUM_ARGS = [
-  '--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
-  '--disable-background-networking', '--disable-component-update', '--disable-sync',
-];
+/** The CLI's PDF printing launches Chromium with the same flags. */
+export { CHROMIUM_ARGS } from '../../runtime/cli/pdf';
+import { CHROMIUM_ARGS } from '../../runtime/cli/pdf';
 
 /** Builds the app into a fresh temporary folder and returns it. */
 export function buildApp(extraEnv: Record<string, string> = {}): string {
