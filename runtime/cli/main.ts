@@ -11,6 +11,7 @@ import { printDiff } from './diff';
 import { exitCode, resultRows, table } from './report';
 import { exportRecord, readDocumentSource } from '../record/index';
 import { recordShellFile } from './record-shell';
+import { runBatch } from './batch';
 import { withMeta } from './meta';
 import { openPrinter, sheetsPage } from './pdf';
 import type { Engine } from '../engine-types';
@@ -61,6 +62,10 @@ async function calc(args: CalcArgs, out: (s: string) => void, err: (s: string) =
       return 2;
     }
     doc = setInputValueKeepUnit(doc, cell.id, value);
+  }
+  if (args.batch !== undefined) {
+    const code = await runBatch(doc, args, out, err);
+    return loaded.broken ? 2 : code;
   }
   if (args.diffWith !== undefined) {
     const other = await loadDocument(args.diffWith, err);

@@ -4,7 +4,7 @@
 // searchable, the --meta title block on every sheet, fonts embedded, Letter or A4.
 
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -103,5 +103,23 @@ describe('calc --pdf', () => {
     expect(pdfinfo(pdf)).toMatch(/Page size:\s+595\.\d+ x 842\.\d+ pts \(A4\)/);
     const pages = pageCount(pdf);
     for (let n = 1; n <= pages; n++) expect(text(pdf, n)).toMatch(new RegExp(`sheet ${n} of ${pages}\\b`, 'i'));
+  }, 120_000);
+
+  it('a batch writes a PDF per row, each with its own title block, over one Chromium', async () => {
+    const csv = join(dir, 'runs.csv');
+    writeFileSync(csv, 'B,meta:subject\n9 ft,Footing F-1\n10 ft,Footing F-2\n');
+    const out = join(dir, 'runs');
+    const r = await calc(join(ROOT, 'docs-templates/spread-footing.lt'), '--batch', csv, '--out', out, '--as', 'pdf');
+    expect(r.code).toBe(0);
+    expect(readdirSync(out).sort()).toEqual(['index.csv', 'spread-footing-row2.pdf', 'spread-footing-row3.pdf']);
+    for (const [file, subject] of [['spread-footing-row2.pdf', 'Footing F-1'], ['spread-footing-row3.pdf', 'Footing F-2']]) {
+      const pdf = join(out, file);
+      const pages = pageCount(pdf);
+      for (let n = 1; n <= pages; n++) {
+        const t = text(pdf, n);
+        expect(t).toContain(subject);
+        expect(t).toMatch(new RegExp(`sheet ${n} of ${pages}\\b`, 'i'));
+      }
+    }
   }, 120_000);
 });
