@@ -2,47 +2,28 @@
 // plus DIR/index.csv; a bad CSV is refused naming its row and column (the header is row 1).
 // Records are packed into the stub shell (LOADTRACE_SHELL); PDFs per row: tests/e2e/pdf.test.ts.
 
-import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import Papa from 'papaparse';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { parseArgs, UsageError } from '../../runtime/cli/args';
-import { runCalc } from '../../runtime/cli/main';
 import { parse } from '../../runtime/format/index';
 import { unpack } from '../../runtime/record/index';
-import { STUB_SHELL } from '../record/fixtures';
+import { calc, scratchWithStubShell } from './helpers';
 
 const TEMPLATE = 'docs-templates/spread-footing.lt';
-let dir: string;
-
-async function calc(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  const out: string[] = [];
-  const err: string[] = [];
-  const code = await runCalc(parseArgs(argv), (s) => out.push(s), (s) => err.push(s));
-  return { code, out: out.join('\n'), err: err.join('\n') };
-}
-
+const scratch = scratchWithStubShell('cli-batch');
 /** Writes a CSV and runs the footing template over it into a fresh folder. */
 async function batch(name: string, csv: string, ...more: string[]) {
-  const file = join(dir, `${name}.csv`);
+  const file = join(scratch(), `${name}.csv`);
   writeFileSync(file, csv);
-  const out = join(dir, name);
+  const out = join(scratch(), name);
   const r = await calc(TEMPLATE, '--batch', file, '--out', out, ...more);
   return { code: r.code, stdout: r.out, err: r.err, out };
 }
 
 const index = (out: string) => Papa.parse<Record<string, string>>(readFileSync(join(out, 'index.csv'), 'utf8'), { header: true, skipEmptyLines: true }).data;
 
-beforeAll(() => {
-  dir = mkdtempSync(join(tmpdir(), 'loadtrace-cli-batch-'));
-  writeFileSync(join(dir, 'shell.html'), STUB_SHELL);
-  process.env.LOADTRACE_SHELL = join(dir, 'shell.html');
-});
-afterAll(() => {
-  delete process.env.LOADTRACE_SHELL;
-  rmSync(dir, { recursive: true, force: true });
-});
 
 describe('calc --batch', () => {
   it('writes one record per row, with the row\'s inputs and title block, and an index of outcomes', async () => {

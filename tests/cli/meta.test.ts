@@ -3,39 +3,20 @@
 // `--pdf` with no Chromium is a clear error, exit 2 (Chromium itself: tests/e2e/pdf.test.ts).
 
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { parseArgs, UsageError } from '../../runtime/cli/args';
-import { runCalc } from '../../runtime/cli/main';
 import { parse } from '../../runtime/format/index';
 import { unpack } from '../../runtime/record/index';
-import { STUB_SHELL } from '../record/fixtures';
+import { calc, scratchWithStubShell } from './helpers';
 
 const TEMPLATE = 'docs-templates/spread-footing.lt';
-let dir: string;
-
-async function calc(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  const out: string[] = [];
-  const err: string[] = [];
-  const code = await runCalc(parseArgs(argv), (s) => out.push(s), (s) => err.push(s));
-  return { code, out: out.join('\n'), err: err.join('\n') };
-}
-
-beforeAll(() => {
-  dir = mkdtempSync(join(tmpdir(), 'loadtrace-cli-meta-'));
-  writeFileSync(join(dir, 'shell.html'), STUB_SHELL);
-  process.env.LOADTRACE_SHELL = join(dir, 'shell.html');
-});
-afterAll(() => {
-  delete process.env.LOADTRACE_SHELL;
-  rmSync(dir, { recursive: true, force: true });
-});
+const scratch = scratchWithStubShell('cli-meta');
 
 describe('calc --meta', () => {
   it('sets the title block of an exported record: its static rendering and its document', async () => {
-    const out = join(dir, 'meta.html');
+    const out = join(scratch(), 'meta.html');
     const r = await calc(TEMPLATE, '--export', out,
       '--meta', 'project=Quayside Depot', '--meta', 'job=LT-27-015', '--meta', 'subject=Footing F-7',
       '--meta', 'by=A. Nwosu', '--meta', 'checked=P. Ferreira', '--meta', 'revision=2', '--meta=date=2027-03-01');
@@ -53,7 +34,7 @@ describe('calc --meta', () => {
   });
 
   it('keeps the fields not given, and the later of two settings wins', async () => {
-    const out = join(dir, 'some.html');
+    const out = join(scratch(), 'some.html');
     await calc(TEMPLATE, '--export', out, '--meta', 'prepared=first', '--meta', 'by=second');
     const meta = parse((await unpack(readFileSync(out, 'utf8'))).docText!).doc.meta;
     const given = parse(readFileSync(TEMPLATE, 'utf8')).doc.meta;
@@ -74,12 +55,12 @@ describe('calc --meta', () => {
 
 describe('calc --pdf without Chromium', () => {
   it('says where Chromium was looked for and how to get it, exit 2, and writes nothing', async () => {
-    process.env.LOADTRACE_CHROMIUM = join(dir, 'no-chromium-here');
+    process.env.LOADTRACE_CHROMIUM = join(scratch(), 'no-chromium-here');
     try {
-      const out = join(dir, 'x.pdf');
+      const out = join(scratch(), 'x.pdf');
       const r = await calc(TEMPLATE, '--pdf', out);
       expect(r.code).toBe(2);
-      expect(r.err).toContain(`--pdf ${out}: printing to PDF needs Chromium at ${join(dir, 'no-chromium-here')}, which is not there: install Debian's (apt-get install chromium)`);
+      expect(r.err).toContain(`--pdf ${out}: printing to PDF needs Chromium at ${join(scratch(), 'no-chromium-here')}, which is not there: install Debian's (apt-get install chromium)`);
       expect(() => readFileSync(out)).toThrow();
     } finally {
       delete process.env.LOADTRACE_CHROMIUM;
