@@ -1,4 +1,5 @@
 import { defineConfig, type Plugin } from 'vite';
+import { recordShellOnDemand } from './cells/record/dev-shell-plugin';
 
 /**
  * mathjs gives three error classes their prototype with `new RangeError()` / `new Error()`
@@ -23,11 +24,13 @@ function mathjsErrorPrototypes(): Plugin {
 // docs-templates/ are imported as text at build time.
 export default defineConfig({
   root: '.',
-  plugins: [mathjsErrorPrototypes()],
+  // npm start builds the record shell itself (on start, and again when Export finds it stale).
+  plugins: [mathjsErrorPrototypes(), recordShellOnDemand()],
   build: {
     outDir: 'dist',
     target: 'es2022',
     chunkSizeWarningLimit: 2500,
   },
-  server: { open: true },
+  // The record shell's build output is no source of the page.
+  server: { open: true, watch: { ignored: ['**/dist-record/**', '**/dist/**'] } },
 });
