@@ -1,13 +1,14 @@
 // Flexure of a rectangular section with tension steel only: equivalent rectangular stress
 // block 0.85f'c over a = β1c, εcu = 0.003 (ACI 318-19 §22.2.2). All in SI; the stress block
-// is unit-consistent, only β1 and Es come from clauses stated in psi.
+// is unit-consistent, only β1 and Es come from clauses stated in psi. fy is taken not above
+// the flexure cap of Table 20.2.2.4(a) for the edition (100 ksi in 318-19, 80 ksi in 318-14).
 
 import { defineFunction, LibraryError, type LibFunction } from './types';
 import { edition, nonNegative, positive, show, type Edition, EDITIONS } from './gravity-args';
 import { beta1 } from './concrete';
 import { barData, BARS } from './rebar';
 import { ES, epsTc, epsTy, phiEpsT } from './resistance-factors';
-import { asMinSlab } from './reinforcement-limits';
+import { asMinSlab, fyDesign } from './reinforcement-limits';
 import { inch, mm } from '../units/si';
 
 const ECU = 0.003; // ACI 318-19 §22.2.2.1
@@ -43,12 +44,12 @@ export function section(As: number, b: number, d: number, fc: number, fy: number
 }
 
 /** ACI 318-19 §22.2.2.4 Whitney block: As for Mu with φ = 0.9, ρ = 0.85f'c/fy·(1 − √(1 − 2Rn/(0.85f'c))). */
-export function asRequired(Mu: number, b: number, d: number, fc: number, fy: number): number {
+export function asRequired(Mu: number, b: number, d: number, fc: number, fy: number, ed: Edition = '318-19'): number {
   const M = nonNegative('Mu', Mu);
   const bb = positive('b', b);
   const dd = positive('d', d);
   const f = positive('fc', fc);
-  const y = positive('fy', fy);
+  const y = fyDesign(fy, 'flexure', edition(ed));
   const Rn = M / (PHI_TC * bb * dd * dd);
   const root = 1 - (2 * Rn) / (0.85 * f);
   if (root < 0) {
@@ -60,19 +61,21 @@ export function asRequired(Mu: number, b: number, d: number, fc: number, fy: num
 }
 
 /** ACI 318-19 §22.2.2.1: net tensile strain εt = 0.003(d − c)/c of the extreme tension steel. */
-export function epsT(As: number, b: number, d: number, fc: number, fy: number): number {
-  return section(As, b, d, fc, fy).epsT;
+export function epsT(As: number, b: number, d: number, fc: number, fy: number, ed: Edition = '318-19'): number {
+  return section(As, b, d, fc, fyDesign(fy, 'flexure', edition(ed))).epsT;
 }
 
 /** ACI 318-19 Table 21.2.2: true when εt reaches the tension-controlled limit. */
 export function tensionControlled(As: number, b: number, d: number, fc: number, fy: number, ed: Edition = '318-19'): boolean {
-  return epsT(As, b, d, fc, fy) >= epsTc(fy, edition(ed)) - 1e-12;
+  const fyD = fyDesign(fy, 'flexure', edition(ed));
+  return epsT(As, b, d, fc, fy, ed) >= epsTc(fyD, edition(ed)) - 1e-12;
 }
 
 /** ACI 318-19 §22.2 and Table 21.2.2: design strength φMn = φ As fs (d − a/2), φ from εt. */
 export function phiMn(As: number, b: number, d: number, fc: number, fy: number, ed: Edition = '318-19'): number {
-  const s = section(As, b, d, fc, fy);
-  const phi = phiEpsT(s.epsT, fy, 'other', edition(ed));
+  const fyD = fyDesign(fy, 'flexure', edition(ed));
+  const s = section(As, b, d, fc, fyD);
+  const phi = phiEpsT(s.epsT, fyD, 'other', edition(ed));
   return phi * As * s.fs * (d - s.a / 2);
 }
 
@@ -89,7 +92,7 @@ export function phiMnBars(bar: string, s: number, d: number, fc: number, fy: num
 /** Design steel of a slab strip: the larger of as_required and As,min (ACI 318-19 §22.2, §7.6.1.1 / §8.6.1.1). */
 export function asSlab(Mu: number, b: number, d: number, h: number, fc: number, fy: number, ed: Edition = '318-19'): number {
   if (positive('h', h) < positive('d', d)) throw new LibraryError('as_slab: h must not be less than d');
-  return Math.max(asRequired(Mu, b, d, fc, fy), asMinSlab(b, h, fy, ed));
+  return Math.max(asRequired(Mu, b, d, fc, fy, ed), asMinSlab(b, h, fy, ed));
 }
 
 /** Practical spacing increments (common practice): 0.5 in for inch-pound bars, 25 mm for metric bars. */
@@ -127,10 +130,10 @@ const ED = { name: 'edition', type: 'text', choices: EDITIONS, doc: "ACI 318 edi
 
 export const functions: LibFunction[] = [
   defineFunction({
-    name: 'as_required', params: [{ name: 'Mu', type: 'N*m', doc: 'factored moment' }, B, D, FC, FY],
-    returns: 'm^2', clause: 'ACI 318-19 §22.2.2.4 (φ = 0.90)',
+    name: 'as_required', params: [{ name: 'Mu', type: 'N*m', doc: 'factored moment' }, B, D, FC, FY, ED],
+    optional: 1, returns: 'm^2', clause: 'ACI 318-19 §22.2.2.4 (φ = 0.90); fy ≤ 100 ksi (318-14: 80 ksi), Table 20.2.2.4(a)',
     doc: 'Tension steel for Mu by the rectangular stress block, φ = 0.90',
-    fn: (Mu: number, b: number, d: number, fc: number, fy: number) => asRequired(Mu, b, d, fc, fy),
+    fn: (Mu: number, b: number, d: number, fc: number, fy: number, ed?: Edition) => asRequired(Mu, b, d, fc, fy, ed),
   }),
   defineFunction({
     name: 'as_slab',
@@ -142,9 +145,9 @@ export const functions: LibFunction[] = [
       asSlab(Mu, b, d, h, fc, fy, ed),
   }),
   defineFunction({
-    name: 'eps_t', params: [AS, B, D, FC, FY], returns: '1', clause: 'ACI 318-19 §22.2.2.1',
+    name: 'eps_t', params: [AS, B, D, FC, FY, ED], optional: 1, returns: '1', clause: 'ACI 318-19 §22.2.2.1; slabs and footings need εt ≥ 0.004 (§7.3.3.1, §8.3.3.1) [from memory]',
     doc: 'Net tensile strain in the extreme tension steel',
-    fn: (As: number, b: number, d: number, fc: number, fy: number) => epsT(As, b, d, fc, fy),
+    fn: (As: number, b: number, d: number, fc: number, fy: number, ed?: Edition) => epsT(As, b, d, fc, fy, ed),
   }),
   defineFunction({
     name: 'tension_controlled', params: [AS, B, D, FC, FY, ED], optional: 1, returns: 'bool',

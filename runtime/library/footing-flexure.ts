@@ -6,7 +6,7 @@
 import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
 import { EDITIONS, edition, optional, phiFactor, positive, type Edition } from './support-args';
 import { quFooting } from './footing-area';
-import { rhoMinSlab } from './reinforcement-limits';
+import { fyDesign, rhoMinSlab } from './reinforcement-limits';
 
 /** Mu at the column face = qu · B · ℓ² / 2 with ℓ = (L − c)/2 (ACI 318-19 §13.2.7.1). */
 export function muFooting(pu: number, b: number, l: number, c: number): number {
@@ -17,12 +17,12 @@ export function muFooting(pu: number, b: number, l: number, c: number): number {
 }
 
 /** As from Mu ≤ φ As fy (d − a/2), a = As fy / (0.85 f'c b): the Whitney block (ACI 318-19 §22.2.2.4.1). */
-export function asReqFooting(mu: number, b: number, d: number, fc: number, fy: number, phi = 0.9): number {
+export function asReqFooting(mu: number, b: number, d: number, fc: number, fySpecified: number, phi = 0.9, ed: Edition = '318-19'): number {
   positive('Mu', mu);
   positive('B', b);
   positive('d', d);
   positive('fc', fc);
-  positive('fy', fy);
+  const fy = fyDesign(fySpecified, 'flexure', ed); // Table 20.2.2.4(a) cap [from memory]
   phiFactor(phi);
   const k = (2 * mu) / (phi * 0.85 * fc * b * d * d);
   if (k >= 1) throw new LibraryError('footing too shallow: Mu exceeds the capacity of the concrete stress block; increase h');
@@ -45,7 +45,7 @@ export function asMinFooting(b: number, h: number, fy?: number, ed: Edition = '3
 /** The larger of the Whitney steel and the minimum of the edition. */
 export function asFooting(mu: number, b: number, d: number, h: number, fc: number, fy: number, phi = 0.9, ed: Edition = '318-19'): number {
   if (positive('h', h) <= positive('d', d)) throw new LibraryError('h must exceed d');
-  return Math.max(asReqFooting(mu, b, d, fc, fy, phi), asMinFooting(b, h, fy, ed));
+  return Math.max(asReqFooting(mu, b, d, fc, fy, phi, ed), asMinFooting(b, h, fy, ed));
 }
 
 /** γs = 2/(β + 1), β = long side / short side (ACI 318-19 Eq. 13.3.3.3). */

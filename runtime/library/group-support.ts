@@ -8,6 +8,7 @@ import { functions as punchingDropPanel } from './punching-drop-panel';
 import { functions as punchingMomentTransfer } from './punching-moment-transfer';
 import { functions as punchingOpenings } from './punching-openings';
 import { functions as columnThroughFloor } from './column-through-floor';
+import { functions as columnEquivalentSquare } from './column-equivalent-square';
 import { functions as columnAxial } from './column-axial';
 import { functions as columnSlenderness } from './column-slenderness';
 import { functions as columnInteraction } from './column-interaction';
@@ -33,6 +34,7 @@ export const supportFunctions: LibFunction[] = [
   ...punchingMomentTransfer,
   ...punchingOpenings,
   ...columnThroughFloor,
+  ...columnEquivalentSquare,
   ...columnAxial,
   ...columnSlenderness,
   ...columnInteraction,

@@ -37,7 +37,7 @@ export function asMaxTc(b: number, d: number, fc: number, fy: number, ed: Editio
   const bb = positive('b', b);
   const dd = positive('d', d);
   const f = positive('fc', fc);
-  const y = positive('fy', fy);
+  const y = fyDesign(fy, 'flexure', edition(ed));
   const c = (0.003 / (0.003 + epsTc(y, edition(ed)))) * dd;
   return (0.85 * f * beta1(f) * c * bb) / y;
 }
@@ -62,11 +62,38 @@ export function sMaxCrack(fs: number, cc: number): number {
   return s * inch;
 }
 
+export const FY_USES = ['flexure', 'shear'] as const;
+export type FyUse = (typeof FY_USES)[number];
+
+/**
+ * Largest fy a design calculation may use, nonprestressed deformed bars outside special seismic
+ * systems (ACI 318-19 Table 20.2.2.4(a), from memory): flexure, axial force, shrinkage and temperature
+ * 100 ksi in 318-19, 80 ksi in 318-14; shear and torsion reinforcement 60 ksi. (Column Po takes
+ * fy ≤ 80 ksi by §22.4.2.1, in column-axial.ts.)
+ */
+export function fyCap(use: FyUse, ed: Edition = '318-19'): number {
+  if (use === 'shear') return 60000 * psi;
+  return (edition(ed) === '318-19' ? 100000 : 80000) * psi;
+}
+
+/** fy taken in the calculation: the specified fy, not above the cap of Table 20.2.2.4(a). */
+export function fyDesign(fy: number, use: FyUse = 'flexure', ed: Edition = '318-19'): number {
+  return Math.min(positive('fy', fy), fyCap(use, ed));
+}
+
 const FC = { name: 'fc', type: 'Pa', doc: "specified compressive strength f'c" };
 const FY = { name: 'fy', type: 'Pa', doc: 'specified yield strength of the reinforcement' };
 const ED = { name: 'edition', type: 'text', choices: EDITIONS, doc: "ACI 318 edition, '318-19' (default) or '318-14'" };
 
 export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'fy_design',
+    params: [FY, { name: 'use', type: 'text', choices: FY_USES, doc: "'flexure' (default; also axial force, shrinkage) or 'shear'" }, ED],
+    optional: 2, returns: 'Pa',
+    clause: 'ACI 318-19 Table 20.2.2.4(a): fy ≤ 100 ksi for flexure (318-14: 80 ksi), ≤ 60 ksi for shear reinforcement [from memory]',
+    doc: 'Yield strength used in design: the specified fy, capped where the code caps it',
+    fn: (fy: number, use?: FyUse, ed?: Edition) => fyDesign(fy, use === undefined ? 'flexure' : choice('use', use, FY_USES), ed),
+  }),
   defineFunction({
     name: 'rho_min_slab', params: [FY, ED], optional: 1, returns: '1',
     clause: 'ACI 318-19 Tables 7.6.1.1, 8.6.1.1; §24.4.3.2',

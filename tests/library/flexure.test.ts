@@ -52,6 +52,30 @@ describe('over-reinforced section: strain compatibility, φ = 0.65', () => {
   });
 });
 
+describe('fy capped where the code caps it (ACI 318-19 Table 20.2.2.4(a), from memory)', () => {
+  it('flexure takes fy ≤ 100 ksi in 318-19, ≤ 80 ksi in 318-14; shear reinforcement ≤ 60 ksi', () => {
+    expect(gn('fy_design', 120000 * psi) / psi).toBeCloseTo(100000, 6);
+    expect(gn('fy_design', 120000 * psi, 'flexure', '318-14') / psi).toBeCloseTo(80000, 6);
+    expect(gn('fy_design', 80000 * psi, 'shear') / psi).toBeCloseTo(60000, 6);
+    expect(gn('fy_design', 60000 * psi) / psi).toBeCloseTo(60000, 6);
+  });
+
+  it('φMn of As = 1 in², b = 12 in, d = 10 in, 5000 psi with 120 ksi bars is that of 100 ksi bars', () => {
+    // fy = 100 ksi: a = 1·100,000/(0.85·5000·12) = 1.961 in; c = a/0.80 = 2.451 in (β1, Table 22.2.2.4.3);
+    // εt = 0.003(10 − 2.451)/2.451 = 0.00924 ≥ εty + 0.003 = 0.00645 → φ = 0.90 (Table 21.2.2);
+    // φMn = 0.9·1·100,000·(10 − 0.980) = 811,765 lb·in.
+    const a = 100000 / (0.85 * 5000 * 12);
+    const expected = 0.9 * 100000 * (10 - a / 2);
+    expect(gn('phi_mn', 1 * in2, 12 * inch, 10 * inch, 5000 * psi, 120000 * psi) / (lbf * inch)).toBeCloseTo(expected, 3);
+    expect(gn('phi_mn', 1 * in2, 12 * inch, 10 * inch, 5000 * psi, 100000 * psi) / (lbf * inch)).toBeCloseTo(expected, 3);
+    // 318-14 caps at 80 ksi: a = 1.569 in, φMn = 0.9·80,000·(10 − 0.784) = 663,529 lb·in (εt = 0.0123 ≥ 0.005).
+    const a14 = 80000 / (0.85 * 5000 * 12);
+    expect(gn('phi_mn', 1 * in2, 12 * inch, 10 * inch, 5000 * psi, 120000 * psi, '318-14') / (lbf * inch)).toBeCloseTo(0.9 * 80000 * (10 - a14 / 2), 3);
+    // as_required: the inverse on the capped fy.
+    expect(gn('as_required', expected * lbf * inch, 12 * inch, 10 * inch, 5000 * psi, 120000 * psi) / in2).toBeCloseTo(1, 6);
+  });
+});
+
 describe('SI input', () => {
   it('1 m strip, d = 160 mm, f\'c = 30 MPa, fy = 420 MPa, Mu = 40 kN·m', () => {
     // by hand: Rn = 40e6/(0.9·1000·160²) = 1.7361 MPa; ρ = (25.5/420)(1 − √(1 − 2·1.7361/25.5))
