@@ -1,7 +1,8 @@
 // The check summary near the top of the sheet: every check with its ratio, the
 // governing ones first (failures, then the highest ratios), each a link to its cell.
 
-import type { Cell, CheckCell } from '../runtime/document';
+import type { CalcDocument, Cell, CheckCell } from '../runtime/document';
+import { cellsInError, inErrorText, type CellInError } from '../runtime/graph/in-error';
 import type { CellState } from '../runtime/engine-types';
 import { ratioText } from '../runtime/handcalc/index';
 import { escapeHtml } from './kind';
@@ -40,13 +41,17 @@ const WORDS: Record<SummaryRow['status'], [string, string]> = {
   ok: ['✓', 'OK'], fail: ['✗', 'NOT OK'], error: ['⚠', 'ERROR'], pending: ['…', 'pending'],
 };
 
-export function summaryHtml(rows: SummaryRow[]): string {
-  if (rows.length === 0) return '';
+export function summaryHtml(rows: SummaryRow[], inError: readonly CellInError[] = [], numbers?: ReadonlyMap<string, string>): string {
+  if (rows.length === 0 && inError.length === 0) return '';
   const failing = rows.filter((r) => r.status === 'fail').length;
   const broken = rows.filter((r) => r.status === 'error').length;
   const head = `${rows.length} check${rows.length === 1 ? '' : 's'}: ${
-    failing ? `${failing} NOT OK` : 'all OK'}${broken ? `, ${broken} with errors` : ''}`;
-  const items = rows.map((r) => {
+    failing ? `${failing} NOT OK` : broken || inError.length ? 'none NOT OK' : 'all OK'}${broken ? `, ${broken} with errors` : ''}${
+    inError.length ? `; ${inErrorText(inError)}` : ''}`;
+  // Cells other than checks whose error is their own come first: nothing reads past them.
+  const sources: SummaryRow[] = inError.filter((c) => c.source && c.kind !== 'check')
+    .map((c) => ({ id: c.id, number: numbers?.get(c.id) ?? '', title: `${c.title}: ${c.message}`, status: 'error' }));
+  const items = [...sources, ...rows].map((r) => {
     const [glyph, word] = WORDS[r.status];
     const pct = r.ratio === undefined ? 0 : Math.max(0, Math.min(100, (r.ratio / 1.25) * 100));
     const ratio = r.ratio === undefined
@@ -66,7 +71,8 @@ export function writeSummary(
   state: (id: string) => CellState | undefined,
   numbers: ReadonlyMap<string, string>,
 ): void {
-  const html = summaryHtml(summaryRows(cells.filter((c): c is CheckCell => c.kind === 'check'), state, numbers));
+  const inError = cellsInError({ meta: {} as CalcDocument['meta'], cells: [...cells] }, state);
+  const html = summaryHtml(summaryRows(cells.filter((c): c is CheckCell => c.kind === 'check'), state, numbers), inError, numbers);
   if (host.dataset.html === html) return;
   host.innerHTML = html;
   host.dataset.html = html;

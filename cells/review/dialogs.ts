@@ -3,6 +3,7 @@
 
 import type { CalcDocument } from '../../runtime/document';
 import { createEngine } from '../../runtime/engine';
+import { cellsInError, inErrorText, type CellInError } from '../../runtime/graph/in-error';
 import { parse } from '../../runtime/format/index';
 import { readDocumentSource } from '../../runtime/record/index';
 import { compare, diffRecords, issueRevision, latestRevision, nextRevisionLabel } from '../../runtime/review/index';
@@ -45,6 +46,7 @@ export function openIssueDialog(host: ReviewHost, userName: string, remember: (n
   const d = dialog('rv-issue', 'Issue a revision');
   d.innerHTML = `<form method="dialog" class="rv-issue-form">
 <h2>Issue a revision</h2>
+${engine ? inErrorHtml(cellsInError(doc, (id) => engine.state(id))) : ''}
 <p class="rv-note">Every input value and every result is frozen as the issued baseline, to review against. ${since}</p>
 <div class="rv-grid">
 <label>Revision <input name="label" value="${escapeHtml(nextRevisionLabel(doc.review))}" required pattern="[A-Za-z0-9_\\-]+" size="6"></label>
@@ -81,6 +83,14 @@ export function openIssueDialog(host: ReviewHost, userName: string, remember: (n
     }
   });
   d.showModal();
+}
+
+/** The cells in error, listed before anything else is asked (issue 15: nothing taken silently). */
+function inErrorHtml(list: CellInError[]): string {
+  if (list.length === 0) return '';
+  const items = list.slice(0, 12).map((c) => `<li><a href="#cell-${escapeHtml(c.id)}">${escapeHtml(c.title)}</a>: ${escapeHtml(c.message)}</li>`);
+  return `<div class="rv-in-error" role="alert"><p><strong>${escapeHtml(inErrorText(list))}.</strong> Issuing freezes them as they are.</p><ul>${
+    items.join('')}${list.length > 12 ? `<li>… and ${list.length - 12} more</li>` : ''}</ul></div>`;
 }
 
 /** Reads another record (.html or .lt) and shows it beside the open sheet. */

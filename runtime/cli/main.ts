@@ -2,7 +2,8 @@
 // headless with the same engine the browser uses.
 
 import { readFileSync, writeFileSync } from 'node:fs';
-import type { CalcDocument } from '../document';
+import { cellName, type CalcDocument } from '../document';
+import { nearestName } from '../formula/suggest';
 import { createEngine } from '../engine';
 import { parse } from '../format/index';
 import { setInputValueKeepUnit } from '../edit/index';
@@ -51,6 +52,18 @@ export async function runCalc(args: CalcArgs, out: (s: string) => void, err: (s:
   }
 }
 
+/** Why --set cannot change `name`: what it is instead, and what to set. */
+function notAnInput(doc: CalcDocument, name: string): string {
+  const cell = doc.cells.find((c) => cellName(c) === name);
+  const inputs = doc.cells.flatMap((c) => (c.kind === 'input' ? [c.name] : []));
+  if (cell && (cell.kind === 'formula' || cell.kind === 'check')) {
+    const reads = inputs.filter((n) => new RegExp(`(^|[^A-Za-z0-9_])${n}(?![A-Za-z0-9_])`).test(cell.expr));
+    return `${name} is a ${cell.kind} (${name} = ${cell.expr}), not an input; --set changes inputs only${reads.length ? `: set one it reads (${reads.join(', ')})` : ''}`;
+  }
+  const near = nearestName(name, inputs);
+  return `there is no input named ${name}${near ? `; did you mean ${near}?` : ''}`;
+}
+
 async function calc(args: CalcArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
   const loaded = await loadDocument(args.file, err);
   if (!loaded) return 2;
@@ -58,7 +71,7 @@ async function calc(args: CalcArgs, out: (s: string) => void, err: (s: string) =
   for (const { name, value } of args.sets) {
     const cell = doc.cells.find((c) => c.kind === 'input' && c.name === name);
     if (!cell) {
-      err(`--set ${name}: there is no input named ${name}`);
+      err(`--set ${name}: ${notAnInput(doc, name)}`);
       return 2;
     }
     doc = setInputValueKeepUnit(doc, cell.id, value);

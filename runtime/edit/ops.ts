@@ -142,7 +142,9 @@ export function setInputValueKeepUnit(doc: CalcDocument, id: string, value: stri
   if (next === doc || before.kind !== 'input' || before.unit || before.choices) return next;
   const was = typedUnit(before.value);
   const now = typedUnit(value);
-  if (!was || !now || canonicalUnit(was) === canonicalUnit(now)) return next;
+  // A bare number typed for a quantity keeps the quantity's unit, so the engine can say
+  // "B is a length: add a unit" instead of taking 11 as a pure number.
+  if (!was || (now && canonicalUnit(was) === canonicalUnit(now))) return next;
   return setCellFields(next, id, { unit: hasFeetInches(before.value) ? 'in' : was });
 }
 

@@ -27,6 +27,8 @@ export interface CompileScope {
   isCell(name: string): boolean;
   /** Every cell name, for "did you mean". */
   names(): Iterable<string>;
+  /** What a suggested name is ("the input d, Effective depth"), so a look-alike is not taken for the one meant. */
+  describe?(name: string): string | undefined;
   functions: ReadonlyMap<string, LibFunction>;
 }
 
@@ -43,6 +45,24 @@ export interface CompiledExpr {
 }
 
 const MAX_DEPTH = 120;
+
+/** Words of other languages people type in a formula, with what to write instead. */
+const NOT_FORMULA_WORDS: Record<string, string> = {
+  if: 'write a choice as condition ? value_if_true : value_if_false, e.g. h > 12 in ? 0.9 : 1',
+  then: 'write a choice as condition ? value_if_true : value_if_false',
+  else: 'write a choice as condition ? value_if_true : value_if_false',
+  elif: 'write a choice as condition ? value_if_true : value_if_false',
+  return: 'a formula is only its expression, e.g. 1.2*PD + 1.6*PL',
+};
+
+/** "there is no function sum": with the nearest name, or what exists. */
+function unknownFunction(name: string, functions: ReadonlyMap<string, LibFunction>): string {
+  if (NOT_FORMULA_WORDS[name]) return `"${name}" is not part of the formula language: ${NOT_FORMULA_WORDS[name]}`;
+  if (name === 'sum') return 'there is no function "sum": add the terms with +, e.g. PD + PL';
+  const near = nearestName(name, [...BUILTINS.keys(), ...functions.keys()]);
+  if (near) return `there is no function "${name}"; did you mean ${near}?`;
+  return `there is no function "${name}"; the general ones are ${[...BUILTINS.keys()].join(', ')}, and the structural library's are offered as you type a name`;
+}
 // After an explicit * or / a one-letter unit is too easily a mistyped cell name
 // (L is litres, A amperes); only these are accepted there.
 const SHORT_UNITS_AFTER_OPERATOR = new Set(['m', 'N', 'g', 's']);
@@ -123,9 +143,11 @@ export class Compiler {
   }
 
   private unknown(name: string): never {
+    const word = NOT_FORMULA_WORDS[name];
+    if (word) return this.fail('not-allowed', `"${name}" is not part of the formula language: ${word}`, name);
     const near = nearestName(name, this.scope.names());
     let msg = `"${name}" is not the name of any cell`;
-    if (near) msg += `; did you mean ${near}?`;
+    if (near) msg += `; did you mean ${this.scope.describe?.(near) ?? near}?`;
     else if (isUnitName(name)) msg += `; to use the unit ${name}, write it after a number (e.g. 1 ${name})`;
     return this.fail('unknown-name', msg, name);
   }
@@ -305,8 +327,7 @@ export class Compiler {
     }
     const lib = this.scope.functions.get(name);
     if (!lib) {
-      const near = nearestName(name, [...BUILTINS.keys(), ...this.scope.functions.keys()]);
-      this.fail('unknown-name', `there is no function "${name}"${near ? `; did you mean ${near}?` : ''}`, name);
+      this.fail('unknown-name', unknownFunction(name, this.scope.functions), name);
     }
     return this.library(lib, args, name);
   }

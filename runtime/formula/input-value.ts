@@ -2,12 +2,13 @@
 // "1'-6\"", "2*1.5 ft"), a pure number, yes/no, or one of its choices.
 
 import type { InputCell } from '../document';
-import { unitInfo, type Dims } from '../units/dimension';
-import { normalizeFeetInches } from '../units/feet-inches';
+import { DIMLESS, siUnitText, unitInfo, type Dims } from '../units/dimension';
+import { normalizeFeetInchesMapped } from '../units/feet-inches';
 import { CellError } from './cell-error';
 import { compileExpression } from './compile';
 import { formatNumber } from './display';
 import { BOOL, describeType, numType, TEXT, type VType } from './value-type';
+import { unknownWordMessage, wrongQuantityMessage } from './value-messages';
 
 export interface InputValue {
   type: VType;
@@ -45,18 +46,28 @@ const NO_CELLS = {
   functions: new Map(),
 };
 
-/** A constant quantity typed by a person. Throws CellError with a plain message. */
+/** The largest magnitude (in SI) an input's value may have; beyond it no quantity of the trade lies. */
+export const LARGEST_VALUE = 1e15;
+/** The smallest non-zero magnitude (in SI): below it a value is a slip, and shows as 0. */
+export const SMALLEST_VALUE = 1e-15;
+
+/**
+ * A constant quantity typed by a person. Throws CellError with a plain message whose
+ * column counts in `text` as typed (not after feet-inch notation is rewritten).
+ */
 export function parseQuantityText(text: string, where = 'the value'): { si: number; dims: Dims; hint?: string } {
-  const src = normalizeFeetInches(text.trim());
-  if (src === '') throw new CellError('syntax', `${where} is empty`, 1);
+  const lead = text.length - text.trimStart().length;
+  const typed = text.trim();
+  const { text: src, typedColumn } = normalizeFeetInchesMapped(typed);
+  const at = (column: number | undefined) => (column === undefined ? undefined : typedColumn(column) + lead);
+  if (src === '') throw new CellError('syntax', `${where} is empty: type a number, with its unit if it has one`, 1);
   let compiled;
   try {
     compiled = compileExpression(src, NO_CELLS);
   } catch (e) {
-    if (e instanceof CellError && e.kind === 'unknown-name') {
-      throw new CellError('syntax', `${where} "${text.trim()}" is not a number with a unit (e.g. 5000 psi, 450 mm, 1'-6")`, e.column);
-    }
-    throw e;
+    if (!(e instanceof CellError)) throw e;
+    if (e.kind === 'unknown-name') throw new CellError('syntax', unknownWordMessage(src, e.column, where, typed), at(e.column));
+    throw new CellError(e.kind, e.message.replace(/^cannot read the formula/, `cannot read ${where}`), at(e.column));
   }
   if (compiled.type.t !== 'num') throw new CellError('unit', `${where} must be a number, got ${describeType(compiled.type)}`);
   const si = compiled.run([]) as number;
@@ -64,17 +75,23 @@ export function parseQuantityText(text: string, where = 'the value'): { si: numb
   return { si, dims: compiled.type.dims, hint: compiled.type.hint };
 }
 
-function checkUnitAgrees(unit: string, dims: Dims, typed: VType, what: string): void {
+/** An input's value beyond any quantity of the trade (1e308, a denormal length) is a slip, not a value. */
+function checkMagnitude(si: number, where: string, typed: string): void {
+  const size = Math.abs(si);
+  if (size <= LARGEST_VALUE && (size === 0 || size >= SMALLEST_VALUE)) return;
+  const bound = size > 1 ? `at most ${formatNumber(LARGEST_VALUE)}` : `at least ${formatNumber(SMALLEST_VALUE)}, or 0,`;
+  throw new CellError('range', `${where}, ${typed}, is ${size > 1 ? 'larger' : 'smaller'} than any quantity Loadtrace computes with (${bound} in SI units)`);
+}
+
+function checkUnitAgrees(cell: InputCell, unit: string, q: { dims: Dims; hint?: string }): void {
   let info;
   try {
     info = unitInfo(unit);
   } catch {
-    throw new CellError('unit', `the display unit "${unit}" is not a unit Loadtrace knows`);
+    throw new CellError('unit', `the display unit "${unit}" of ${cell.name} is not a unit Loadtrace knows`);
   }
-  const want = numType(info.dims, unit);
-  if (!sameDimsLoose(info.dims, dims)) {
-    throw new CellError('unit', `${what} is ${describeType(typed)} but the display unit ${unit} is ${describeType(want).replace(/^an? /, 'a ').replace(/ \(.*\)$/, '')}`);
-  }
+  if (sameDimsLoose(info.dims, q.dims)) return;
+  throw new CellError('unit', wrongQuantityMessage(cell.name, cell.value.trim(), unit, info.dims, q.dims));
 }
 
 function sameDimsLoose(a: Dims, b: Dims): boolean {
@@ -86,27 +103,31 @@ export function parseInput(cell: InputCell): InputValue {
   if (cell.choices && cell.choices.length > 0) {
     const v = raw.trim();
     if (!cell.choices.includes(v)) {
-      throw new CellError('range', `"${v}" is not one of the choices: ${cell.choices.join(', ')}`);
+      throw new CellError('range', `${cell.name}: "${v}" is not one of the choices: ${cell.choices.join(', ')}`);
     }
     return { type: TEXT, value: v, unit: '' };
   }
   const word = raw.trim().toLowerCase();
-  if (word === 'yes' || word === 'true') return { type: BOOL, value: true, unit: '' };
-  if (word === 'no' || word === 'false') return { type: BOOL, value: false, unit: '' };
+  const yes = word === 'yes' || word === 'true';
+  if (yes || word === 'no' || word === 'false') {
+    if (cell.unit) checkUnitAgrees(cell, cell.unit, { dims: DIMLESS });
+    return { type: BOOL, value: yes, unit: '' };
+  }
 
-  const q = parseQuantityText(raw);
+  const q = parseQuantityText(raw, `the value of ${cell.name}`);
+  checkMagnitude(q.si, `the value of ${cell.name}`, raw.trim());
   const type = numType(q.dims, cell.unit || q.hint);
   const unit = cell.unit ?? simpleUnit(q.hint) ?? '';
-  if (cell.unit) checkUnitAgrees(cell.unit, q.dims, type, 'the value');
+  if (cell.unit) checkUnitAgrees(cell, cell.unit, q);
   else if (!unit && !q.dims.every((d) => d === 0)) {
-    throw new CellError('unit', `the value is ${describeType(type)}; give the input a display unit`);
+    throw new CellError('unit', `${cell.name} is ${describeType(type)}; give the input a display unit (unit line), for example ${siUnitText(q.dims)}`);
   }
   const out: InputValue = { type, value: q.si, unit };
   for (const [bound, label] of [[cell.min, 'minimum'], [cell.max, 'maximum']] as const) {
     if (bound === undefined || bound.trim() === '') continue;
-    const b = parseQuantityText(bound, `the ${label}`);
+    const b = parseQuantityText(bound, `the ${label} of ${cell.name}`);
     if (!sameDimsLoose(b.dims, q.dims)) {
-      throw new CellError('unit', `the ${label} ${bound} is ${describeType(numType(b.dims, b.hint))} but the value is ${describeType(type)}`);
+      throw new CellError('unit', `the ${label} of ${cell.name}, ${bound.trim()}, is ${describeType(numType(b.dims, b.hint))} but its value is ${describeType(numType(q.dims, q.hint))}: give both in units of one kind`);
     }
     out[label === 'minimum' ? 'min' : 'max'] = { si: b.si, text: bound.trim() };
   }

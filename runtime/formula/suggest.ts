@@ -14,17 +14,25 @@ export function editDistance(a: string, b: string): number {
   return prev[n];
 }
 
-/** The closest candidate within a distance that still looks like a typo, or undefined. */
+/**
+ * The closest candidate within a distance that still looks like a typo, or undefined.
+ * A candidate equal but for case always wins (d for D), ahead of a nearer-looking other.
+ */
 export function nearestName(name: string, candidates: Iterable<string>): string | undefined {
   let best: string | undefined;
   let bestD = Infinity;
+  const folded = name.toLowerCase();
   for (const c of candidates) {
+    if (c.toLowerCase() === folded && c !== name) return c;
     const d = editDistance(name, c);
     if (d < bestD || (d === bestD && best !== undefined && c < best)) {
       best = c;
       bestD = d;
     }
   }
-  const limit = Math.max(1, Math.ceil(name.length / 3));
+  // A one- or two-letter name is too short to guess a typo in: a letter more or less is
+  // suggested only after the same first letter (Pq → Pu, but not if → Df, nor x → N).
+  const short = name.length <= 2 && best !== undefined && best[0] !== name[0];
+  const limit = short ? 0.5 : Math.max(1, Math.ceil(name.length / 3));
   return bestD <= limit ? best : undefined;
 }

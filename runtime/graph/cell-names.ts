@@ -43,6 +43,11 @@ export class CellNames {
       functions,
       isCell: (name) => this.owners().has(name),
       names: () => this.owners().keys(),
+      describe: (name) => {
+        const owner = this.owners().get(name)?.[0];
+        const cell = owner ? this.slot(owner)?.cell : undefined;
+        return cell && `${name} (the ${cell.kind}${cell.label ? ` "${cell.label.length > 60 ? `${cell.label.slice(0, 60)}…` : cell.label}"` : ''})`;
+      },
       lookup: (name): NameInfo | undefined => {
         const owners = this.owners().get(name);
         if (!owners) return undefined;

@@ -5,6 +5,7 @@ import type { CheckCell, FormulaCell, InputCell } from '../document';
 import { CellError } from '../formula/cell-error';
 import { compileExpression, type CompileScope } from '../formula/compile';
 import { compileCheck } from '../formula/compile-check';
+import { displayNumber } from '../formula/display';
 import { parseInput, type InputValue } from '../formula/input-value';
 import { unitInfo } from '../units/dimension';
 import { unitInSystem } from '../units/preferred';
@@ -141,10 +142,24 @@ export function checkProgram(
       if (!Number.isFinite(demand) || !Number.isFinite(capacity)) {
         throw new CellError('non-finite', `the ${Number.isFinite(demand) ? 'capacity' : 'demand'} is not a finite number`);
       }
+      const negative = negativeSide(demand, capacity, demandUnit);
+      if (negative) throw new CellError('range', negative);
       const ratio = capacity === 0 ? (demand === 0 ? 0 : Infinity) : demand / capacity;
       return { value: ratio, pass: !!pass(args), demand, capacity };
     },
   };
+}
+
+/**
+ * A check cannot pass on a negative demand or capacity (a ratio of −1 is not "OK"): it
+ * says which side, its value, and what to look at.
+ */
+function negativeSide(demand: number, capacity: number, unit: string): string | undefined {
+  const side = capacity < 0 ? 'capacity' : demand < 0 ? 'demand' : undefined;
+  if (!side) return undefined;
+  const v = side === 'capacity' ? capacity : demand;
+  const shown = unit ? displayNumber(v, unit).text : String(v);
+  return `the ${side} is negative (${shown}); a demand/capacity check needs both at least zero: look at the inputs it reads`;
 }
 
 function knownUnit(t: VType): string {

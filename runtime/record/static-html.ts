@@ -6,6 +6,7 @@
 import type { CalcDocument, Cell, CheckCell, DocMeta, FormulaCell, InputCell } from '../document';
 import { cellName } from '../document';
 import type { CellState } from '../engine-types';
+import { cellsInError, inErrorText } from '../graph/in-error';
 import { checkTex, formulaTex, nameTex, quantityTex, ratioText, type HandCalcScope } from '../handcalc/index';
 import { escapeHtml } from './escape';
 import { noteHtml } from './markdown';
@@ -208,12 +209,17 @@ function summaryHtml(doc: CalcDocument, ctx: Ctx): string {
     .map((c, order) => ({ c, s: ctx.state(c.id), order }))
     .sort((a, b) => rank[a.s?.status ?? 'pending'] - rank[b.s?.status ?? 'pending']
       || (b.s?.ratio ?? -Infinity) - (a.s?.ratio ?? -Infinity) || a.order - b.order);
-  if (rows.length === 0) return '';
+  const inError = cellsInError(doc, ctx.state);
+  if (rows.length === 0 && inError.length === 0) return '';
   const failing = rows.filter((r) => r.s?.status === 'fail').length;
   const broken = rows.filter((r) => r.s?.status === 'error' || !done(r.s)).length;
   const head = `${rows.length} check${rows.length === 1 ? '' : 's'}: ${failing ? `${failing} NOT OK` : 'none NOT OK'}${
-    broken ? `, ${broken} without a result` : ''}`;
+    broken ? `, ${broken} without a result` : ''}${inError.length ? `; ${inErrorText(inError)}` : ''}`;
   const words = { ok: '✓ OK', fail: '✗ NOT OK', error: '⚠ ERROR', pending: '… pending' } as const;
+  // Cells other than checks whose error is their own come first (summary of every cell in error).
+  const sources = inError.filter((e) => e.source && e.kind !== 'check').map((e) => `<tr class="lt-st-error"><td class="lt-sum-v">${
+    words.error}</td><td class="lt-sum-r">—</td><td class="lt-sum-no"><a href="#lt-c-${escapeHtml(e.id)}">${
+    escapeHtml(ctx.numbers.get(e.id) ?? '')}</a></td><td>${escapeHtml(`${e.title}: ${e.message}`)}</td><td class="lt-sum-ref"></td></tr>`);
   const body = rows.map(({ c, s }) => {
     const st = s?.status ?? 'pending';
     return `<tr class="lt-st-${st}"><td class="lt-sum-v">${words[st]}</td><td class="lt-sum-r">${
@@ -222,7 +228,7 @@ function summaryHtml(doc: CalcDocument, ctx: Ctx): string {
       escapeHtml(c.clause ?? s?.clauses.join('; ') ?? '')}</td></tr>`;
   });
   return `<section class="lt-summary" aria-label="Summary of checks"><h2>Summary of checks <small>${escapeHtml(head)}</small></h2>
-<table><thead><tr><th>Outcome</th><th>Ratio</th><th>No.</th><th>Check</th><th>Reference</th></tr></thead><tbody>${body.join('')}</tbody></table></section>`;
+<table><thead><tr><th>Outcome</th><th>Ratio</th><th>No.</th><th>Check</th><th>Reference</th></tr></thead><tbody>${sources.join('')}${body.join('')}</tbody></table></section>`;
 }
 
 /** The whole static rendering (one element, id "lt-static") for the given engine states. */

@@ -56,3 +56,34 @@ export function hasFeetInches(text: string): boolean {
   TOKEN.lastIndex = 0;
   return found;
 }
+
+/**
+ * normalizeFeetInches, with a map from a 1-based column of the rewritten text back to
+ * the column of what was typed, so an error in `1'-6" x` points at the x people see.
+ */
+export function normalizeFeetInchesMapped(text: string): { text: string; typedColumn: (column: number) => number } {
+  const pieces: { at: number; typedAt: number; length: number; typedLength: number }[] = [];
+  const out = normalizeFeetInches(text);
+  if (out === text) return { text, typedColumn: (c) => c };
+  // Replay the rewrite to learn where each token went (the same pattern, in order).
+  let shift = 0;
+  const token = new RegExp(TOKEN.source, 'g'); // its own copy: normalizeFeetInches resets TOKEN
+  for (let m = token.exec(text); m; m = token.exec(text)) {
+    const rewritten = normalizeFeetInches(m[0]);
+    const whole = m[0].trim() === text.trim() && m.index === text.indexOf(text.trim());
+    const length = rewritten !== m[0] && rewritten.includes('+') && !whole ? rewritten.length + 2 : rewritten.length;
+    pieces.push({ at: m.index + shift, typedAt: m.index, length, typedLength: m[0].length });
+    shift += length - m[0].length;
+  }
+  const typedColumn = (column: number): number => {
+    let delta = 0;
+    for (const p of pieces) {
+      const i = column - 1;
+      if (i < p.at) break;
+      if (i < p.at + p.length) return p.typedAt + 1; // inside a rewritten token: its start
+      delta = p.typedAt + p.typedLength - (p.at + p.length);
+    }
+    return column + delta;
+  };
+  return { text: out, typedColumn };
+}

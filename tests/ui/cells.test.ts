@@ -102,7 +102,7 @@ describe('input', () => {
       scope: { isCell: (n) => byName.has(n), state: (n) => e.state(byName.get(n)!) },
     });
     expect(v.status).toBe('error');
-    expect(v.error?.message).toMatch(/not a number with a unit/);
+    expect(v.error?.message).toMatch(/"furlongs" is not a unit \(type a number with a unit/);
     expect(inputKind.render(v)).toContain('role="alert"');
     expect(v.stale).toBe(true);
     expect(inputKind.render(v)).toContain('still computing with 120 psf');
