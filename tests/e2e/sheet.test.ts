@@ -130,7 +130,7 @@ describe('the calc sheet in Chromium', () => {
   it('a bad value shows its message in place while the rest keeps computing', async () => {
     await setValue('i1', '9 inches of rain');
     await page.waitForSelector('#cell-i1 .cell-error');
-    expect(await page.locator('#cell-i1 .cell-error').innerText()).toMatch(/not a number with a unit/);
+    expect(await page.locator('#cell-i1 .cell-error').innerText()).toMatch(/"of" is not a unit \(type a number with a unit/);
     // the last good value (9 in) keeps the dependents computing
     expect(await cellText('f1')).toContain('7.625in');
     expect(await page.locator('#cell-f1 .cell-error').count()).toBe(0);
