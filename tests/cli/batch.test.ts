@@ -67,7 +67,7 @@ describe('calc --batch', () => {
   it('a value the input refuses names its row and column; the other rows are still written; exit 2', async () => {
     const r = await batch('badvalue', 'B,fc\n9 ft,4000 psi\n9 ft,lots\n9 ft,100 psi\n9 ft,4500 psi\n');
     expect(r.code).toBe(2);
-    expect(r.err).toMatch(/badvalue\.csv: row 3, column 2 \(fc\): the value "lots" is not a number with a unit/);
+    expect(r.err).toMatch(/badvalue\.csv: row 3, column 2 \(fc\): the value of fc "lots" is not a number with a unit/);
     expect(r.err).toMatch(/badvalue\.csv: row 4, column 2 \(fc\): .*below the allowed minimum 2500 psi/);
     expect(readdirSync(r.out).sort()).toEqual(['index.csv', 'spread-footing-row2.html', 'spread-footing-row5.html']);
     expect(index(r.out).map((x) => [x.row, x.status, x.files])).toEqual([['2', 'ok', 'spread-footing-row2.html'], ['3', 'error', ''], ['4', 'error', ''], ['5', 'ok', 'spread-footing-row5.html']]);
