@@ -1,9 +1,10 @@
 // `npm run calc -- A --diff B`: two records (e.g. two revisions of one calc) side by
-// side, only what differs in inputs, results and checks. Exit 0 whatever differs.
+// side, only what differs: title block, inputs, results, checks, comments and sign-offs.
+// Exit 0 whatever differs.
 
 import type { CalcDocument } from '../document';
 import { createEngine } from '../engine';
-import { diffRecords, diffText, onlyChanged } from '../review/index';
+import { diffRecords, diffReview, diffText, isEmptyReviewDiff, onlyChanged, reviewDiffLines } from '../review/index';
 
 export interface DiffSide {
   /** As the person named it on the command line. */
@@ -17,8 +18,19 @@ export async function printDiff(a: DiffSide, b: DiffSide, json: boolean, out: (s
   const eb = createEngine(b.doc);
   try {
     await Promise.all([ea.settled(), eb.settled()]);
-    const cmp = diffRecords({ doc: a.doc, results: (id) => ea.state(id) }, { doc: b.doc, results: (id) => eb.state(id) });
-    out(json ? JSON.stringify({ a: a.name, b: b.name, ...onlyChanged(cmp) }, null, 2) : diffText(cmp, a.name, b.name));
+    const cmp = onlyChanged(diffRecords({ doc: a.doc, results: (id) => ea.state(id) }, { doc: b.doc, results: (id) => eb.state(id) }));
+    const review = diffReview(a.doc, b.doc);
+    if (json) {
+      out(JSON.stringify({ a: a.name, b: b.name, ...cmp, ...review }, null, 2));
+      return;
+    }
+    const cells = cmp.inputs.length + cmp.results.length + cmp.checks.length > 0;
+    if (!cells && isEmptyReviewDiff(review)) {
+      out(`no differences in the title block, inputs, results, checks, comments or sign-offs between ${a.name} and ${b.name}`);
+      return;
+    }
+    const lines = reviewDiffLines(review, a.name, b.name);
+    out([...(cells ? [diffText(cmp, a.name, b.name)] : []), ...lines.titleBlock, ...lines.notes].join('\n'));
   } finally {
     ea.dispose();
     eb.dispose();

@@ -20,6 +20,8 @@ export interface ResultChange {
   id: string;
   kind: 'formula' | 'check';
   name?: string;
+  /** For a check with no name: its label (or, with none, its condition), to call it by. */
+  label?: string;
   before?: IssuedResult;
   after?: IssuedResult;
   /** Status or shown text differs, or the cell is new or gone. */
@@ -93,10 +95,28 @@ export function compareBaselines(before: Baseline, after: Baseline): Comparison 
   return { inputs, results: rows('formula'), checks: rows('check') };
 }
 
+/** What people call a row: its name, else (an unnamed check) its label, else its id in brackets. */
+export function changeName(r: { id: string; name?: string; label?: string }): string {
+  return r.name ?? r.label ?? `(${r.id})`;
+}
+
+/** Unnamed checks get the label of their cell, looked up in `docs` in order. */
+function labelled(c: Comparison, ...docs: CalcDocument[]): Comparison {
+  const label = (r: ResultChange): ResultChange => {
+    if (r.name !== undefined) return r;
+    for (const d of docs) {
+      const cell = d.cells.find((x) => x.id === r.id);
+      if (cell?.kind === 'check') return { ...r, label: cell.label?.trim() || cell.expr };
+    }
+    return r;
+  };
+  return { ...c, checks: c.checks.map(label) };
+}
+
 /** The sheet now against an issued baseline (default: the latest revision's); undefined before any issue. */
 export function compare(doc: CalcDocument, results: ResultLookup, baseline?: Baseline): Comparison | undefined {
   const issued = baseline ?? latestRevision(doc)?.baseline;
-  return issued ? compareBaselines(issued, snapshot(doc, results)) : undefined;
+  return issued ? labelled(compareBaselines(issued, snapshot(doc, results)), doc) : undefined;
 }
 
 /** Two records (e.g. two revisions of one calc), each with its engine results. */
@@ -104,7 +124,7 @@ export function diffRecords(
   a: { doc: CalcDocument; results: ResultLookup },
   b: { doc: CalcDocument; results: ResultLookup },
 ): Comparison {
-  return compareBaselines(snapshot(a.doc, a.results), snapshot(b.doc, b.results));
+  return labelled(compareBaselines(snapshot(a.doc, a.results), snapshot(b.doc, b.results)), b.doc, a.doc);
 }
 
 /** Only the rows that differ. */

@@ -1,7 +1,7 @@
 // Two records side by side as plain text, for `npm run calc -- A --diff B`:
 // only the inputs, results and checks that differ.
 
-import { onlyChanged, type Comparison, type ResultChange } from './compare';
+import { changeName, onlyChanged, type Comparison, type ResultChange } from './compare';
 import type { IssuedResult } from './types';
 
 const VERDICT: Record<IssuedResult['status'], string> = { ok: 'ok', fail: 'NOT OK', error: 'error', pending: 'pending' };
@@ -20,8 +20,6 @@ export function deltaText(d: number | undefined): string {
   return d > 0 && s !== '0.000' ? `+${s}` : d < 0 && s !== '0.000' ? `−${s}` : `±${s}`;
 }
 
-const nameOf = (r: { name?: string; id: string }): string => r.name ?? `(${r.id})`;
-
 function block(title: string, head: string[], rows: string[][]): string[] {
   if (rows.length === 0) return [];
   const all = [head, ...rows];
@@ -32,7 +30,7 @@ function block(title: string, head: string[], rows: string[][]): string[] {
 
 function resultRows(list: ResultChange[], check: boolean): string[][] {
   return list.map((r) => {
-    const row = [nameOf(r), shown(r.before, check), shown(r.after, check)];
+    const row = [changeName(r), shown(r.before, check), shown(r.after, check)];
     if (check) row.push(deltaText(r.deltaRatio));
     return row;
   });

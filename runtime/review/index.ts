@@ -7,7 +7,8 @@ export { addComment, reply, resolve, openComments, type Note } from './comments'
 export { signOff, isStale, withdrawSignOff, type SignOffRequest } from './signoff';
 export { fingerprint, coverFingerprint, sectionCells, upstreamCells } from './fingerprint';
 export {
-  compare, compareBaselines, diffRecords, onlyChanged, returnToBaseline,
+  compare, compareBaselines, changeName, diffRecords, onlyChanged, returnToBaseline,
   type Comparison, type InputChange, type ResultChange,
 } from './compare';
 export { diffText } from './diff-text';
+export { diffReview, isEmptyReviewDiff, reviewDiffLines, type ReviewDiff, type MetaChange, type CommentChange, type SignOffChange } from './review-diff';
