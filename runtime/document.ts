@@ -84,8 +84,9 @@ export interface FigureCell extends CellBase {
 }
 
 /**
- * A what-if plot: the input cell `input` swept from `from` to `to` (quantities as typed)
- * in `steps` equal intervals, with the named results or checks computed at each point.
+ * A what-if plot: the input cell `input` swept over a range as wide as `from` to `to`
+ * (quantities as typed) in `steps` equal intervals, with the named results or checks
+ * computed at each point.
  */
 export interface SweepCell extends CellBase {
   kind: 'sweep';
@@ -96,6 +97,11 @@ export interface SweepCell extends CellBase {
   steps?: number;
   /** Names of formula or check cells to plot. */
   outputs: string[];
+  /**
+   * The author fixed the range: swept from `from` to `to` as written. Otherwise the range
+   * keeps its width and is centred on the input's current value, within its limits.
+   */
+  fixed?: true;
 }
 
 export type Cell = SectionCell | NoteCell | InputCell | FormulaCell | CheckCell | FigureCell | SweepCell;

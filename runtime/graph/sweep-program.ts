@@ -1,7 +1,8 @@
 // A sweep cell: the runtime variable reads the swept input and the plotted cells, so it
 // recomputes whenever they change; its value is the whole sweep, evaluated point by
-// point on the compiled programs with the input overridden (what-if.ts). The range stays
-// as asked; points beyond the input's min/max are not computed and are listed as outside.
+// point on the compiled programs with the input overridden (what-if.ts). The range is
+// centred on the input's value within its limits, unless the author fixed it (`range
+// fixed`): then it stays as written, and points beyond min/max are listed as outside.
 
 import type { SweepCell } from '../document';
 import { CellError } from '../formula/cell-error';
@@ -25,6 +26,23 @@ export interface SweepCellInfo {
 
 function broken(error: CellError, reads: string[] = []): CellProgram {
   return { inputs: [], reads, clauses: [], unit: '', definition: () => { throw error; } };
+}
+
+/**
+ * The range swept, SI: as written when the author fixed it; else as wide as written and
+ * centred on the input's current value, moved (or, when wider than they allow, cut) to
+ * lie within the input's least and greatest values. Its direction is kept.
+ */
+export function sweepRange(from: number, to: number, current: number, limits: { min?: number; max?: number }, fixed: boolean): [number, number] {
+  if (fixed || !Number.isFinite(current)) return [from, to];
+  const width = Math.abs(to - from);
+  let lo = current - width / 2;
+  let hi = current + width / 2;
+  const { min = -Infinity, max = Infinity } = limits;
+  if (hi - lo >= max - min) [lo, hi] = [min, max];
+  else if (lo < min) [lo, hi] = [min, min + width];
+  else if (hi > max) [lo, hi] = [max - width, max];
+  return from <= to ? [lo, hi] : [hi, lo];
 }
 
 /** The points swept, SI: `steps` equal intervals from `from` to `to`. */
@@ -72,7 +90,6 @@ export function sweepProgram(cell: SweepCell, lookup: (name: string) => SweepCel
     outs.push({ name, info });
   }
   const inputs = [...new Set([input.id, ...outs.map((o) => o.info.id)])];
-  const xs = sweepPoints(from, to, steps);
   const unit = input.program?.unit ?? '';
   return {
     inputs,
@@ -80,6 +97,11 @@ export function sweepProgram(cell: SweepCell, lookup: (name: string) => SweepCel
     clauses: [],
     unit: '',
     definition: async (current: unknown): Promise<SweepResult> => {
+      // Programs as they are now (a display unit may have changed since this sweep compiled).
+      const now = (id: string, was?: CellProgram) => graph.program(id) ?? was;
+      const inputNow = now(input.id, input.program);
+      const bounds = { min: inputNow?.input?.min?.si, max: inputNow?.input?.max?.si };
+      const xs = sweepPoints(...sweepRange(from, to, current as number, bounds, cell.fixed === true), steps);
       const w = new WhatIf(graph, input.id);
       const ids = outs.map((o) => o.info.id);
       // Each point runs the calc again: a sweep of heavy cells (plate solves) yields to the
@@ -88,11 +110,8 @@ export function sweepProgram(cell: SweepCell, lookup: (name: string) => SweepCel
       pacer.begin();
       const points: ReturnType<WhatIf['at']>[] = [];
       for (const x of xs) points.push(await pacer.pace(() => w.at(x, ids)));
-      // Programs as they are now (a display unit may have changed since this sweep compiled).
-      const now = (id: string, was?: CellProgram) => graph.program(id) ?? was;
       const series = outs.map((o, k) => seriesOf(o.name, { ...o.info, program: now(o.info.id, o.info.program) },
         points.map((p) => outcomeOf(p[k], o.info.kind === 'check')), xs));
-      const inputNow = now(input.id, input.program);
       const result: SweepResult = { input: cell.input, unit: inputNow?.unit ?? unit, xs, current: current as number, series };
       const limits = inputNow?.input ? limitsText(inputNow.input) : '';
       if (limits) {

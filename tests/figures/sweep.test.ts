@@ -8,7 +8,7 @@ import type { CalcDocument, InputCell, SweepCell } from '../../runtime/document'
 import { createEngine } from '../../runtime/engine';
 import { setInputValue } from '../../runtime/edit/index';
 import { parse } from '../../runtime/format/index';
-import { sweepPoints } from '../../runtime/graph/sweep-program';
+import { sweepPoints, sweepRange } from '../../runtime/graph/sweep-program';
 import { sweepKind, outsideText } from '../../cells/sweep';
 import { renderSweepChart } from '../../runtime/figures/sweep-chart';
 
@@ -22,6 +22,7 @@ function load(text: string): CalcDocument {
 
 // demand = k·x grows with x; capacity fixed: ratio = 1.25 kip/in · x / 12 kip, so it
 // crosses 1 at x = 12 / 1.25 = 9.6 in (arithmetic). root = √(x − 5 in) breaks below 5 in.
+// The range is fixed as written (range fixed); a centred one is tested in sweep-range.test.ts.
 const LINEAR = `loadtrace 1
 
 input i1  x = 8 in
@@ -46,6 +47,7 @@ sweep w1  x
   from    4 in
   to      14 in
   steps   10
+  range   fixed
   output  ok
   output  demand
   output  root
@@ -118,7 +120,9 @@ describe('what-if on a real template (docs-templates/figures-demo.lt)', () => {
     const sw = engine.state('w2')!.sweep!;
     const id = (name: string) => d.cells.find((c) => 'name' in c && c.name === name)!.id;
     const input = d.cells.find((c) => c.id === id('B_f')) as InputCell;
-    const pts = sweepPoints(7 * FT, 12 * FT, 20);
+    // Written 7 ft to 12 ft; centred on B_f = 9.5 ft that is 7 ft to 12 ft again (9.5 ∓ 2.5 ft).
+    const pts = sweepPoints(...sweepRange(7 * FT, 12 * FT, 9.5 * FT, {}, false), 20);
+    expect([pts[0] / FT, pts[20] / FT]).toEqual([expect.closeTo(7, 12), expect.closeTo(12, 12)]);
     expect(sw.xs).toEqual(pts);
     for (const [i, x] of pts.entries()) {
       if (i % 4 !== 0 && i !== 13) continue; // a spread of points, keeping the run short

@@ -88,6 +88,7 @@ const sweep = fc.record(
     from: anyText,
     to: anyText,
     steps: fc.integer(),
+    fixed: fc.constant(true as const),
     // Always present; an empty list is written as no lines and reads back as [].
     outputs: fc.array(cellName, { maxLength: 3 }),
     label: anyText,
