@@ -4,6 +4,7 @@
 import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
 import { choice, nonNegative, positive } from './support-args';
 import { ksi } from '../units/si';
+import { ended, working } from '../working/recorder';
 
 export const TRANSVERSE = ['tied', 'spiral'] as const;
 export type Transverse = (typeof TRANSVERSE)[number];
@@ -15,28 +16,45 @@ export function poColumn(fc: number, ag: number, ast: number, fy: number): numbe
   nonNegative('Ast', ast);
   positive('fy', fy);
   if (ast >= ag) throw new LibraryError('Ast must be less than Ag');
-  return 0.85 * fc * (ag - ast) + Math.min(fy, 80 * ksi) * ast;
+  const fyUsed = Math.min(fy, 80 * ksi);
+  const po = 0.85 * fc * (ag - ast) + fyUsed * ast;
+  const w = working()?.open('po_column', { fc: [fc, 'psi'], Ag: [ag, 'in^2'], Ast: [ast, 'in^2'], fy: [fy, 'psi'] }, 'ACI 318-19 Eq. 22.4.2.2');
+  if (w && fyUsed < fy) w.step('fy', 'min(fy, 80000)', fyUsed, 'psi', { vars: { fy: [fy, 'psi'] }, code: true, governs: true, clause: 'ACI 318-19 §22.4.2.1', note: 'fy taken not above 80 ksi' });
+  w?.step('Po', '0.85 * fc * (Ag - Ast) + fy * Ast', po, 'kip', { vars: { fc: [fc, 'psi'], Ag: [ag, 'in^2'], Ast: [ast, 'in^2'] }, clause: 'ACI 318-19 Eq. 22.4.2.2' });
+  return ended(w, po, 'kip');
 }
 
 /** Pn,max = 0.80 Po tied, 0.85 Po spiral (ACI 318-19 Table 22.4.2.1). */
 export function pnMax(fc: number, ag: number, ast: number, fy: number, t: Transverse): number {
-  return (t === 'tied' ? 0.8 : 0.85) * poColumn(fc, ag, ast, fy);
+  const w = working()?.open('pn_max', { fc: [fc, 'psi'], Ag: [ag, 'in^2'], Ast: [ast, 'in^2'], fy: [fy, 'psi'], transverse: t }, 'ACI 318-19 Table 22.4.2.1');
+  const k = t === 'tied' ? 0.8 : 0.85;
+  const pn = k * poColumn(fc, ag, ast, fy);
+  w?.step('Pn_max', `${k} * Po`, pn, 'kip', { clause: 'ACI 318-19 Table 22.4.2.1', note: `${t} column` });
+  return ended(w, pn, 'kip');
 }
 
 /** φ Pn,max with φ = 0.65 tied, 0.75 spiral (compression-controlled, ACI 318-19 Table 21.2.2). */
 export function phiPnMax(fc: number, ag: number, ast: number, fy: number, t: Transverse): number {
-  return (t === 'tied' ? 0.65 : 0.75) * pnMax(fc, ag, ast, fy, t);
+  const w = working()?.open('phi_pn_max', { fc: [fc, 'psi'], Ag: [ag, 'in^2'], Ast: [ast, 'in^2'], fy: [fy, 'psi'], transverse: t }, 'ACI 318-19 Table 22.4.2.1, Table 21.2.2');
+  const phi = t === 'tied' ? 0.65 : 0.75;
+  const v = phi * pnMax(fc, ag, ast, fy, t);
+  w?.step('phi_Pn_max', `${phi} * Pn_max`, v, 'kip', { clause: 'ACI 318-19 Table 21.2.2', note: `φ = ${phi}, compression-controlled, ${t}` });
+  return ended(w, v, 'kip');
 }
 
 /** ρg = Ast / Ag (ACI 318-19 §10.6.1.1). */
 export function rhoG(ast: number, ag: number): number {
-  return nonNegative('Ast', ast) / positive('Ag', ag);
+  const r = nonNegative('Ast', ast) / positive('Ag', ag);
+  working()?.step('rho_g', 'Ast / Ag', r, '', { vars: { Ast: [ast, 'in^2'], Ag: [ag, 'in^2'] }, clause: 'ACI 318-19 §10.6.1.1' });
+  return r;
 }
 
 /** 0.01 ≤ ρg ≤ 0.08 (ACI 318-19 §10.6.1.1). */
 export function rhoGOk(ast: number, ag: number): boolean {
   const r = rhoG(ast, ag);
-  return r >= 0.01 && r <= 0.08;
+  const ok = r >= 0.01 && r <= 0.08;
+  working()?.step('ok', 'rho_g >= 0.01 and rho_g <= 0.08', ok, '', { clause: 'ACI 318-19 §10.6.1.1' });
+  return ok;
 }
 
 const sectionParams: LibParam[] = [

@@ -5,11 +5,14 @@
 
 import { defineFunction, type LibFunction } from './types';
 import { positive } from './support-args';
+import { working } from '../working/recorder';
 
 /** Side of the square with the area of a circle of diameter D: √(π/4)·D = 0.8862 D. */
 export function equivalentSquare(dia: number): number {
   const area = (Math.PI * positive('D', dia) ** 2) / 4;
-  return Math.sqrt(area);
+  const c = Math.sqrt(area);
+  working()?.step('c', 'sqrt(pi * D^2 / 4)', c, 'in', { vars: { D: [dia, 'in'] }, clause: 'ACI 318-19 §13.2.7.3, §8.10.3.2.1 [from memory]', note: 'the square of equal area' });
+  return c;
 }
 
 export const functions: LibFunction[] = [

@@ -3,41 +3,59 @@
 
 import { LibraryError, defineFunction, type LibFunction } from './types';
 import { finite, positive } from './support-args';
+import { working } from '../working/recorder';
 
 /** Radius of gyration r = 0.3h for a rectangular column (ACI 318-19 §6.2.5.2; clause number from memory). */
 export function rRect(h: number): number {
-  return 0.3 * positive('h', h);
+  const r = 0.3 * positive('h', h);
+  working()?.step('r', '0.3 * h', r, 'in', { vars: { h: [h, 'in'] }, clause: 'ACI 318-19 §6.2.5.2' });
+  return r;
 }
 
 /** Radius of gyration r = 0.25D for a circular column (ACI 318-19 §6.2.5.2) [from memory]. */
 export function rCircular(dia: number): number {
-  return 0.25 * positive('D', dia);
+  const r = 0.25 * positive('D', dia);
+  working()?.step('r', '0.25 * D', r, 'in', { vars: { D: [dia, 'in'] }, clause: 'ACI 318-19 §6.2.5.2 [from memory]' });
+  return r;
 }
 
 /** Limit min(34 + 12 M1/M2, 40) on kℓu/r for a braced column (ACI 318-19 Eq. 6.2.5(b)). */
 export function slenderLimitBraced(m1: number, m2: number): number {
   const M2 = finite('M2', m2);
   const M1 = finite('M1', m1);
+  const w = working();
   if (M2 === 0) {
     // No end moments: take single curvature, M1/M2 = −1, the conservative case (common practice).
-    if (M1 === 0) return 34 - 12;
+    if (M1 === 0) {
+      w?.step('limit', '34 - 12', 22, '', { clause: 'ACI 318-19 Eq. 6.2.5(b)', note: 'no end moments: single curvature, M1/M2 = −1 (common practice)' });
+      return 34 - 12;
+    }
     throw new LibraryError('M2 must be the larger end moment: |M1| ≤ |M2|');
   }
   const ratio = M1 / M2;
   if (Math.abs(ratio) > 1 + 1e-12) throw new LibraryError(`M2 must be the larger end moment: |M1/M2| = ${Math.abs(ratio)} > 1`);
-  return Math.min(34 + 12 * ratio, 40);
+  const limit = Math.min(34 + 12 * ratio, 40);
+  w?.step('limit', 'min(34 + 12 * M1 / M2, 40)', limit, '', {
+    vars: { M1: [M1, 'kip*ft'], M2: [M2, 'kip*ft'] }, clause: 'ACI 318-19 Eq. 6.2.5(b)', governs: limit === 40, note: limit === 40 ? 'the limit 40 governs' : undefined,
+  });
+  return limit;
 }
 
 /** kℓu/r (ACI 318-19 §6.2.5). */
 export function kLuR(k: number, lu: number, r: number): number {
   const K = positive('k', k);
   if (K < 0.5 || K > 1) throw new LibraryError(`k for a braced (nonsway) column must be between 0.5 and 1.0, got ${K}`);
-  return (K * positive('ℓu', lu)) / positive('r', r);
+  const s = (K * positive('ℓu', lu)) / positive('r', r);
+  working()?.step('klu_r', 'k * lu / r', s, '', { vars: { k: K, lu: [lu, 'ft'], r: [r, 'in'] }, clause: 'ACI 318-19 §6.2.5' });
+  return s;
 }
 
 /** True when slenderness may be neglected: kℓu/r ≤ min(34 + 12 M1/M2, 40) (ACI 318-19 §6.2.5(b)). */
 export function shortBraced(k: number, lu: number, r: number, m1: number, m2: number): boolean {
-  return kLuR(k, lu, r) <= slenderLimitBraced(m1, m2);
+  const s = kLuR(k, lu, r);
+  const limit = slenderLimitBraced(m1, m2);
+  working()?.step('short', 'klu_r <= limit', s <= limit, '', { clause: 'ACI 318-19 §6.2.5(b)', note: s <= limit ? 'slenderness may be neglected' : 'slender: magnify the moments (§6.6.4)' });
+  return s <= limit;
 }
 
 const m12 = [

@@ -7,6 +7,7 @@
 
 import { defineFunction, type LibFunction } from './types';
 import { positive } from './support-args';
+import { working } from '../working/recorder';
 
 export interface ColumnThroughFloor {
   ratio: number; // f'c,col / f'c,floor
@@ -21,6 +22,16 @@ export function columnThroughFloor(fcCol: number, fcFloor: number, puddled = fal
   const ratio = col / floor;
   const needsAction = ratio > 1.4 + 1e-12;
   const fcUsed = needsAction && !puddled ? floor : col;
+  const w = working();
+  if (w) {
+    const vars = { fc_col: [col, 'psi'], fc_floor: [floor, 'psi'] } as const;
+    const clause = 'ACI 318-19 §15.5.1 [from memory]';
+    w.step('ratio', 'fc_col / fc_floor', ratio, '', { vars, clause });
+    w.step('fc', needsAction && !puddled ? 'fc_floor' : 'fc_col', fcUsed, 'psi', {
+      vars, clause, governs: needsAction,
+      note: !needsAction ? 'ratio ≤ 1.4: the column strength passes' : puddled ? 'column concrete puddled into the floor (a)' : 'ratio > 1.4: the floor strength through the floor (b)',
+    });
+  }
   return { ratio, needsAction, fcUsed };
 }
 

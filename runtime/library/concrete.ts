@@ -6,6 +6,7 @@
 import { defineFunction, LibraryError, type LibFunction } from './types';
 import { choice, positive, show } from './gravity-args';
 import { MPa, pcf, psi } from '../units/si';
+import { working } from '../working/recorder';
 
 /** Lowest f'c accepted: 17 MPa (SI edition; 2500 psi in inch-pound), ACI 318-19 §19.2.1.1. */
 export const FC_MIN = 17 * MPa;
@@ -21,14 +22,25 @@ function fcPsi(fc: number): number {
 /** ACI 318-19 Table 22.2.2.4.3: β1 = 0.85 to 4000 psi, less 0.05 per 1000 psi, not below 0.65. */
 export function beta1(fc: number): number {
   const f = fcPsi(fc);
-  if (f <= 4000) return 0.85;
-  if (f >= 8000) return 0.65;
-  return 0.85 - (0.05 * (f - 4000)) / 1000;
+  const w = working();
+  const clause = 'ACI 318-19 Table 22.2.2.4.3';
+  if (f <= 4000 || f >= 8000) {
+    const b = f <= 4000 ? 0.85 : 0.65;
+    w?.lookup('beta1', b, '', f <= 4000 ? "row 2500 ≤ f′c ≤ 4000 psi" : "row f′c ≥ 8000 psi", clause);
+    return b;
+  }
+  const b = 0.85 - (0.05 * (f - 4000)) / 1000;
+  w?.step('beta1', '0.85 - 0.05 * (fc - 4000) / 1000', b, '', {
+    vars: { fc: [fc, 'psi'] }, code: true, clause, note: "row 4000 < f′c < 8000 psi",
+  });
+  return b;
 }
 
 /** ACI 318-19 §19.2.2.1(b): Ec = 57,000 √f'c psi for normal-weight concrete. */
 export function ecConcrete(fc: number): number {
-  return 57000 * Math.sqrt(fcPsi(fc)) * psi;
+  const Ec = 57000 * Math.sqrt(fcPsi(fc)) * psi;
+  working()?.step('Ec', '57000 * sqrt(fc)', Ec, 'psi', { vars: { fc: [fc, 'psi'] }, code: true, clause: 'ACI 318-19 §19.2.2.1(b)' });
+  return Ec;
 }
 
 /** ACI 318-19 §19.2.2.1(a): Ec = wc^1.5 · 33 √f'c psi, wc in pcf between 90 and 160. */
@@ -38,7 +50,11 @@ export function ecConcreteWc(fc: number, wc: number): number {
   if (w < 90 - 1e-9 || w > 160 + 1e-9) {
     throw new LibraryError(`ec_concrete_wc: wc = ${show(w)} pcf is outside 90-160 pcf (ACI 318-19 §19.2.2.1(a))`);
   }
-  return Math.pow(w, 1.5) * 33 * Math.sqrt(f) * psi;
+  const Ec = Math.pow(w, 1.5) * 33 * Math.sqrt(f) * psi;
+  working()?.step('Ec', 'wc^1.5 * 33 * sqrt(fc)', Ec, 'psi', {
+    vars: { fc: [fc, 'psi'], wc: [wc, 'pcf'] }, code: true, clause: 'ACI 318-19 §19.2.2.1(a)',
+  });
+  return Ec;
 }
 
 /** ACI 318-19 Table 19.2.4.2: λ by the composition of the aggregate. */
@@ -52,15 +68,25 @@ export const CONCRETE_TYPES = Object.keys(LAMBDA_TABLE) as ConcreteType[];
 
 /** ACI 318-19 Table 19.2.4.2: modification factor λ for lightweight concrete. */
 export function lambdaConcrete(type: ConcreteType): number {
-  return LAMBDA_TABLE[choice('type', type, CONCRETE_TYPES)];
+  const t = choice('type', type, CONCRETE_TYPES);
+  const l = LAMBDA_TABLE[t];
+  working()?.lookup('lambda', l, '', `row: ${t} concrete`, 'ACI 318-19 Table 19.2.4.2');
+  return l;
 }
 
 /** ACI 318-19 Table 19.2.4.1(a), from memory: λ = 0.75 to 100 pcf, 0.0075 wc to 135 pcf, 1.0 above. */
 export function lambdaWc(wc: number): number {
   const w = positive('wc', wc) / pcf;
-  if (w <= 100) return 0.75;
-  if (w <= 135) return Math.min(1, 0.0075 * w);
-  return 1.0;
+  const rec = working();
+  const clause = 'ACI 318-19 Table 19.2.4.1(a) [from memory]';
+  if (w <= 100 || w > 135) {
+    const l = w <= 100 ? 0.75 : 1.0;
+    rec?.lookup('lambda', l, '', w <= 100 ? 'row wc ≤ 100 pcf' : 'row wc > 135 pcf', clause);
+    return l;
+  }
+  const l = Math.min(1, 0.0075 * w);
+  rec?.step('lambda', 'min(1, 0.0075 * wc)', l, '', { vars: { wc: [wc, 'pcf'] }, code: true, clause, note: 'row 100 < wc ≤ 135 pcf' });
+  return l;
 }
 
 const FC = { name: 'fc', type: 'Pa', doc: "specified compressive strength f'c" };

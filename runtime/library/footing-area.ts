@@ -4,23 +4,32 @@
 
 import { LibraryError, defineFunction, type LibFunction } from './types';
 import { nonNegative, optional, positive } from './support-args';
+import { working } from '../working/recorder';
 
 /** q_net = q_allow − footing weight − fill weight − surcharge: what is left for the column load (common practice). */
 export function qNetAllow(qAllow: number, hf: number, gammaC: number, hFill: number, gammaSoil: number, surcharge = 0): number {
   const q = positive('q_allow', qAllow) - positive('h_footing', hf) * positive('gamma_c', gammaC)
     - nonNegative('h_fill', hFill) * nonNegative('gamma_soil', gammaSoil) - nonNegative('surcharge', surcharge);
   if (q <= 0) throw new LibraryError('nothing left of q_allow for the column load: footing, fill and surcharge weigh as much or more');
+  working()?.step('q_net', 'q_allow - h_footing * gamma_c - h_fill * gamma_soil - surcharge', q, 'psf', {
+    vars: { q_allow: [qAllow, 'psf'], h_footing: [hf, 'in'], gamma_c: [gammaC, 'pcf'], h_fill: [hFill, 'ft'], gamma_soil: [gammaSoil, 'pcf'], surcharge: [surcharge, 'psf'] },
+    clause: 'common practice; ACI 318-19 §13.3.1.1 service loads',
+  });
   return q;
 }
 
 /** A_req = P_service / q_net (ACI 318-19 §13.3.1.1: area from unfactored loads). */
 export function aReqFooting(ps: number, qNet: number): number {
-  return positive('P (service)', ps) / positive('q_net', qNet);
+  const A = positive('P (service)', ps) / positive('q_net', qNet);
+  working()?.step('A_req', 'P / q_net', A, 'ft^2', { vars: { P: [ps, 'kip'], q_net: [qNet, 'psf'] }, clause: 'ACI 318-19 §13.3.1.1' });
+  return A;
 }
 
 /** qu = Pu / (B L), the factored net soil pressure under a concentric load (ACI 318-19 §13.2.6.1). */
 export function quFooting(pu: number, b: number, l: number): number {
-  return positive('Pu', pu) / (positive('B', b) * positive('L', l));
+  const q = positive('Pu', pu) / (positive('B', b) * positive('L', l));
+  working()?.step('q_u', 'Pu / (B * L)', q, 'psf', { vars: { Pu: [pu, 'kip'], B: [b, 'ft'], L: [l, 'ft'] }, clause: 'ACI 318-19 §13.2.6.1' });
+  return q;
 }
 
 export const functions: LibFunction[] = [

@@ -7,13 +7,21 @@ import { LibraryError, defineFunction, type LibFunction, type LibParam } from '.
 import { EDITIONS, edition, optional, phiFactor, positive, type Edition } from './support-args';
 import { quFooting } from './footing-area';
 import { fyDesign, rhoMinSlab } from './reinforcement-limits';
+import { ended, working } from '../working/recorder';
 
 /** Mu at the column face = qu · B · ℓ² / 2 with ℓ = (L − c)/2 (ACI 318-19 §13.2.7.1). */
 export function muFooting(pu: number, b: number, l: number, c: number): number {
   const qu = quFooting(pu, b, l);
   const arm = (l - positive('c', c)) / 2;
   if (arm <= 0) throw new LibraryError('the column is not smaller than the footing');
-  return (qu * b * arm * arm) / 2;
+  const mu = (qu * b * arm * arm) / 2;
+  const w = working();
+  if (w) {
+    const vars = { B: [b, 'ft'], L: [l, 'ft'], c: [c, 'in'] } as const;
+    w.step('l_cant', '(L - c) / 2', arm, 'ft', { vars, clause: 'ACI 318-19 §13.2.7.1', note: 'cantilever from the column face' });
+    w.step('Mu', 'q_u * B * l_cant^2 / 2', mu, 'kip*ft', { vars, clause: 'ACI 318-19 §13.2.7.1' });
+  }
+  return mu;
 }
 
 /** As from Mu ≤ φ As fy (d − a/2), a = As fy / (0.85 f'c b): the Whitney block (ACI 318-19 §22.2.2.4.1). */
@@ -22,11 +30,16 @@ export function asReqFooting(mu: number, b: number, d: number, fc: number, fySpe
   positive('B', b);
   positive('d', d);
   positive('fc', fc);
+  const w = working()?.open('as_req_footing', { Mu: [mu, 'kip*ft'], B: [b, 'ft'], d: [d, 'in'], fc: [fc, 'psi'], fy: [fySpecified, 'psi'], phi }, 'ACI 318-19 §22.2.2.4.1');
   const fy = fyDesign(fySpecified, 'flexure', ed); // Table 20.2.2.4(a) cap [from memory]
   phiFactor(phi);
   const k = (2 * mu) / (phi * 0.85 * fc * b * d * d);
+  const vars = { Mu: [mu, 'kip*ft'], B: [b, 'ft'], d: [d, 'in'], fc: [fc, 'psi'], fy: [fy, 'psi'], phi } as const;
+  w?.step('k', '2 * Mu / (phi * 0.85 * fc * B * d^2)', k, '', { vars, clause: 'ACI 318-19 §22.2.2.4.1' });
   if (k >= 1) throw new LibraryError('footing too shallow: Mu exceeds the capacity of the concrete stress block; increase h');
-  return ((0.85 * fc * b * d) / fy) * (1 - Math.sqrt(1 - k));
+  const As = ((0.85 * fc * b * d) / fy) * (1 - Math.sqrt(1 - k));
+  w?.step('As_req', '0.85 * fc * B * d / fy * (1 - sqrt(1 - k))', As, 'in^2', { vars, clause: 'ACI 318-19 §22.2.2.4.1 (Whitney block)' });
+  return ended(w, As, 'in^2');
 }
 
 /**
@@ -35,28 +48,44 @@ export function asReqFooting(mu: number, b: number, d: number, fc: number, fySpe
  */
 export function asMinFooting(b: number, h: number, fy?: number, ed: Edition = '318-19'): number {
   const area = positive('B', b) * positive('h', h);
-  if (fy === undefined) {
-    if (ed === '318-14') throw new LibraryError("edition '318-14' sets the minimum by the bar grade: give fy");
-    return 0.0018 * area;
-  }
-  return rhoMinSlab(fy, ed) * area;
+  if (fy === undefined && ed === '318-14') throw new LibraryError("edition '318-14' sets the minimum by the bar grade: give fy");
+  const w = working()?.open('as_min_footing', { B: [b, 'ft'], h: [h, 'in'], fy: fy === undefined ? 'not given' : [fy, 'psi'], edition: ed }, MIN_CLAUSE);
+  let rho = 0.0018;
+  if (fy === undefined) w?.lookup('rho_min', rho, '', 'deformed bars, any grade', 'ACI 318-19 Table 8.6.1.1 [from memory]');
+  else rho = rhoMinSlab(fy, ed);
+  const As = rho * area;
+  w?.step('As_min', 'rho_min * B * h', As, 'in^2', { vars: { B: [b, 'ft'], h: [h, 'in'] }, clause: 'ACI 318-19 §13.3.3.1 [from memory]' });
+  return ended(w, As, 'in^2');
 }
 
 /** The larger of the Whitney steel and the minimum of the edition. */
 export function asFooting(mu: number, b: number, d: number, h: number, fc: number, fy: number, phi = 0.9, ed: Edition = '318-19'): number {
   if (positive('h', h) <= positive('d', d)) throw new LibraryError('h must exceed d');
-  return Math.max(asReqFooting(mu, b, d, fc, fy, phi, ed), asMinFooting(b, h, fy, ed));
+  const w = working()?.open('as_footing', { Mu: [mu, 'kip*ft'], B: [b, 'ft'], d: [d, 'in'], h: [h, 'in'], fc: [fc, 'psi'], fy: [fy, 'psi'], phi, edition: ed }, MIN_CLAUSE);
+  const req = asReqFooting(mu, b, d, fc, fy, phi, ed);
+  const min = asMinFooting(b, h, fy, ed);
+  const As = Math.max(req, min);
+  w?.step('As', 'max(As_req, As_min)', As, 'in^2', { governs: true, note: req >= min ? 'the steel for Mu governs' : 'the minimum steel governs' });
+  return ended(w, As, 'in^2');
 }
 
 /** γs = 2/(β + 1), β = long side / short side (ACI 318-19 Eq. 13.3.3.3). */
 export function gammaSBand(b: number, l: number): number {
   const beta = Math.max(positive('B', b), positive('L', l)) / Math.min(b, l);
-  return 2 / (beta + 1);
+  const g = 2 / (beta + 1);
+  const w = working();
+  if (w) {
+    w.step('beta', 'max(B, L) / min(B, L)', beta, '', { vars: { B: [b, 'ft'], L: [l, 'ft'] } });
+    w.step('gamma_s', '2 / (beta + 1)', g, '', { clause: 'ACI 318-19 Eq. 13.3.3.3' });
+  }
+  return g;
 }
 
 /** Short-direction steel placed in the central band of width equal to the short side (ACI 318-19 §13.3.3.3). */
 export function asBand(asShort: number, b: number, l: number): number {
-  return positive('As (short direction)', asShort) * gammaSBand(b, l);
+  const as = positive('As (short direction)', asShort) * gammaSBand(b, l);
+  working()?.step('As_band', 'gamma_s * As_short', as, 'in^2', { vars: { As_short: [asShort, 'in^2'] }, clause: 'ACI 318-19 §13.3.3.3' });
+  return as;
 }
 
 const flexParams: LibParam[] = [

@@ -9,6 +9,7 @@ import { defineFunction, type LibFunction } from './types';
 import { choice, count, nonNegative, positive } from './gravity-args';
 import { liveReduced, OCCUPANCIES, type Occupancy } from './loads-reduction';
 import { ASCE_EDITIONS, asceEdition, comboAsd, comboUGoverning, type AsceEdition } from './loads-combinations';
+import { ended, working } from '../working/recorder';
 
 export interface ColumnLoads {
   floors: number;
@@ -45,27 +46,49 @@ function checked(c: ColumnLoads): Required<ColumnLoads> {
 /** Dead load at the foot of the storey: roof + floors × floor dead load over AT, plus (floors + 1) storeys of column (statics). */
 export function colDead(c: ColumnLoads): number {
   const k = checked(c);
-  return k.AT * (k.Droof + k.floors * k.Dfloor) + (k.floors + 1) * k.wCol * k.hStorey;
+  const D = k.AT * (k.Droof + k.floors * k.Dfloor) + (k.floors + 1) * k.wCol * k.hStorey;
+  working()?.step('P_D', 'AT * (D_roof + floors * D_floor) + (floors + 1) * w_col * h_storey', D, 'kip', { vars: varsOf(k), clause: 'statics' });
+  return D;
+}
+
+/** The loads as the working shows them. */
+function varsOf(k: Required<ColumnLoads>) {
+  return {
+    floors: k.floors, AT: [k.AT, 'ft^2'], D_floor: [k.Dfloor, 'psf'], L_floor: [k.Lfloor, 'psf'], D_roof: [k.Droof, 'psf'],
+    Lr: [k.Lroof, 'psf'], S_roof: [k.Sroof, 'psf'], w_col: [k.wCol, 'klf'], h_storey: [k.hStorey, 'ft'],
+  } as const;
 }
 
 /** Reduced floor live load carried: ASCE 7-22 §4.7.2 with AT summed over the floors supported. */
 export function colLive(c: ColumnLoads): number {
   const k = checked(c);
-  if (k.floors === 0) return 0;
+  const w = working();
+  if (k.floors === 0) {
+    w?.step('P_L', '0', 0, 'kip', { note: 'no floors above: roof loads only' });
+    return 0;
+  }
   const area = k.floors * k.AT;
-  return area * liveReduced(k.Lfloor, area, k.KLL, k.floors, k.occupancy);
+  w?.step('AT_sum', 'floors * AT', area, 'ft^2', { vars: varsOf(k), clause: 'ASCE 7-22 §4.7.2, C4.7 (AT summed over the floors)' });
+  const reduced = liveReduced(k.Lfloor, area, k.KLL, k.floors, k.occupancy);
+  const L = area * reduced;
+  w?.step('P_L', 'AT_sum * L_red', L, 'kip', { vars: { L_red: [reduced, 'psf'] }, clause: 'ASCE 7-22 §4.7.2' });
+  return L;
 }
 
 /** Roof live load carried (unreduced). */
 export function colRoofLive(c: ColumnLoads): number {
   const k = checked(c);
-  return k.AT * k.Lroof;
+  const Lr = k.AT * k.Lroof;
+  working()?.step('P_Lr', 'AT * Lr', Lr, 'kip', { vars: varsOf(k), note: 'roof live load, not reduced (conservative)' });
+  return Lr;
 }
 
 /** Roof snow carried (unreduced). */
 export function colRoofSnow(c: ColumnLoads): number {
   const k = checked(c);
-  return k.AT * k.Sroof;
+  const S = k.AT * k.Sroof;
+  working()?.step('P_S', 'AT * S_roof', S, 'kip', { vars: varsOf(k), note: 'roof snow, not reduced' });
+  return S;
 }
 
 /** Factored axial load: governing ASCE 7-22 §2.3.1 (or 7-16) gravity combination of the accumulated D, L, Lr, S. */
@@ -104,8 +127,11 @@ const pack = ([floors, AT, Dfloor, Lfloor, Droof, Lroof, wCol, hStorey, KLL, occ
 function entry(name: string, clause: string, doc: string, f: (c: ColumnLoads) => number): LibFunction {
   return defineFunction({
     name, params: PARAMS, optional: 3, returns: 'N', clause, doc,
-    fn: (a: number, b: number, c: number, d: number, e: number, g: number, h: number, i: number, j: number, k?: Occupancy, sr?: number, ed?: AsceEdition) =>
-      f(pack([a, b, c, d, e, g, h, i, j, k, sr, ed])),
+    fn: (a: number, b: number, c: number, d: number, e: number, g: number, h: number, i: number, j: number, k?: Occupancy, sr?: number, ed?: AsceEdition) => {
+      // The column's own working, so the live load reduction inside it is a call of its own.
+      const w = working()?.open(name, {}, clause);
+      return ended(w, f(pack([a, b, c, d, e, g, h, i, j, k, sr, ed])), 'kip');
+    },
   });
 }
 

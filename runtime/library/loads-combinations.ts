@@ -9,6 +9,7 @@
 
 import { defineFunction, type LibFunction, type LibParam } from './types';
 import { choice, nonNegative } from './gravity-args';
+import { working, type Recorder } from '../working/recorder';
 
 export const ASCE_EDITIONS = ['7-22', '7-16'] as const;
 export type AsceEdition = (typeof ASCE_EDITIONS)[number];
@@ -25,21 +26,52 @@ export function asceEdition(v: unknown): AsceEdition {
   return choice('ASCE 7 edition', v, ASCE_EDITIONS, '7-22');
 }
 
+/**
+ * The loads as the working shows them, in the unit the caller showed D in (psf for area
+ * loads, kip for forces, guessed by size when nobody said).
+ */
+function loadVars(w: Recorder, D: number, L = 0, Lr = 0, S = 0, R = 0) {
+  const u = w.unitOf('D') || w.unitOf('P_D') || (Math.abs(D) > 20000 ? 'kip' : 'psf');
+  return { unit: u, vars: { D: [D, u] as const, L: [L, u] as const, Lr: [Lr, u] as const, S: [S, u] as const, R: [R, u] as const } };
+}
+
 /** §2.3.1 combination 1: 1.4D. */
 export function comboU1(D: number): number {
-  return 1.4 * D;
+  const U = 1.4 * D;
+  const w = working();
+  if (w) {
+    const { unit, vars } = loadVars(w, D);
+    w.step('U1', '1.4 * D', U, unit, { vars, clause: 'ASCE 7-22 §2.3.1 comb. 1' });
+  }
+  return U;
 }
 
 /** §2.3.1 combination 2: 1.2D + 1.6L + the companion roof load 0.5Lr, 0.5R or (0.5S | 0.3S by edition). */
 export function comboU2(D: number, L: number, Lr = 0, S = 0, R = 0, ed: AsceEdition = '7-22'): number {
   const roofCompanion = Math.max(0.5 * Lr, SNOW[ed].companion * S, 0.5 * R);
-  return 1.2 * D + 1.6 * L + roofCompanion;
+  const U = 1.2 * D + 1.6 * L + roofCompanion;
+  const w = working();
+  if (w) {
+    const { unit, vars } = loadVars(w, D, L, Lr, S, R);
+    w.step('U2', `1.2 * D + 1.6 * L + max(0.5 * Lr, ${SNOW[ed].companion} * S, 0.5 * R)`, U, unit, {
+      vars, clause: `ASCE ${ed} §2.3.1 comb. 2`,
+    });
+  }
+  return U;
 }
 
 /** §2.3.1 combination 3 without wind: 1.2D + the leading roof load 1.6Lr, 1.6R or (1.6S | 1.0S) + 1.0L. */
 export function comboU3(D: number, L: number, Lr = 0, S = 0, R = 0, ed: AsceEdition = '7-22'): number {
   const roofLeading = Math.max(1.6 * Lr, SNOW[ed].leading * S, 1.6 * R);
-  return 1.2 * D + roofLeading + L;
+  const U = 1.2 * D + roofLeading + L;
+  const w = working();
+  if (w) {
+    const { unit, vars } = loadVars(w, D, L, Lr, S, R);
+    w.step('U3', `1.2 * D + max(1.6 * Lr, ${SNOW[ed].leading} * S, 1.6 * R) + L`, U, unit, {
+      vars, clause: `ASCE ${ed} §2.3.1 comb. 3`,
+    });
+  }
+  return U;
 }
 
 /** The combinations as printed for the hand calc, by edition. */
@@ -61,18 +93,43 @@ export function comboUGoverning(D: number, L: number, Lr = 0, S = 0, R = 0, ed: 
   const values = [comboU1(D), comboU2(D, L, Lr, S, R, ed), comboU3(D, L, Lr, S, R, ed)];
   let index = 0;
   for (let i = 1; i < values.length; i++) if (values[i] > values[index]) index = i;
+  const w = working();
+  if (w) {
+    w.step('U', 'max(U1, U2, U3)', values[index], w.unitOf('U1'), {
+      clause: `ASCE ${ed} §2.3.1`, governs: true, note: `combination ${index + 1} governs: ${COMBO_TEXT[ed][index]}`,
+    });
+  }
   return { value: values[index], index };
 }
 
 /** §2.4.1 combination 2: D + L (service load on the soil). */
 export function comboService(D: number, L: number): number {
-  return D + L;
+  const P = D + L;
+  const w = working();
+  if (w) {
+    const { unit, vars } = loadVars(w, D, L);
+    w.step('Ps', 'D + L', P, unit, { vars, clause: 'ASCE 7-22 §2.4.1 comb. 2' });
+  }
+  return P;
 }
 
 /** Governing §2.4.1 gravity combination: D; D + L; D + (Lr or S' or R); D + 0.75L + 0.75(Lr or S' or R), S' = 1.0S (7-16) or 0.7S (7-22). */
 export function comboAsd(D: number, L: number, Lr = 0, S = 0, R = 0, ed: AsceEdition = '7-22'): number {
   const roof = Math.max(Lr, SNOW[ed].asd * S, R);
-  return Math.max(D, D + L, D + roof, D + 0.75 * L + 0.75 * roof);
+  const all = [D, D + L, D + roof, D + 0.75 * L + 0.75 * roof];
+  const P = Math.max(...all);
+  const w = working();
+  if (w) {
+    const { unit, vars } = loadVars(w, D, L, Lr, S, R);
+    const clause = `ASCE ${ed} §2.4.1`;
+    w.step('roof', `max(Lr, ${SNOW[ed].asd} * S, R)`, roof, unit, { vars, clause, note: 'the roof load that leads' });
+    const i = all.indexOf(P);
+    w.step('Pa', 'max(D, D + L, D + roof, D + 0.75 * L + 0.75 * roof)', P, unit, {
+      vars: { D: vars.D, L: vars.L }, clause, governs: true,
+      note: `combination ${['1: D', '2: D + L', '3: D + roof', '4: D + 0.75L + 0.75 roof'][i]} governs`,
+    });
+  }
+  return P;
 }
 
 // ---- formula functions ------------------------------------------------------------
@@ -132,7 +189,11 @@ function forDim(d: Dim): LibFunction[] {
     defineFunction({
       name: n('combo_u_governs'), params: all, optional: 4, returns: 'text', clause: `${CLAUSE_U} comb. 1-3`,
       doc: 'Which strength combination governs, as text for the hand calc',
-      fn: fn((...a) => strengthCombos(a[5])[comboUGoverning(...a).index]),
+      fn: fn((...a) => {
+        const text = strengthCombos(a[5])[comboUGoverning(...a).index];
+        working()?.step('governs', undefined, text, '', { note: 'the largest of combinations 1-3' });
+        return text;
+      }),
     }),
     defineFunction({
       name: n('combo_service'), params: loadParams(d.type, ['D', 'L']), returns: d.type, clause: `${CLAUSE_ASD} comb. 2`,

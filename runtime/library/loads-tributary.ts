@@ -4,8 +4,10 @@
 
 import { defineFunction, LibraryError, type LibFunction } from './types';
 import { choice, nonNegative, optNonNegative, positive } from './gravity-args';
+import { working } from '../working/recorder';
 
 export const POSITIONS = ['interior', 'edge', 'corner'] as const;
+const CLAUSE = 'Half-bay rule (common practice)';
 export type ColumnPosition = (typeof POSITIONS)[number];
 
 /** Tributary width along one grid line: half of each adjoining span plus an overhang past an edge (half-bay rule, common practice). */
@@ -17,7 +19,11 @@ export function tribWidth(spanA: number, spanB: number, overhang = 0): number {
   if (o > 0 && a > 0 && b > 0) {
     throw new LibraryError(`an overhang needs an edge (one adjoining span 0); both spans are given`);
   }
-  return a / 2 + b / 2 + o;
+  const width = a / 2 + b / 2 + o;
+  working()?.step('w_trib', 'span_a / 2 + span_b / 2 + overhang', width, 'ft', {
+    vars: { span_a: [a, 'ft'], span_b: [b, 'ft'], overhang: [o, 'ft'] }, clause: CLAUSE,
+  });
+  return width;
 }
 
 /**
@@ -31,25 +37,31 @@ export function tribArea(lx: number, ly: number, position: ColumnPosition, cantX
   const cx = nonNegative('cant_x', cantX);
   const cy = nonNegative('cant_y', cantY);
   const pos = choice('position', position, POSITIONS);
-  if (pos === 'interior') {
-    if (cx > 0 || cy > 0) throw new LibraryError(`an interior column has no overhang`);
-    return x * y;
-  }
-  if (pos === 'edge') {
-    if (cy > 0) throw new LibraryError(`an edge column's edge runs along y; give its overhang as cant_x`);
-    return (x / 2 + cx) * y;
-  }
-  return (x / 2 + cx) * (y / 2 + cy);
+  if (pos === 'interior' && (cx > 0 || cy > 0)) throw new LibraryError(`an interior column has no overhang`);
+  if (pos === 'edge' && cy > 0) throw new LibraryError(`an edge column's edge runs along y; give its overhang as cant_x`);
+  const [area, expr] = pos === 'interior' ? [x * y, 'lx * ly']
+    : pos === 'edge' ? [(x / 2 + cx) * y, '(lx / 2 + cant_x) * ly']
+      : [(x / 2 + cx) * (y / 2 + cy), '(lx / 2 + cant_x) * (ly / 2 + cant_y)'];
+  working()?.step('AT', expr, area, 'ft^2', {
+    vars: { lx: [x, 'ft'], ly: [y, 'ft'], cant_x: [cx, 'ft'], cant_y: [cy, 'ft'] }, clause: CLAUSE, note: `${pos} column`,
+  });
+  return area;
 }
 
 /** Tributary area from the four adjoining spans (0 where the column is on an edge), with optional overhangs (half-bay rule, common practice). */
 export function tribAreaSpans(
   xLeft: number, xRight: number, yBelow: number, yAbove: number, cantX = 0, cantY = 0,
 ): number {
-  return tribWidth(xLeft, xRight, cantX) * tribWidth(yBelow, yAbove, cantY);
+  const w = working();
+  const wx = tribWidth(xLeft, xRight, cantX);
+  w?.step('w_x', 'w_trib', wx, 'ft');
+  const wy = tribWidth(yBelow, yAbove, cantY);
+  w?.step('w_y', 'w_trib', wy, 'ft');
+  const area = wx * wy;
+  w?.step('AT', 'w_x * w_y', area, 'ft^2', { clause: CLAUSE });
+  return area;
 }
 
-const CLAUSE = 'Half-bay rule (common practice)';
 
 export const functions: LibFunction[] = [
   defineFunction({

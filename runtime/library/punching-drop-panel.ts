@@ -7,6 +7,7 @@ import { LibraryError, defineFunction, type LibFunction, type LibParam } from '.
 import { EDITIONS, edition, lambdaFactor, optional, phiFactor, positive, type Edition } from './support-args';
 import { POSITIONS, boPunch, criticalSection, position, type Position } from './punching-perimeter';
 import { punchRatio } from './punching-stress';
+import { working } from '../working/recorder';
 
 export interface DropPanelCheck {
   inner: number;
@@ -35,11 +36,19 @@ export function dropPanelCheck(
       'drop panel too small: the section at d/2 from the column face falls outside it; check the slab with vc_punch instead',
     );
   }
+  const w = working()?.open('punch_drop', {
+    Vu: [reaction, 'kip'], qu: [qu, 'psf'], fc: [fc, 'psi'], c1: [c1, 'in'], c2: [c2, 'in'], d_drop: [dDrop, 'in'],
+    x1: [x1, 'in'], x2: [x2, 'in'], d_slab: [dSlab, 'in'], position: pos, phi, lambda, edition: ed,
+  }, CLAUSE);
   const inner = punchRatio(reaction, qu, fc, c1, c2, dDrop, pos, phi, lambda, ed);
+  w?.result('ratio_inner', 'ratio', inner, '', { note: 'at d/2 from the column face, drop d' });
   const outer = punchRatio(reaction, qu, fc, x1, x2, dSlab, pos, phi, lambda, ed);
+  w?.result('ratio_outer', 'ratio', outer, '', { note: 'at d/2 outside the drop, slab d' });
   const governs = inner >= outer
     ? 'section at d/2 from the column face, within the drop (drop d)'
     : 'section at d/2 outside the drop edge (slab d)';
+  w?.step('ratio', 'max(ratio_inner, ratio_outer)', Math.max(inner, outer), '', { governs: true, note: `the ${governs} governs`, clause: CLAUSE });
+  w?.end(Math.max(inner, outer));
   return { inner, outer, ratio: Math.max(inner, outer), governs };
 }
 
@@ -92,6 +101,9 @@ export const functions: LibFunction[] = [
     returns: 'text',
     clause: CLAUSE,
     doc: 'Which critical section governs at a drop panel, as text for the hand calc',
-    fn: run((r) => r.governs),
+    fn: run((r) => {
+      working()?.step('governs', undefined, r.governs, '', { clause: CLAUSE });
+      return r.governs;
+    }),
   }),
 ];

@@ -10,15 +10,20 @@ import { boPunch, criticalSection, geometryParams, position, type Position } fro
 import { alphaS } from './punching-stress';
 import { lambdaS, sqrtFcShearPsi } from './shear-size-effect';
 import { psi } from '../units/si';
+import { ended, quietly, working } from '../working/recorder';
 
 /** γf = 1 / (1 + (2/3)√(b1/b2)), the fraction of Msc transferred by flexure (ACI 318-19 Eq. 8.4.2.2.2). */
 export function gammaF(b1: number, b2: number): number {
-  return 1 / (1 + (2 / 3) * Math.sqrt(positive('b1', b1) / positive('b2', b2)));
+  const g = 1 / (1 + (2 / 3) * Math.sqrt(positive('b1', b1) / positive('b2', b2)));
+  working()?.step('gamma_f', '1 / (1 + 2 / 3 * sqrt(b1 / b2))', g, '', { vars: { b1: [b1, 'in'], b2: [b2, 'in'] }, clause: 'ACI 318-19 Eq. 8.4.2.2.2' });
+  return g;
 }
 
 /** γv = 1 − γf, the fraction of Msc transferred by eccentric shear (ACI 318-19 Eq. 8.4.4.2.2). */
 export function gammaV(b1: number, b2: number): number {
-  return 1 - gammaF(b1, b2);
+  const g = 1 - gammaF(b1, b2);
+  working()?.step('gamma_v', '1 - gamma_f', g, '', { clause: 'ACI 318-19 Eq. 8.4.4.2.2' });
+  return g;
 }
 
 export interface SectionProperties {
@@ -41,6 +46,18 @@ export function sectionProperties(c1: number, c2: number, d: number, pos: Positi
   // b2 sides: at x = 0 (face AB) and, for interior columns, also at x = b1.
   jc += b2 * d * xBar ** 2;
   if (n2 === 2) jc += b2 * d * (b1 - xBar) ** 2;
+  const w = working();
+  if (w) {
+    const vars = { n1, n2, d: [d, 'in'] } as const;
+    if (pos === 'interior') w.step('c_AB', 'b1 / 2', xBar, 'in', { vars, clause: R8 });
+    else {
+      w.step('A_c', '(n1 * b1 + n2 * b2) * d', area, 'in^2', { vars, clause: R8 });
+      w.step('c_AB', 'n1 * b1 * d * (b1 / 2) / A_c', xBar, 'in', { vars, clause: R8, note: 'centroid of the section from face AB' });
+    }
+    w.step('J_c', 'n1 * (d * b1^3 / 12 + b1 * d^3 / 12 + b1 * d * (b1 / 2 - c_AB)^2) + b2 * d * c_AB^2 + (n2 - 1) * b2 * d * (b1 - c_AB)^2',
+      jc, 'in^4', { vars, clause: R8 });
+    w.step('c_CD', 'b1 - c_AB', b1 - xBar, 'in', { clause: R8 });
+  }
   return { cAB: xBar, cCD: b1 - xBar, jc };
 }
 
@@ -48,26 +65,49 @@ export function sectionProperties(c1: number, c2: number, d: number, pos: Positi
 export function vuPunchMoment(vu: number, msc: number, c1: number, c2: number, d: number, pos: Position): number {
   const V = nonNegative('Vu', vu);
   const M = Math.abs(finite('Msc', msc));
-  const { b1, b2 } = criticalSection(c1, c2, d, pos);
+  const w = working()?.open('vu_punch_moment', { Vu: [V, 'kip'], Msc: [msc, 'kip*ft'], c1: [c1, 'in'], c2: [c2, 'in'], d: [d, 'in'], position: pos }, 'ACI 318-19 §8.4.4.2.3');
+  const bo = boPunch(c1, c2, d, pos);
   const p = sectionProperties(c1, c2, d, pos);
-  return V / (boPunch(c1, c2, d, pos) * d) + (gammaV(b1, b2) * M * p.cAB) / p.jc;
+  const { b1, b2 } = quietly(() => criticalSection(c1, c2, d, pos));
+  const v = V / (bo * d) + (gammaV(b1, b2) * M * p.cAB) / p.jc;
+  w?.step('v_u', 'Vu / (bo * d) + gamma_v * abs(Msc) * c_AB / J_c', v, 'psi', {
+    vars: { Vu: [V, 'kip'], Msc: [msc, 'kip*ft'], d: [d, 'in'] }, clause: 'ACI 318-19 R8.4.4.2.3', note: 'at face AB',
+  });
+  return ended(w, v, 'psi');
 }
 
 /** True when vuv > φ 2λsλ√f'c, so §8.6.1.2 minimum steel applies (ACI 318-19 only). */
 export function punchMinSteelNeeded(vuv: number, fc: number, d: number, phi = 0.75, lambda = 1, ed: Edition = '318-19'): boolean {
   nonNegative('vuv', vuv);
-  if (ed === '318-14') return false;
-  return vuv > phiFactor(phi) * 2 * lambdaS(d, ed) * lambda * sqrtFcShearPsi(fc) * psi;
+  const w = working();
+  if (ed === '318-14') {
+    w?.lookup('needed', false, '', 'ACI 318-14 has no such rule', 'ACI 318-14');
+    return false;
+  }
+  const f = phiFactor(phi);
+  const limit = f * 2 * lambdaS(d, ed) * lambda * sqrtFcShearPsi(fc) * psi;
+  w?.step('v_lim', 'phi * 2 * lambda_s * lambda * sqrt_fc', limit, 'psi', { vars: { phi: f, lambda }, code: true, clause: 'ACI 318-19 §8.6.1.2' });
+  w?.step('needed', 'vuv > v_lim', vuv > limit, '', { vars: { vuv: [vuv, 'psi'] }, clause: 'ACI 318-19 §8.6.1.2' });
+  return vuv > limit;
 }
 
 /** As,min = 5 vuv bslab bo / (φ αs fy) over the width bslab (ACI 318-19 Eq. 8.6.1.2) [from memory]. */
 export function asMinPunch(vuv: number, bslab: number, bo: number, fy: number, pos: Position, phi = 0.75): number {
-  return (5 * nonNegative('vuv', vuv) * positive('bslab', bslab) * positive('bo', bo)) /
+  const as = (5 * nonNegative('vuv', vuv) * positive('bslab', bslab) * positive('bo', bo)) /
     (phiFactor(phi) * alphaS(pos) * positive('fy', fy));
+  working()?.step('As_min', '5 * vuv * bslab * bo / (phi * alpha_s * fy)', as, 'in^2', {
+    vars: { vuv: [vuv, 'psi'], bslab: [bslab, 'in'], bo: [bo, 'in'], fy: [fy, 'psi'], phi }, clause: 'ACI 318-19 Eq. 8.6.1.2 [from memory]',
+  });
+  return as;
 }
 
-const props = (pick: (p: SectionProperties) => number) =>
-  (c1: number, c2: number, d: number, p: string) => pick(sectionProperties(c1, c2, d, position(p)));
+/** One property of the section, named again as the function's result. */
+const props = (key: keyof SectionProperties, symbol: string) =>
+  (c1: number, c2: number, d: number, p: string) => {
+    const v = sectionProperties(c1, c2, d, position(p))[key];
+    working()?.result(symbol, symbol, v, key === 'jc' ? 'in^4' : 'in');
+    return v;
+  };
 
 const phiParam: LibParam = { name: 'phi', type: '1', doc: 'shear strength reduction factor (default 0.75)' };
 const R8 = 'ACI 318-19 R8.4.4.2.3 (interior; edge and corner by the same sum over the sides)';
@@ -92,17 +132,17 @@ export const functions: LibFunction[] = [
   defineFunction({
     name: 'jc_punch', params: geometryParams, returns: 'm^4', clause: R8,
     doc: 'Polar-moment-like property Jc of the critical section, about the axis parallel to the edge',
-    fn: props((p) => p.jc),
+    fn: props('jc', 'J_c'),
   }),
   defineFunction({
     name: 'c_ab_punch', params: geometryParams, returns: 'm', clause: R8,
     doc: 'Distance from the centroid of the critical section to its inner face AB',
-    fn: props((p) => p.cAB),
+    fn: props('cAB', 'c_AB'),
   }),
   defineFunction({
     name: 'c_cd_punch', params: geometryParams, returns: 'm', clause: R8,
     doc: 'Distance from the centroid of the critical section to its outer face CD',
-    fn: props((p) => p.cCD),
+    fn: props('cCD', 'c_CD'),
   }),
   defineFunction({
     name: 'vu_punch_moment',

@@ -7,6 +7,7 @@
 
 import { defineFunction, type LibFunction } from './types';
 import { EDITIONS, edition, nonNegative, positive, type Edition } from './support-args';
+import { working } from '../working/recorder';
 
 export interface OpeningLoss {
   applies: boolean;
@@ -32,6 +33,17 @@ export function openingLoss(
   const applies = width > 0 && (inColumnStrip || clear < reach);
   const spread = (width * (a + dd)) / (a + 2 * clear);
   const loss = applies ? Math.min(spread, b + dd) : 0;
+  const rec = working();
+  if (rec) {
+    const vars = { c1: [a, 'in'], c2: [b, 'in'], d: [dd, 'in'], w: [width, 'in'], x: [clear, 'in'], h: [h, 'in'] } as const;
+    const clause = 'ACI 318-19 §22.6.4.3 [from memory]';
+    rec.step('reach', `${ed === '318-19' ? 4 : 10} * h`, reach, 'in', { vars, clause: `ACI ${ed} §22.6.4.3 [from memory]` });
+    rec.step('applies', undefined, applies, '', {
+      clause, note: width === 0 ? 'no opening' : inColumnStrip ? 'the opening lies within a column strip' : clear < reach ? 'closer than the reach' : 'beyond the reach and outside the column strip',
+    });
+    rec.step('spread', 'w * (c1 + d) / (c1 + 2 * x)', spread, 'in', { vars, clause, note: 'tangents from the column centroid' });
+    rec.step('bo_loss', applies ? 'min(spread, c2 + d)' : '0', loss, 'in', { vars, clause });
+  }
   return { applies, spread, loss };
 }
 

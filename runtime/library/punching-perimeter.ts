@@ -6,6 +6,7 @@
 
 import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
 import { choice, positive } from './support-args';
+import { ended, working } from '../working/recorder';
 
 export const POSITIONS = ['interior', 'edge', 'corner'] as const;
 export type Position = (typeof POSITIONS)[number];
@@ -28,6 +29,25 @@ export function criticalSection(c1: number, c2: number, d: number, pos: Position
   positive('c1', c1);
   positive('c2', c2);
   positive('d', d);
+  const s = sectionOf(c1, c2, d, pos);
+  const w = working();
+  if (w) {
+    const [e1, e2] = SIDE_TEX[pos];
+    const clause = 'ACI 318-19 §22.6.4.1';
+    w.step('b1', e1, s.b1, 'in', { vars: { c1: [c1, 'in'], d: [d, 'in'] }, clause, note: `${pos} column` });
+    w.step('b2', e2, s.b2, 'in', { vars: { c2: [c2, 'in'], d: [d, 'in'] }, clause });
+  }
+  return s;
+}
+
+/** The sides as the hand calc writes them, by position. */
+const SIDE_TEX: Record<Position, [string, string]> = {
+  interior: ['c1 + d', 'c2 + d'],
+  edge: ['c1 + d / 2', 'c2 + d'],
+  corner: ['c1 + d / 2', 'c2 + d / 2'],
+};
+
+function sectionOf(c1: number, c2: number, d: number, pos: Position): CriticalSection {
   switch (pos) {
     case 'interior':
       return { b1: c1 + d, b2: c2 + d, n1: 2, n2: 2 };
@@ -42,14 +62,20 @@ export function criticalSection(c1: number, c2: number, d: number, pos: Position
 
 /** Perimeter bo of the critical section (ACI 318-19 §22.6.4.1). */
 export function boPunch(c1: number, c2: number, d: number, pos: Position): number {
+  const w = working()?.open('bo_punch', { c1: [c1, 'in'], c2: [c2, 'in'], d: [d, 'in'], position: pos }, 'ACI 318-19 §22.6.4.1');
   const s = criticalSection(c1, c2, d, pos);
-  return s.n1 * s.b1 + s.n2 * s.b2;
+  const bo = s.n1 * s.b1 + s.n2 * s.b2;
+  w?.step('bo', `${s.n1 === 1 ? '' : s.n1 + ' * '}b1 + ${s.n2 === 1 ? '' : s.n2 + ' * '}b2`, bo, 'in', { clause: 'ACI 318-19 §22.6.4.1' });
+  return ended(w, bo, 'in');
 }
 
 /** Plan area enclosed by the critical section, whose load does not load the section (ACI 318-19 §22.6.4.1). */
 export function areaInsidePunch(c1: number, c2: number, d: number, pos: Position): number {
+  const w = working()?.open('a_inside_punch', { c1: [c1, 'in'], c2: [c2, 'in'], d: [d, 'in'], position: pos }, 'ACI 318-19 §22.6.4.1');
   const s = criticalSection(c1, c2, d, pos);
-  return s.b1 * s.b2;
+  const a = s.b1 * s.b2;
+  w?.step('A_inside', 'b1 * b2', a, 'ft^2', { clause: 'ACI 318-19 §22.6.4.1' });
+  return ended(w, a, 'ft^2');
 }
 
 /** Geometry params shared by every punching function. */
@@ -59,6 +85,12 @@ export const geometryParams: LibParam[] = [
   { name: 'd', type: 'm', doc: 'effective depth of the slab' },
   { name: 'position', type: 'text', choices: POSITIONS, doc: "'interior', 'edge' or 'corner'" },
 ];
+
+/** The side asked for, named again as the function's result. */
+function side(v: number, name: 'b1' | 'b2'): number {
+  working()?.result(name, name, v, 'in');
+  return v;
+}
 
 const geo = (f: (c1: number, c2: number, d: number, p: Position) => number) =>
   (c1: number, c2: number, d: number, p: string) => f(c1, c2, d, position(p));
@@ -78,7 +110,7 @@ export const functions: LibFunction[] = [
     returns: 'm',
     clause: 'ACI 318-19 §8.4.2.2.2 (b1: critical section side in the direction of the span)',
     doc: 'Critical section side perpendicular to the edge: c1 + d (interior) or c1 + d/2 (edge, corner)',
-    fn: geo((c1, c2, d, p) => criticalSection(c1, c2, d, p).b1),
+    fn: geo((c1, c2, d, p) => side(criticalSection(c1, c2, d, p).b1, 'b1')),
   }),
   defineFunction({
     name: 'b2_punch',
@@ -86,7 +118,7 @@ export const functions: LibFunction[] = [
     returns: 'm',
     clause: 'ACI 318-19 §8.4.2.2.2 (b2: critical section side perpendicular to b1)',
     doc: 'Critical section side parallel to the edge: c2 + d (interior, edge) or c2 + d/2 (corner)',
-    fn: geo((c1, c2, d, p) => criticalSection(c1, c2, d, p).b2),
+    fn: geo((c1, c2, d, p) => side(criticalSection(c1, c2, d, p).b2, 'b2')),
   }),
   defineFunction({
     name: 'a_inside_punch',

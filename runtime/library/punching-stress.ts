@@ -7,10 +7,13 @@ import { EDITIONS, edition, lambdaFactor, nonNegative, optional, phiFactor, type
 import { POSITIONS, boPunch, areaInsidePunch, geometryParams, position, type Position } from './punching-perimeter';
 import { lambdaS, neglectLs, sqrtFcShearPsi, NEGLECT_LS_CLAUSE, NEGLECT_LS_PARAM } from './shear-size-effect';
 import { psi } from '../units/si';
+import { ended, working, type Recorder } from '../working/recorder';
 
 /** αs: 40 interior, 30 edge, 20 corner columns (ACI 318-19 Table 22.6.5.2). */
 export function alphaS(pos: Position): number {
-  return pos === 'interior' ? 40 : pos === 'edge' ? 30 : 20;
+  const a = pos === 'interior' ? 40 : pos === 'edge' ? 30 : 20;
+  working()?.lookup('alpha_s', a, '', `${pos} column`, 'ACI 318-19 Table 22.6.5.2');
+  return a;
 }
 
 export interface PunchingStrength {
@@ -31,14 +34,18 @@ export function punchingStrength(
   fc: number, c1: number, c2: number, d: number, pos: Position,
   lambda = 1, ed: Edition = '318-19', neglectSizeEffect = false,
 ): PunchingStrength {
+  const w = working()?.open('vc_punch', {
+    fc: [fc, 'psi'], c1: [c1, 'in'], c2: [c2, 'in'], d: [d, 'in'], position: pos, lambda, edition: ed,
+  }, CLAUSE);
   const bo = boPunch(c1, c2, d, pos);
   const ls = lambdaS(d, ed, neglectSizeEffect);
   const root = sqrtFcShearPsi(fc);
   const beta = Math.max(c1, c2) / Math.min(c1, c2);
   const k = ls * lambda * root * psi;
+  const as = alphaS(pos);
   const a = 4 * k;
   const b = (2 + 4 / beta) * k;
-  const c = (2 + (alphaS(pos) * d) / bo) * k;
+  const c = (2 + (as * d) / bo) * k;
   const s = ed === '318-19' && !neglectSizeEffect ? 'λs·λ·√f\'c' : 'λ·√f\'c';
   const table = ed === '318-19' ? 'ACI 318-19 Table 22.6.5.2' : 'ACI 318-14 Table 22.6.5.2';
   const neglected = ed === '318-19' && neglectSizeEffect ? ', λs neglected (§13.2.6.2)' : '';
@@ -52,6 +59,18 @@ export function punchingStrength(
     vc = c;
     governs = `${table}(c) (2 + αs·d/bo)${s}, αs = ${alphaS(pos)}`;
   }
+  if (w) {
+    const clause = `${table}`;
+    const least = vc === a ? 'a' : vc === b ? 'b' : 'c';
+    w.step('beta', 'max(c1, c2) / min(c1, c2)', beta, '', { clause: 'ACI 318-19 §22.6.5.2' });
+    w.step('vc_a', '4 * lambda_s * lambda * sqrt_fc', a, 'psi', { code: true, clause: `${clause}(a)`, governs: least === 'a' });
+    w.step('vc_b', '(2 + 4 / beta) * lambda_s * lambda * sqrt_fc', b, 'psi', { code: true, clause: `${clause}(b)`, governs: least === 'b' });
+    w.step('vc_c', '(2 + alpha_s * d / bo) * lambda_s * lambda * sqrt_fc', c, 'psi', {
+      code: true, clause: `${clause}(c)`, governs: least === 'c', vars: { d: [d, 'in'], bo: [bo, 'in'] },
+    });
+    w.step('vc', 'min(vc_a, vc_b, vc_c)', vc, 'psi', { clause, note: `expression (${least}) governs${neglected}` });
+  }
+  w?.end(vc, 'psi');
   return { a, b, c, vc, governs: governs + neglected, lambdaS: ls, beta, bo };
 }
 
@@ -59,12 +78,23 @@ export function punchingStrength(
 export function vuPunch(reaction: number, qu: number, c1: number, c2: number, d: number, pos: Position): number {
   const r = nonNegative('Vu (column reaction)', reaction);
   const q = nonNegative('qu', qu);
-  return Math.max(0, r - q * areaInsidePunch(c1, c2, d, pos));
+  const w = working()?.open('vu_punch', { R: [r, 'kip'], qu: [q, 'psf'], c1: [c1, 'in'], c2: [c2, 'in'], d: [d, 'in'], position: pos }, VU_CLAUSE);
+  const inside = areaInsidePunch(c1, c2, d, pos);
+  const vu = Math.max(0, r - q * inside);
+  w?.step('Vu', 'max(0, R - qu * A_inside)', vu, 'kip', { clause: VU_CLAUSE, note: 'the load inside the critical section is subtracted' });
+  return ended(w, vu, 'kip');
 }
+
+const VU_CLAUSE = 'ACI 318-19 §22.6.4.1: Vu = reaction − qu × area inside the critical section';
 
 /** Factored shear stress vu = Vu / (bo d) on the critical section (ACI 318-19 §22.6.1.2). */
 export function vuPunchStress(reaction: number, qu: number, c1: number, c2: number, d: number, pos: Position): number {
-  return vuPunch(reaction, qu, c1, c2, d, pos) / (boPunch(c1, c2, d, pos) * d);
+  const w = working()?.open('vu_punch_stress', { R: [reaction, 'kip'], qu: [qu, 'psf'], c1: [c1, 'in'], c2: [c2, 'in'], d: [d, 'in'], position: pos }, 'ACI 318-19 §22.6.1.2');
+  const Vu = vuPunch(reaction, qu, c1, c2, d, pos);
+  const bo = boPunch(c1, c2, d, pos);
+  const vu = Vu / (bo * d);
+  w?.step('v_u', 'Vu / (bo * d)', vu, 'psi', { clause: 'ACI 318-19 §22.6.1.2' });
+  return ended(w, vu, 'psi');
 }
 
 export const strengthParams: LibParam[] = [
@@ -75,9 +105,18 @@ export const strengthParams: LibParam[] = [
   NEGLECT_LS_PARAM,
 ];
 
-const strength = (pick: (s: PunchingStrength, d: number) => number | string) =>
-  (fc: number, c1: number, c2: number, d: number, p: string, lambda?: number, ed?: string, n?: boolean) =>
-    pick(punchingStrength(fc, c1, c2, d, position(p), optional(lambda, 1, lambdaFactor), edition(ed), neglectLs(n)), d);
+/** A function over the strength: `pick` takes one result (and names it in the working when it is not vc). */
+const strength = (pick: (s: PunchingStrength, d: number, w: Recorder | undefined) => number | string) =>
+  (fc: number, c1: number, c2: number, d: number, p: string, lambda?: number, ed?: string, n?: boolean) => {
+    const w = working();
+    return pick(punchingStrength(fc, c1, c2, d, position(p), optional(lambda, 1, lambdaFactor), edition(ed), neglectLs(n)), d, w);
+  };
+
+/** One of the three expressions, named as the function's result. */
+const expression = (which: 'a' | 'b' | 'c') => strength((s, _d, w) => {
+  w?.result(`vc_${which}`, `vc_${which}`, s[which], 'psi');
+  return s[which];
+});
 
 const CLAUSE = `ACI 318-19 §22.6.5.2, Table 22.6.5.2 (√f'c ≤ 100 psi, §22.6.3.1; 318-14: no λs); ${NEGLECT_LS_CLAUSE}`;
 
@@ -92,8 +131,15 @@ export function punchRatio(
   reaction: number, qu: number, fc: number, c1: number, c2: number, d: number, pos: Position,
   phi = 0.75, lambda = 1, ed: Edition = '318-19',
 ): number {
+  const f = phiFactor(phi);
+  const w = working()?.open('punch_ratio', {
+    Vu: [reaction, 'kip'], qu: [qu, 'psf'], fc: [fc, 'psi'], c1: [c1, 'in'], c2: [c2, 'in'], d: [d, 'in'], position: pos, phi: f, lambda, edition: ed,
+  }, CLAUSE);
   const vu = vuPunchStress(reaction, qu, c1, c2, d, pos);
-  return vu / (phiFactor(phi) * punchingStrength(fc, c1, c2, d, pos, lambda, ed).vc);
+  const vc = punchingStrength(fc, c1, c2, d, pos, lambda, ed).vc;
+  const ratio = vu / (f * vc);
+  w?.step('ratio', 'v_u / (phi * vc)', ratio, '', { clause: 'ACI 318-19 §22.6.1.2; φ = 0.75, Table 21.2.1' });
+  return ended(w, ratio);
 }
 
 export const functions: LibFunction[] = [
@@ -121,7 +167,10 @@ export const functions: LibFunction[] = [
     returns: 'text',
     clause: CLAUSE,
     doc: 'Which expression of Table 22.6.5.2 governs vc, as text for the hand calc',
-    fn: strength((s) => s.governs),
+    fn: strength((s, _d, w) => {
+      w?.step('governs', undefined, s.governs, '', { note: 'the least of the three expressions' });
+      return s.governs;
+    }),
   }),
   defineFunction({
     name: 'vc_punch_a',
@@ -130,7 +179,7 @@ export const functions: LibFunction[] = [
     returns: 'Pa',
     clause: "ACI 318-19 Table 22.6.5.2(a): 4λsλ√f'c",
     doc: 'Two-way shear expression (a)',
-    fn: strength((s) => s.a),
+    fn: expression('a'),
   }),
   defineFunction({
     name: 'vc_punch_b',
@@ -139,7 +188,7 @@ export const functions: LibFunction[] = [
     returns: 'Pa',
     clause: "ACI 318-19 Table 22.6.5.2(b): (2 + 4/β)λsλ√f'c",
     doc: 'Two-way shear expression (b), β = long/short side of the column',
-    fn: strength((s) => s.b),
+    fn: expression('b'),
   }),
   defineFunction({
     name: 'vc_punch_c',
@@ -148,7 +197,7 @@ export const functions: LibFunction[] = [
     returns: 'Pa',
     clause: "ACI 318-19 Table 22.6.5.2(c): (2 + αs d/bo)λsλ√f'c",
     doc: 'Two-way shear expression (c), αs = 40/30/20',
-    fn: strength((s) => s.c),
+    fn: expression('c'),
   }),
   defineFunction({
     name: 'vn_punch',
@@ -157,7 +206,11 @@ export const functions: LibFunction[] = [
     returns: 'N',
     clause: CLAUSE + '; Vc = vc·bo·d',
     doc: 'Nominal two-way shear force capacity without shear reinforcement, vc·bo·d',
-    fn: strength((s, d) => s.vc * s.bo * d),
+    fn: strength((s, d, w) => {
+      const Vc = s.vc * s.bo * d;
+      w?.step('Vc', 'vc * bo * d', Vc, 'kip', { vars: { d: [d, 'in'] }, clause: 'ACI 318-19 §22.6.1.2' });
+      return Vc;
+    }),
   }),
   defineFunction({
     name: 'vu_punch',

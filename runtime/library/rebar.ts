@@ -7,6 +7,7 @@
 
 import { defineFunction, LibraryError, type LibFunction } from './types';
 import { inch, ft, lbf, mm } from '../units/si';
+import { working } from '../working/recorder';
 
 export interface BarData {
   dia: number; // m
@@ -65,17 +66,28 @@ export function barData(bar: string): BarData {
 
 /** ASTM A615 / A615M / ISO 6935-2 nominal area of one bar. */
 export function barArea(bar: string): number {
-  return barData(bar).area;
+  const a = barData(bar).area;
+  working()?.lookup('A_b', a, 'in^2', `${bar} bar`, sourceOf(bar));
+  return a;
 }
 
 /** ASTM A615 / A615M / ISO 6935-2 nominal diameter. */
 export function barDia(bar: string): number {
-  return barData(bar).dia;
+  const d = barData(bar).dia;
+  working()?.lookup('d_b', d, 'in', `${bar} bar`, sourceOf(bar));
+  return d;
 }
 
 /** ASTM A615 / A615M nominal mass per metre (ISO bars: 7850 kg/m³ × area). */
 export function barMass(bar: string): number {
-  return barData(bar).mass;
+  const m = barData(bar).mass;
+  working()?.lookup('m_b', m, 'kg/m', `${bar} bar`, sourceOf(bar));
+  return m;
+}
+
+/** The table a bar's row comes from. */
+function sourceOf(bar: string): string {
+  return bar.startsWith('D') ? 'ISO 6935-2 (πd²/4, 7850 kg/m³)' : bar.endsWith('M') ? 'ASTM A615M' : 'ASTM A615';
 }
 
 const BAR = { name: 'bar', type: 'text', choices: BARS, doc: 'bar designation: "#5", "#16M" or "D16"' };

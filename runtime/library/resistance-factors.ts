@@ -6,6 +6,7 @@
 import { defineFunction, type LibFunction } from './types';
 import { choice, edition, num, positive, type Edition, EDITIONS } from './gravity-args';
 import { psi } from '../units/si';
+import { working } from '../working/recorder';
 
 /** ACI 318-19 §20.2.2.2: Es = 29,000,000 psi for nonprestressed bars. */
 export const ES = 29e6 * psi;
@@ -28,18 +29,29 @@ export type Transverse = (typeof TRANSVERSE)[number];
 
 /** ACI 318-19 Table 21.2.1: φ for an action. */
 export function phiAction(action: Action): number {
-  return PHI_TABLE[choice('action', action, ACTIONS)];
+  const a = choice('action', action, ACTIONS);
+  const phi = PHI_TABLE[a];
+  working()?.lookup('phi', phi, '', `row: ${a.replace(/-/g, ' ')}`, 'ACI 318-19 Table 21.2.1');
+  return phi;
 }
 
 /** ACI 318-19 §21.2.2.1: yield strain εty = fy/Es. */
 export function epsTy(fy: number): number {
-  return positive('fy', fy) / ES;
+  const e = positive('fy', fy) / ES;
+  working()?.step('eps_ty', 'fy / Es', e, '', { vars: { fy: [fy, 'psi'], Es: [ES, 'psi'] }, clause: 'ACI 318-19 §21.2.2.1, §20.2.2.2' });
+  return e;
 }
 
 /** ACI 318-19 Table 21.2.2: tension-controlled strain limit, εty + 0.003 (318-14: 0.005). */
 export function epsTc(fy: number, ed: Edition = '318-19'): number {
   const e = edition(ed);
-  return e === '318-19' ? epsTy(fy) + 0.003 : 0.005;
+  if (e === '318-19') {
+    const tc = epsTy(fy) + 0.003;
+    working()?.step('eps_tc', 'eps_ty + 0.003', tc, '', { clause: 'ACI 318-19 Table 21.2.2' });
+    return tc;
+  }
+  working()?.lookup('eps_tc', 0.005, '', 'tension-controlled limit of ACI 318-14', 'ACI 318-14 Table 21.2.2');
+  return 0.005;
 }
 
 /** ACI 318-19 Table 21.2.2: φ for moment/axial force from εt, linear between εty and the tension-controlled limit. */
@@ -49,9 +61,21 @@ export function phiEpsT(epsT: number, fy: number, transverse: Transverse = 'othe
   const ety = epsTy(fy);
   const etc = epsTc(fy, edition(ed));
   const low = tr === 'spiral' ? 0.75 : 0.65;
-  if (et <= ety) return low;
-  if (et >= etc) return 0.9;
-  return low + ((0.9 - low) * (et - ety)) / (etc - ety);
+  const w = working();
+  const clause = 'ACI 318-19 Table 21.2.2';
+  if (et <= ety || et >= etc) {
+    const phi = et <= ety ? low : 0.9;
+    w?.step(et <= ety ? 'compression_controlled' : 'tension_controlled', et <= ety ? 'eps_t <= eps_ty' : 'eps_t >= eps_tc', true, '', {
+      vars: { eps_t: et, eps_ty: ety, eps_tc: etc }, clause,
+    });
+    w?.lookup('phi', phi, '', et <= ety ? `compression-controlled (${tr === 'spiral' ? 'spiral' : 'other'})` : 'tension-controlled', clause);
+    return phi;
+  }
+  const phi = low + ((0.9 - low) * (et - ety)) / (etc - ety);
+  w?.step('phi', `${low} + (0.9 - ${low}) * (eps_t - eps_ty) / (eps_tc - eps_ty)`, phi, '', {
+    vars: { eps_t: et, eps_ty: ety, eps_tc: etc }, clause, note: 'transition: εty < εt < εt,tc',
+  });
+  return phi;
 }
 
 const FY = { name: 'fy', type: 'Pa', doc: 'specified yield strength of the reinforcement' };

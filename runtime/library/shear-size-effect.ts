@@ -4,10 +4,18 @@
 import { defineFunction, LibraryError, type LibFunction } from './types';
 import { edition, positive, type Edition, EDITIONS } from './support-args';
 import { inch, psi } from '../units/si';
+import { working } from '../working/recorder';
 
 /** √f'c in psi, capped at 100 psi for shear (ACI 318-19 §22.5.3.1, §22.6.3.1). */
 export function sqrtFcShearPsi(fc: number): number {
-  return Math.min(Math.sqrt(positive("f'c", fc) / psi), 100);
+  const f = positive("f'c", fc) / psi;
+  const root = Math.min(Math.sqrt(f), 100);
+  const capped = Math.sqrt(f) > 100;
+  working()?.step('sqrt_fc', 'min(sqrt(fc), 100)', root * psi, 'psi', {
+    vars: { fc: [fc, 'psi'] }, code: true, clause: 'ACI 318-19 §22.5.3.1, §22.6.3.1',
+    governs: capped, note: capped ? "√f′c capped at 100 psi (f′c above 10,000 psi)" : undefined,
+  });
+  return root;
 }
 
 /**
@@ -17,8 +25,20 @@ export function sqrtFcShearPsi(fc: number): number {
  */
 export function lambdaS(d: number, ed: Edition = '318-19', neglected = false): number {
   const dIn = positive('d', d) / inch;
-  if (ed === '318-14' || neglected) return 1;
-  return Math.min(1, Math.sqrt(2 / (1 + dIn / 10)));
+  const w = working();
+  if (ed === '318-14' || neglected) {
+    w?.step('lambda_s', '1', 1, '', {
+      note: ed === '318-14' ? 'ACI 318-14 has no size effect' : 'λs neglected, as §13.2.6.2 permits for footings and mats',
+      clause: ed === '318-14' ? 'ACI 318-14 §22.6.5.2' : 'ACI 318-19 §13.2.6.2',
+    });
+    return 1;
+  }
+  const ls = Math.min(1, Math.sqrt(2 / (1 + dIn / 10)));
+  w?.step('lambda_s', 'min(1, sqrt(2 / (1 + d / 10)))', ls, '', {
+    vars: { d: [d, 'in'] }, code: true, clause: 'ACI 318-19 §22.5.5.1.3',
+    note: ls === 1 ? 'd ≤ 10 in: no size effect' : undefined,
+  });
+  return ls;
 }
 
 /** The optional §13.2.6.2 switch, shared by the shear functions. */

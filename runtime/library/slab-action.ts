@@ -6,6 +6,7 @@
 
 import { defineFunction, type LibFunction } from './types';
 import { choice, positive } from './gravity-args';
+import { working } from '../working/recorder';
 
 export const SUPPORTS = ['four-sides', 'columns', 'two-opposite-sides', 'one-side'] as const;
 export type Supports = (typeof SUPPORTS)[number];
@@ -18,6 +19,12 @@ function classify(la: number, lb: number, supports: Supports): Verdict {
   const a = positive('l_a', la);
   const b = positive('l_b', lb);
   const sup = choice('supports', supports, SUPPORTS);
+  const w = working();
+  if (w && (sup === 'four-sides' || sup === 'columns')) {
+    w.step('ratio', 'max(l_a, l_b) / min(l_a, l_b)', Math.max(a, b) / Math.min(a, b), '', {
+      vars: { l_a: [a, 'ft'], l_b: [b, 'ft'] }, clause: CLAUSE,
+    });
+  }
   if (sup === 'two-opposite-sides') {
     return { action: 'one-way', reason: 'supported on two opposite sides only: one-way, spanning between the supports' };
   }
@@ -35,12 +42,16 @@ function classify(la: number, lb: number, supports: Supports): Verdict {
 
 /** 'one-way' or 'two-way' by panel proportions and supports (convention; ACI 318-19 §8.10.2.3 ratio). */
 export function slabAction(la: number, lb: number, supports: Supports): SlabAction {
-  return classify(la, lb, supports).action;
+  const v = classify(la, lb, supports);
+  working()?.step('action', undefined, v.action, '', { note: v.reason, clause: CLAUSE });
+  return v.action;
 }
 
 /** The reason for slabAction, as a line for the hand calc. */
 export function slabActionReason(la: number, lb: number, supports: Supports): string {
-  return classify(la, lb, supports).reason;
+  const v = classify(la, lb, supports);
+  working()?.step('reason', undefined, v.reason, '', { clause: CLAUSE });
+  return v.reason;
 }
 
 const PARAMS = [

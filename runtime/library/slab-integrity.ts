@@ -10,10 +10,14 @@ import { EDITIONS, edition, finite, lambdaFactor, nonNegative, optional, positiv
 import { ldStraight } from './footing-development';
 import { barData, BARS } from './rebar';
 import { inch } from '../units/si';
+import { working } from '../working/recorder';
 
 /** Tie size: No. 3 around longitudinal bars No. 10 and smaller, No. 4 around larger (ACI 318-19 §25.7.2.2) [from memory]. */
 export function tieDia(dbLongitudinal: number): number {
-  return (positive('db', dbLongitudinal) / inch <= 1.27 + 1e-9 ? 0.375 : 0.5) * inch;
+  const small = positive('db', dbLongitudinal) / inch <= 1.27 + 1e-9;
+  const d = (small ? 0.375 : 0.5) * inch;
+  working()?.lookup('d_tie', d, 'in', small ? 'No. 3 ties around bars No. 10 and smaller' : 'No. 4 ties around larger bars', 'ACI 318-19 §25.7.2.2 [from memory]');
+  return d;
 }
 
 export interface ColumnCore {
@@ -28,12 +32,17 @@ export function columnCore(c: number, barCol: string, cover = 1.5 * inch): Colum
   const tie = tieDia(db);
   const width = side - 2 * (nonNegative('cover', cover) + tie) - db;
   if (width <= 0) throw new LibraryError('the column is too small for its cover, ties and bars');
+  working()?.step('b_core', 'c - 2 * (cover + d_tie) - d_b', width, 'in', {
+    vars: { c: [side, 'in'], cover: [cover, 'in'], d_b: [db, 'in'] }, clause: 'ACI 318-19 §8.7.4.2.2 (geometry) [from memory]',
+  });
   return { tie, width };
 }
 
 /** The fewest bars at spacing s that lie within a width w, wherever the bar grid falls: ⌊w/s⌋ (geometry). */
 export function barsWithin(w: number, s: number): number {
-  return Math.floor(nonNegative('w', w) / positive('s', s) + 1e-9);
+  const n = Math.floor(nonNegative('w', w) / positive('s', s) + 1e-9);
+  working()?.step('n', 'floor(w / s)', n, '', { vars: { w: [w, 'in'], s: [s, 'in'] }, clause: 'geometry' });
+  return n;
 }
 
 export const TOP_BARS = ['column-strip-short', 'column-strip-long', 'middle-strip'] as const;
@@ -47,7 +56,11 @@ export type TopBars = (typeof TOP_BARS)[number];
 export function topBarExtension(ln: number, bars: TopBars, dropPanels = false): number {
   const span = positive('ln', ln);
   const factor = bars === 'column-strip-short' ? 0.2 : bars === 'middle-strip' ? 0.22 : dropPanels ? 0.33 : 0.3;
-  return factor * span;
+  const ext = factor * span;
+  working()?.step('l_ext', `${factor} * ln`, ext, 'ft', {
+    vars: { ln: [span, 'ft'] }, clause: 'ACI 318-19 Fig. 8.7.4.1.3 [from memory]', note: `${bars.replace(/-/g, ' ')}${dropPanels && bars === 'column-strip-long' ? ', drop panels' : ''}`,
+  });
+  return ext;
 }
 
 export interface TopBarDevelopment {
@@ -62,6 +75,7 @@ export interface TopBarDevelopment {
 export function topBarDevelopment(db: number, fy: number, fc: number, concreteBelow: number, spacingOk = true, lambda = 1, psie = 1, ed: Edition = '318-19'): TopBarDevelopment {
   const below = nonNegative('concrete below', concreteBelow);
   const psiT = below > 12 * inch + 1e-12 ? 1.3 : 1.0;
+  working()?.lookup('psi_t', psiT, '', psiT > 1 ? 'more than 12 in of fresh concrete below the bars' : '12 in or less of fresh concrete below', 'ACI 318-19 Table 25.4.2.5 [from memory]');
   const ld = ldStraight(db, fy, fc, spacingOk, lambda, psie, ed, psiT);
   return { psiT, ld };
 }

@@ -4,6 +4,7 @@
 
 import { LibraryError, defineFunction, type LibFunction } from './types';
 import { nonNegative, positive } from './support-args';
+import { working } from '../working/recorder';
 
 export interface SlabBeamShear {
   arm: number; // ℓn/2 − d, m
@@ -21,6 +22,10 @@ export function slabBeamShear(qu: number, l2: number, ln: number, d: number): Sl
   const arm = half - positive('d', d);
   if (arm <= 0) throw new LibraryError('the section at d from the face lies beyond midspan: ℓn/2 ≤ d');
   const vu = q * width * arm;
+  working()?.step('Vu', 'qu * l2 * (ln / 2 - d)', vu, 'kip', {
+    vars: { qu: [q, 'psf'], l2: [width, 'ft'], ln: [half * 2, 'ft'], d: [d, 'in'] },
+    clause: 'ACI 318-19 §8.5.3.1.1, §8.4.3.2 [from memory]', note: 'the load on half the clear span less the strip within d of the face',
+  });
   return { arm, vu };
 }
 

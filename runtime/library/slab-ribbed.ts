@@ -6,6 +6,7 @@
 
 import { defineFunction, LibraryError, type LibFunction } from './types';
 import { positive, show } from './gravity-args';
+import { working } from '../working/recorder';
 
 interface Rib { h: number; hf: number; bw: number; s: number }
 
@@ -19,12 +20,21 @@ function rib(h: number, hf: number, bw: number, s: number): Rib {
 /** Equivalent solid thickness by volume: (s·hf + bw·(h − hf))/s (geometry). */
 export function ribHEq(h: number, hf: number, bw: number, s: number): number {
   const r = rib(h, hf, bw, s);
-  return (r.s * r.hf + r.bw * (r.h - r.hf)) / r.s;
+  const heq = (r.s * r.hf + r.bw * (r.h - r.hf)) / r.s;
+  working()?.step('h_eq', '(s * hf + bw * (h - hf)) / s', heq, 'in', { vars: ribVars(r), clause: 'geometry (common practice)' });
+  return heq;
+}
+
+/** The rib's sizes as the working shows them. */
+function ribVars(r: Rib) {
+  return { h: [r.h, 'in'], hf: [r.hf, 'in'], bw: [r.bw, 'in'], s: [r.s, 'in'] } as const;
 }
 
 /** Fraction of the self-weight saved against a solid slab of the same depth: 1 − h_eq/h. */
 export function ribSaving(h: number, hf: number, bw: number, s: number): number {
-  return 1 - ribHEq(h, hf, bw, s) / positive('h', h);
+  const saving = 1 - ribHEq(h, hf, bw, s) / positive('h', h);
+  working()?.step('saving', '1 - h_eq / h', saving, '', { vars: { h: [h, 'in'] } });
+  return saving;
 }
 
 /** Gross moment of inertia of one T-section rib (flange width s) about its centroid (parallel-axis theorem). */
@@ -36,17 +46,28 @@ export function ribI(h: number, hf: number, bw: number, s: number): number {
   const yF = r.hf / 2; // from the top
   const yW = r.hf + web / 2;
   const y = (aF * yF + aW * yW) / (aF + aW);
-  return (r.s * r.hf ** 3) / 12 + aF * (y - yF) ** 2 + (r.bw * web ** 3) / 12 + aW * (y - yW) ** 2;
+  const I = (r.s * r.hf ** 3) / 12 + aF * (y - yF) ** 2 + (r.bw * web ** 3) / 12 + aW * (y - yW) ** 2;
+  const w = working();
+  if (w) {
+    const clause = 'parallel-axis theorem (common practice)';
+    w.step('y_bar', '(s * hf * hf / 2 + bw * (h - hf) * (hf + (h - hf) / 2)) / (s * hf + bw * (h - hf))', y, 'in', { vars: ribVars(r), clause, note: 'centroid from the top' });
+    w.step('I_rib', 's * hf^3 / 12 + s * hf * (y_bar - hf / 2)^2 + bw * (h - hf)^3 / 12 + bw * (h - hf) * (y_bar - (hf + (h - hf) / 2))^2', I, 'in^4', { vars: ribVars(r), clause });
+  }
+  return I;
 }
 
 /** Share of the solid slab's moment of inertia kept by the ribbed slab: I_rib / (s h³/12). */
 export function ribIRatio(h: number, hf: number, bw: number, s: number): number {
-  return ribI(h, hf, bw, s) / ((s * h ** 3) / 12);
+  const ratio = ribI(h, hf, bw, s) / ((s * h ** 3) / 12);
+  working()?.step('I_ratio', 'I_rib / (s * h^3 / 12)', ratio, '', { vars: { s: [s, 'in'], h: [h, 'in'] } });
+  return ratio;
 }
 
 /** Solid thickness with the same moment of inertia per unit width: (12 I_rib / s)^(1/3). */
 export function ribHStiff(h: number, hf: number, bw: number, s: number): number {
-  return Math.cbrt((12 * ribI(h, hf, bw, s)) / s);
+  const hs = Math.cbrt((12 * ribI(h, hf, bw, s)) / s);
+  working()?.step('h_stiff', 'cbrt(12 * I_rib / s)', hs, 'in', { vars: { s: [s, 'in'] } });
+  return hs;
 }
 
 const PARAMS = [

@@ -11,6 +11,7 @@ import { comboU1 } from './loads-combinations';
 import { asMinSlab } from './reinforcement-limits';
 import { phiMn } from './flexure';
 import { ONE_WAY_SUPPORTS, type OneWaySupport } from './slab-thickness';
+import { ended, working } from '../working/recorder';
 
 const MOMENT_COEF: Record<OneWaySupport, number> = { simple: 1 / 8, 'one-end': 1 / 8, 'both-ends': 1 / 12, cantilever: 1 / 2 };
 
@@ -24,17 +25,26 @@ export function selfWeightRatio(
   const l = positive('span', span);
   const sup = choice('support', support, ONE_WAY_SUPPORTS);
   const w = positive('wc', wc);
+  const rec = working()?.open('self_weight_ratio', { h: [hh, 'in'], d: [dd, 'in'], span: [l, 'ft'], support: sup, fc: [fc, 'psi'], fy: [fy, 'psi'], wc: [w, 'pcf'] }, CLAUSE);
+  rec?.step('D', 'wc * h', w * hh, 'psf', { vars: { wc: [w, 'pcf'], h: [hh, 'in'] }, note: 'self-weight' });
   const qu = comboU1(w * hh); // N/m² = N/m on a 1 m strip
   const Mu = MOMENT_COEF[sup] * qu * l * l;
+  rec?.step('Mu', `${MOMENT_TEX[sup]} * U1 * span^2`, Mu, 'kip*ft/ft', { vars: { span: [l, 'ft'] }, note: `${sup.replace(/-/g, ' ')}, per unit width (common practice)` });
   const capacity = phiMn(asMinSlab(1, hh, fy, ed), 1, dd, fc, fy, ed);
-  return Mu / capacity;
+  const ratio = Mu / capacity;
+  rec?.step('ratio', 'Mu / phi_Mn', ratio, '', { clause: CLAUSE });
+  return ended(rec, ratio);
 }
+
+const MOMENT_TEX: Record<OneWaySupport, string> = { simple: '1 / 8', 'one-end': '1 / 8', 'both-ends': '1 / 12', cantilever: '1 / 2' };
 
 /** True when the strip with minimum steel carries its factored self-weight (ratio ≤ 1). */
 export function selfWeightOk(
   h: number, d: number, span: number, support: OneWaySupport, fc: number, fy: number, wc: number, ed: Edition = '318-19',
 ): boolean {
-  return selfWeightRatio(h, d, span, support, fc, fy, wc, ed) <= 1;
+  const r = selfWeightRatio(h, d, span, support, fc, fy, wc, ed);
+  working()?.step('ok', 'ratio <= 1', r <= 1, '', { vars: { ratio: r } });
+  return r <= 1;
 }
 
 const PARAMS = [

@@ -7,6 +7,7 @@
 import { defineFunction, LibraryError, type LibFunction } from './types';
 import { bool, choice, edition, positive, show, EDITIONS, type Edition } from './gravity-args';
 import { inch, pcf, psi } from '../units/si';
+import { working } from '../working/recorder';
 
 export const ONE_WAY_SUPPORTS = ['simple', 'one-end', 'both-ends', 'cantilever'] as const;
 export type OneWaySupport = (typeof ONE_WAY_SUPPORTS)[number];
@@ -14,15 +15,24 @@ const ONE_WAY_DIVISOR: Record<OneWaySupport, number> = { simple: 20, 'one-end': 
 
 /** ACI 318-19 §7.3.1.1.1: fy modifier 0.4 + fy/100,000 (psi). */
 export function fyFactor(fy: number): number {
-  return 0.4 + positive('fy', fy) / psi / 100000;
+  const k = 0.4 + positive('fy', fy) / psi / 100000;
+  working()?.step('k_fy', '0.4 + fy / 100000', k, '', { vars: { fy: [fy, 'psi'] }, code: true, clause: 'ACI 318-19 §7.3.1.1.1' });
+  return k;
 }
 
 /** ACI 318-19 §7.3.1.1.2: lightweight modifier (1.65 − 0.005wc) ≥ 1.09 for wc 90-115 pcf; 1.0 above 115 pcf. */
 export function lightweightFactor(wc: number): number {
   const w = positive('wc', wc) / pcf;
   if (w < 90 - 1e-9) throw new LibraryError(`h_min_one_way: wc = ${show(w)} pcf is below the 90 pcf the table covers`);
-  if (w > 115 * (1 + 1e-9)) return 1;
-  return Math.max(1.65 - 0.005 * w, 1.09);
+  const rec = working();
+  const clause = 'ACI 318-19 §7.3.1.1.2';
+  if (w > 115 * (1 + 1e-9)) {
+    rec?.lookup('k_w', 1, '', 'wc > 115 pcf', clause);
+    return 1;
+  }
+  const k = Math.max(1.65 - 0.005 * w, 1.09);
+  rec?.step('k_w', 'max(1.65 - 0.005 * wc, 1.09)', k, '', { vars: { wc: [wc, 'pcf'] }, code: true, clause });
+  return k;
 }
 
 /** ACI 318-19 Table 7.3.1.1: one-way slab h ≥ ℓ/20, ℓ/24, ℓ/28, ℓ/10, times the fy and lightweight modifiers. */
@@ -30,7 +40,12 @@ export function hMinOneWay(l: number, support: OneWaySupport, fy = 60000 * psi, 
   const span = positive('l', l);
   const sup = choice('support', support, ONE_WAY_SUPPORTS);
   const lw = wc === undefined ? 1 : lightweightFactor(wc);
-  return (span / ONE_WAY_DIVISOR[sup]) * fyFactor(fy) * lw;
+  const k = fyFactor(fy);
+  const h = (span / ONE_WAY_DIVISOR[sup]) * k * lw;
+  working()?.step('h_min', `l / ${ONE_WAY_DIVISOR[sup]} * k_fy * k_w`, h, 'in', {
+    vars: { l: [span, 'ft'], k_w: lw }, clause: 'ACI 318-19 Table 7.3.1.1', note: `${sup.replace(/-/g, ' ')}: ℓ/${ONE_WAY_DIVISOR[sup]}`,
+  });
+  return h;
 }
 
 export const PANELS = ['exterior', 'exterior-edge-beam', 'interior'] as const;
@@ -74,7 +89,24 @@ export function hMinTwoWay(ln: number, panel: Panel, dropPanels = false, fy = 60
   const hHigh = span / divisors[row + 1];
   const hTable = hLow + t * (hHigh - hLow);
   const hAbsolute = (drop ? 4 : 5) * inch;
-  return Math.max(hTable, hAbsolute);
+  const h = Math.max(hTable, hAbsolute);
+  const w = working();
+  if (w) {
+    const table = `ACI ${edition(ed)} Table 8.3.1.1`;
+    const [f0, f1] = [rows.fyKsi[row], rows.fyKsi[row + 1]];
+    const [n0, n1] = [divisors[row], divisors[row + 1]];
+    const vars = { ln: [span, 'in'], fy: [fyKsi * 1000 * psi, 'ksi'] } as const;
+    const row0 = `${p.replace(/-/g, ' ')} panel, ${drop ? 'with' : 'without'} drop panels`;
+    w.step('h_table', `ln / ${n0} + (fy - ${f0}) / (${f1} - ${f0}) * (ln / ${n1} - ln / ${n0})`, hTable, 'in', {
+      vars, code: true, clause: table, note: `${row0}: ℓn/${n0} at ${f0} ksi, ℓn/${n1} at ${f1} ksi, linear in fy`,
+    });
+    // Written in ft and ksi above; the absolute minimum is in inches.
+    w.step('h_min', `max(h_table, ${drop ? 4 : 5})`, h, 'in', {
+      vars: { h_table: [hTable, 'in'] }, code: true, clause: 'ACI 318-19 §8.3.1.1', governs: h > hTable,
+      note: h > hTable ? `the absolute minimum ${drop ? 4 : 5} in governs` : undefined,
+    });
+  }
+  return h;
 }
 
 /**
@@ -91,8 +123,16 @@ export function panelAtColumn(n1: number, n2: number, line1: number, line2: numb
   const endSpan1 = at1 <= 1 || at1 >= spans1 - 1;
   const endSpan2 = at2 <= 1 || at2 >= spans2 - 1;
   const exterior = endSpan1 || endSpan2;
-  if (!exterior) return 'interior';
-  return bool('edge_beams', edgeBeams, false) ? 'exterior-edge-beam' : 'exterior';
+  const panel: Panel = !exterior ? 'interior' : bool('edge_beams', edgeBeams, false) ? 'exterior-edge-beam' : 'exterior';
+  const w = working();
+  if (w) {
+    const vars = { n1: spans1, n2: spans2, line1: at1, line2: at2 };
+    const clause = 'ACI 318-19 Table 8.3.1.1';
+    w.step('end_span_1', 'line1 <= 1 or line1 >= n1 - 1', endSpan1, '', { vars, clause });
+    w.step('end_span_2', 'line2 <= 1 or line2 >= n2 - 1', endSpan2, '', { vars, clause });
+    w.step('panel', undefined, panel, '', { clause, note: exterior ? 'the column bounds an end span: the panel has a discontinuous edge' : 'no end span at the column' });
+  }
+  return panel;
 }
 
 function wholeAtLeast(name: string, v: unknown, min: number): number {

@@ -6,6 +6,7 @@
 import { LibraryError, defineFunction, type LibFunction } from './types';
 import { nonNegative, positive } from './support-args';
 import { psf } from '../units/si';
+import { working } from '../working/recorder';
 
 /** Unit weight of water, ρw·g = 1000 kg/m³ × 9.80665 m/s² (62.43 pcf). */
 export const GAMMA_W = 9806.65;
@@ -29,13 +30,22 @@ export function waterTable(gamma: number, gammaSat: number, df: number, dw: numb
   const water = nonNegative('Dw', dw);
   const width = positive('B', b);
   const submerged = gs - GAMMA_W;
+  const w = working();
+  const vars = { gamma: [g, 'pcf'], gamma_sat: [gs, 'pcf'], gamma_w: [GAMMA_W, 'pcf'], Df: [depth, 'ft'], Dw: [water, 'ft'], B: [width, 'ft'] } as const;
+  w?.step('gamma_sub', 'gamma_sat - gamma_w', submerged, 'pcf', { vars, clause: CASES });
   if (water <= depth) {
-    return { submerged, q: g * water + submerged * (depth - water), gammaBelow: submerged, case: 'above base' };
+    const q = g * water + submerged * (depth - water);
+    w?.step('q', 'gamma * Dw + gamma_sub * (Df - Dw)', q, 'psf', { vars, clause: CASES, note: 'water table at or above the base' });
+    w?.step('gamma_b', 'gamma_sub', submerged, 'pcf', { note: 'submerged weight in the γ term' });
+    return { submerged, q, gammaBelow: submerged, case: 'above base' };
   }
+  w?.step('q', 'gamma * Df', g * depth, 'psf', { vars, clause: CASES, note: 'water table below the base: overburden unchanged' });
   if (water < depth + width) {
     const gammaBelow = submerged + ((water - depth) / width) * (g - submerged);
+    w?.step('gamma_b', 'gamma_sub + (Dw - Df) / B * (gamma - gamma_sub)', gammaBelow, 'pcf', { vars, clause: CASES, note: 'water table within B below the base' });
     return { submerged, q: g * depth, gammaBelow, case: 'within B below base' };
   }
+  w?.step('gamma_b', 'gamma', g, 'pcf', { vars, note: 'water table deeper than B below the base: no change' });
   return { submerged, q: g * depth, gammaBelow: g, case: 'deeper than B' };
 }
 
@@ -45,6 +55,7 @@ export function effectiveWidth(b: number, e: number): number {
   const ecc = nonNegative('e', e);
   const bEff = width - 2 * ecc;
   if (bEff <= 0) throw new LibraryError('the load is at or beyond the edge of the footing: e ≥ B/2');
+  working()?.step('B_eff', 'B - 2 * e', bEff, 'ft', { vars: { B: [width, 'ft'], e: [ecc, 'in'] }, clause: 'Meyerhof (1953) effective area [from memory]' });
   return bEff;
 }
 
@@ -54,6 +65,13 @@ export const LEAST_PRESUMPTIVE = 1500 * psf;
 /** A plain word on the pressure used against IBC §1806.2's least presumptive value. */
 export function presumptiveNote(q: number): string {
   const used = positive('q', q);
+  working()?.step('below_least', 'q < 1500', used < LEAST_PRESUMPTIVE * (1 - 1e-9), '', { vars: { q: [used, 'psf'] }, code: true, clause: 'IBC Table 1806.2' });
+  const text = presumptiveText(used);
+  working()?.step('note', undefined, text, '', { clause: 'IBC §1806.2, §1803 [from memory]' });
+  return text;
+}
+
+function presumptiveText(used: number): string {
   if (used < LEAST_PRESUMPTIVE * (1 - 1e-9)) {
     return 'Below 1500 psf, the least presumptive value of IBC Table 1806.2: weaker than any class the table covers, so a geotechnical investigation may be required (IBC §1803).';
   }
@@ -74,7 +92,11 @@ export const functions: LibFunction[] = [
     returns: 'Pa',
     clause: `${CASES}: q = γDw + (γsat − γw)(Df − Dw) when Dw < Df, else γDf`,
     doc: 'Effective overburden pressure at the footing base with groundwater',
-    fn: (g: number, gs: number, df: number, dw: number) => waterTable(g, gs, df, dw, 1).q,
+    fn: (g: number, gs: number, df: number, dw: number) => {
+      const q = waterTable(g, gs, df, dw, 1).q;
+      working()?.result('q', 'q', q, 'psf');
+      return q;
+    },
   }),
   defineFunction({
     name: 'gamma_bearing_gw',

@@ -8,6 +8,7 @@ import { LibraryError, defineFunction, type LibFunction, type LibParam } from '.
 import { choice, nonNegative, positive } from './support-args';
 import { frictionAngle } from './soil-bearing-terzaghi';
 import { deg } from '../units/si';
+import { quietly, working } from '../working/recorder';
 
 export const NGAMMA_METHODS = ['vesic', 'meyerhof', 'hansen'] as const;
 export const DEPTH_METHODS = ['hansen', 'meyerhof', 'none'] as const;
@@ -17,29 +18,44 @@ type DepthMethod = (typeof DEPTH_METHODS)[number];
 /** Nq = e^{π tanφ} tan²(45° + φ/2) (Reissner 1924; Meyerhof, Hansen, Vesic). */
 export function nqVesic(phi: number): number {
   const p = frictionAngle(phi);
-  return Math.exp(Math.PI * Math.tan(p)) * Math.tan(Math.PI / 4 + p / 2) ** 2;
+  const n = Math.exp(Math.PI * Math.tan(p)) * Math.tan(Math.PI / 4 + p / 2) ** 2;
+  working()?.step('N_q', 'exp(pi * tan(phi)) * tan(pi / 4 + phi / 2)^2', n, '', { vars: { phi: [p, 'deg'] }, clause: 'Reissner (1924)' });
+  return n;
 }
 
 /** Nc = (Nq − 1) cot φ, π + 2 at φ = 0 (Prandtl 1921). */
 export function ncVesic(phi: number): number {
   const p = frictionAngle(phi);
-  if (p < 1e-9) return Math.PI + 2;
-  return (nqVesic(p) - 1) / Math.tan(p);
+  const w = working();
+  if (p < 1e-9) {
+    w?.step('N_c', 'pi + 2', Math.PI + 2, '', { clause: 'Prandtl (1921)', note: 'φ = 0' });
+    return Math.PI + 2;
+  }
+  const n = (nqVesic(p) - 1) / Math.tan(p);
+  w?.step('N_c', '(N_q - 1) / tan(phi)', n, '', { vars: { phi: [p, 'deg'] }, clause: 'Prandtl (1921)' });
+  return n;
+}
+
+/** One of the Nγ forms on Nq, recorded with its author. */
+function ngamma(phi: number, expr: string, f: (nq: number, p: number) => number, clause: string): number {
+  const n = f(nqVesic(phi), phi);
+  working()?.step('N_gamma', expr, n, '', { vars: { phi: [phi, 'deg'] }, clause });
+  return n;
 }
 
 /** Nγ = 2(Nq + 1) tan φ (Vesic 1973). */
 export function ngammaVesic(phi: number): number {
-  return 2 * (nqVesic(phi) + 1) * Math.tan(phi);
+  return ngamma(phi, '2 * (N_q + 1) * tan(phi)', (nq, p) => 2 * (nq + 1) * Math.tan(p), 'Vesic (1973)');
 }
 
 /** Nγ = (Nq − 1) tan(1.4φ) (Meyerhof 1963). */
 export function ngammaMeyerhof(phi: number): number {
-  return (nqVesic(phi) - 1) * Math.tan(1.4 * phi);
+  return ngamma(phi, '(N_q - 1) * tan(1.4 * phi)', (nq, p) => (nq - 1) * Math.tan(1.4 * p), 'Meyerhof (1963)');
 }
 
 /** Nγ = 1.5 (Nq − 1) tan φ (Hansen 1970). */
 export function ngammaHansen(phi: number): number {
-  return 1.5 * (nqVesic(phi) - 1) * Math.tan(phi);
+  return ngamma(phi, '1.5 * (N_q - 1) * tan(phi)', (nq, p) => 1.5 * (nq - 1) * Math.tan(p), 'Hansen (1970)');
 }
 
 /** B/L of a rectangular footing, B ≤ L (B = L for square and circular). */
@@ -54,7 +70,17 @@ export interface Shape { sc: number; sq: number; sg: number; }
 /** sc = 1 + (B/L)(Nq/Nc), sq = 1 + (B/L)tanφ, sγ = 1 − 0.4B/L (De Beer 1970, as used by Vesic 1973) [from memory]. */
 export function shapeDeBeer(phi: number, b: number, l: number): Shape {
   const r = ratio(b, l);
-  return { sc: 1 + r * (nqVesic(phi) / ncVesic(phi)), sq: 1 + r * Math.tan(frictionAngle(phi)), sg: 1 - 0.4 * r };
+  const w = working();
+  const nc = ncVesic(phi); // its working shows Nq on the way
+  const nq = quietly(() => nqVesic(phi));
+  const s = { sc: 1 + r * (nq / nc), sq: 1 + r * Math.tan(frictionAngle(phi)), sg: 1 - 0.4 * r };
+  if (w) {
+    const vars = { B: [b, 'ft'], L: [l, 'ft'], phi: [phi, 'deg'] } as const;
+    w.step('s_c', '1 + B / L * N_q / N_c', s.sc, '', { vars, clause: SHAPE });
+    w.step('s_q', '1 + B / L * tan(phi)', s.sq, '', { vars, clause: SHAPE });
+    w.step('s_gamma', '1 - 0.4 * B / L', s.sg, '', { vars, clause: SHAPE });
+  }
+  return s;
 }
 
 export interface Depth { dc: number; dq: number; dg: number; }
@@ -64,7 +90,15 @@ export function depthHansen(phi: number, df: number, b: number): Depth {
   const p = frictionAngle(phi);
   const x = nonNegative('Df', df) / positive('B', b);
   const k = x <= 1 ? x : Math.atan(x);
-  return { dc: 1 + 0.4 * k, dq: 1 + 2 * Math.tan(p) * (1 - Math.sin(p)) ** 2 * k, dg: 1 };
+  const d = { dc: 1 + 0.4 * k, dq: 1 + 2 * Math.tan(p) * (1 - Math.sin(p)) ** 2 * k, dg: 1 };
+  const w = working();
+  if (w) {
+    const vars = { Df: [df, 'ft'], B: [b, 'ft'], phi: [p, 'deg'] } as const;
+    w.step('k', x <= 1 ? 'Df / B' : 'atan(Df / B)', k, '', { vars, clause: HANSEN, note: x <= 1 ? 'Df ≤ B' : 'Df > B' });
+    w.step('d_c', '1 + 0.4 * k', d.dc, '', { clause: HANSEN });
+    w.step('d_q', '1 + 2 * tan(phi) * (1 - sin(phi))^2 * k', d.dq, '', { vars, clause: HANSEN });
+  }
+  return d;
 }
 
 /** Meyerhof (1963): dc = 1 + 0.2√Kp Df/B; dq = dγ = 1 + 0.1√Kp Df/B for φ > 10°, else 1 [from memory]. */
@@ -73,6 +107,13 @@ export function depthMeyerhof(phi: number, df: number, b: number): Depth {
   const x = nonNegative('Df', df) / positive('B', b);
   const rootKp = Math.tan(Math.PI / 4 + p / 2);
   const dq = p > 10 * deg ? 1 + 0.1 * rootKp * x : 1;
+  const w = working();
+  if (w) {
+    const vars = { Df: [df, 'ft'], B: [b, 'ft'], phi: [p, 'deg'] } as const;
+    w.step('sqrt_Kp', 'tan(pi / 4 + phi / 2)', rootKp, '', { vars, clause: MEYERHOF });
+    w.step('d_c', '1 + 0.2 * sqrt_Kp * Df / B', 1 + 0.2 * rootKp * x, '', { vars, clause: MEYERHOF });
+    w.step('d_q', p > 10 * deg ? '1 + 0.1 * sqrt_Kp * Df / B' : '1', dq, '', { vars, clause: MEYERHOF, note: p > 10 * deg ? 'φ > 10°' : 'φ ≤ 10°: 1' });
+  }
   return { dc: 1 + 0.2 * rootKp * x, dq, dg: dq };
 }
 
@@ -83,24 +124,39 @@ export function quGeneral(
 ): number {
   const nq = nqVesic(phi);
   const nc = ncVesic(phi);
-  const ngamma = ng === 'vesic' ? ngammaVesic(phi) : ng === 'meyerhof' ? ngammaMeyerhof(phi) : ngammaHansen(phi);
+  const ngammaV = ng === 'vesic' ? ngammaVesic(phi) : ng === 'meyerhof' ? ngammaMeyerhof(phi) : ngammaHansen(phi);
   const s = shapeDeBeer(phi, b, l);
   nonNegative('Df', df);
   // Depth factors on the full width even when B is an effective width B' (Das, effective-area method [from memory]).
   const d = dm === 'hansen' ? depthHansen(phi, df, bDepth) : dm === 'meyerhof' ? depthMeyerhof(phi, df, bDepth) : { dc: 1, dq: 1, dg: 1 };
-  return nonNegative('c', c) * nc * s.sc * d.dc + nonNegative('q', q) * nq * s.sq * d.dq +
-    0.5 * nonNegative('gamma', gamma) * b * ngamma * s.sg * d.dg;
+  const qu = nonNegative('c', c) * nc * s.sc * d.dc + nonNegative('q', q) * nq * s.sq * d.dq +
+    0.5 * nonNegative('gamma', gamma) * b * ngammaV * s.sg * d.dg;
+  working()?.step('q_u', 'c * N_c * s_c * d_c + q * N_q * s_q * d_q + 0.5 * gamma * B * N_gamma * s_gamma * d_gamma', qu, 'psf', {
+    vars: { c: [c, 'psf'], q: [q, 'psf'], gamma: [gamma, 'pcf'], B: [b, 'ft'], N_c: nc, N_q: nq, N_gamma: ngammaV, d_c: d.dc, d_q: d.dq, d_gamma: d.dg },
+    clause: 'Meyerhof (1963) / Vesic (1973) general form', note: dm === 'none' ? 'no depth factors' : `${dm} depth factors`,
+  });
+  return qu;
 }
 
 /** q_allow = qu / FS (common practice; FS usually 2.5 to 3). */
 export function qAllowFs(qu: number, fs: number): number {
   if (positive('FS', fs) < 1) throw new LibraryError(`factor of safety must be at least 1, got ${fs}`);
-  return positive('qu', qu) / fs;
+  const q = positive('qu', qu) / fs;
+  working()?.step('q_allow', 'qu / FS', q, 'psf', { vars: { qu: [qu, 'psf'], FS: fs }, clause: 'common practice' });
+  return q;
 }
 
 /** True when the pressure used does not exceed qu / FS. */
 export function bearingOk(qUsed: number, qu: number, fs: number): boolean {
-  return nonNegative('q (used)', qUsed) <= qAllowFs(qu, fs);
+  const ok = nonNegative('q (used)', qUsed) <= qAllowFs(qu, fs);
+  working()?.step('ok', 'q_used <= q_allow', ok, '', { vars: { q_used: [qUsed, 'psf'] }, clause: 'common practice' });
+  return ok;
+}
+
+/** A factor picked from a set, named again as the function's result. */
+function named(symbol: string, v: number): number {
+  working()?.result(symbol, symbol, v);
+  return v;
 }
 
 const phiP: LibParam = { name: 'phi', type: 'rad', doc: 'soil friction angle' };
@@ -116,13 +172,13 @@ export const functions: LibFunction[] = [
   defineFunction({ name: 'ngamma_vesic', params: [phiP], returns: '1', clause: 'Vesic (1973): Nγ = 2(Nq + 1)tanφ', doc: 'Bearing capacity factor Nγ after Vesic', fn: ngammaVesic }),
   defineFunction({ name: 'ngamma_meyerhof', params: [phiP], returns: '1', clause: 'Meyerhof (1963): Nγ = (Nq − 1)tan(1.4φ)', doc: 'Bearing capacity factor Nγ after Meyerhof', fn: ngammaMeyerhof }),
   defineFunction({ name: 'ngamma_hansen', params: [phiP], returns: '1', clause: 'Hansen (1970): Nγ = 1.5(Nq − 1)tanφ', doc: 'Bearing capacity factor Nγ after Hansen', fn: ngammaHansen }),
-  defineFunction({ name: 'sc_debeer', params: geo, returns: '1', clause: SHAPE + ': sc = 1 + (B/L)(Nq/Nc)', doc: 'Shape factor for cohesion', fn: (p: number, b: number, l: number) => shapeDeBeer(p, b, l).sc }),
-  defineFunction({ name: 'sq_debeer', params: geo, returns: '1', clause: SHAPE + ': sq = 1 + (B/L)tanφ', doc: 'Shape factor for surcharge', fn: (p: number, b: number, l: number) => shapeDeBeer(p, b, l).sq }),
-  defineFunction({ name: 'sgamma_debeer', params: geo, returns: '1', clause: SHAPE + ': sγ = 1 − 0.4B/L', doc: 'Shape factor for soil weight', fn: (p: number, b: number, l: number) => shapeDeBeer(p, b, l).sg }),
-  defineFunction({ name: 'dc_hansen', params: dep, returns: '1', clause: HANSEN + ': dc = 1 + 0.4k', doc: 'Depth factor for cohesion (Hansen)', fn: (p: number, d: number, b: number) => depthHansen(p, d, b).dc }),
-  defineFunction({ name: 'dq_hansen', params: dep, returns: '1', clause: HANSEN + ': dq = 1 + 2tanφ(1 − sinφ)²k', doc: 'Depth factor for surcharge (Hansen); dγ = 1', fn: (p: number, d: number, b: number) => depthHansen(p, d, b).dq }),
-  defineFunction({ name: 'dc_meyerhof', params: dep, returns: '1', clause: MEYERHOF + ': dc = 1 + 0.2√Kp·Df/B', doc: 'Depth factor for cohesion (Meyerhof)', fn: (p: number, d: number, b: number) => depthMeyerhof(p, d, b).dc }),
-  defineFunction({ name: 'dq_meyerhof', params: dep, returns: '1', clause: MEYERHOF + ': dq = dγ = 1 + 0.1√Kp·Df/B (φ > 10°), else 1', doc: 'Depth factor for surcharge and weight (Meyerhof)', fn: (p: number, d: number, b: number) => depthMeyerhof(p, d, b).dq }),
+  defineFunction({ name: 'sc_debeer', params: geo, returns: '1', clause: SHAPE + ': sc = 1 + (B/L)(Nq/Nc)', doc: 'Shape factor for cohesion', fn: (p: number, b: number, l: number) => named('s_c', shapeDeBeer(p, b, l).sc) }),
+  defineFunction({ name: 'sq_debeer', params: geo, returns: '1', clause: SHAPE + ': sq = 1 + (B/L)tanφ', doc: 'Shape factor for surcharge', fn: (p: number, b: number, l: number) => named('s_q', shapeDeBeer(p, b, l).sq) }),
+  defineFunction({ name: 'sgamma_debeer', params: geo, returns: '1', clause: SHAPE + ': sγ = 1 − 0.4B/L', doc: 'Shape factor for soil weight', fn: (p: number, b: number, l: number) => named('s_gamma', shapeDeBeer(p, b, l).sg) }),
+  defineFunction({ name: 'dc_hansen', params: dep, returns: '1', clause: HANSEN + ': dc = 1 + 0.4k', doc: 'Depth factor for cohesion (Hansen)', fn: (p: number, d: number, b: number) => named('d_c', depthHansen(p, d, b).dc) }),
+  defineFunction({ name: 'dq_hansen', params: dep, returns: '1', clause: HANSEN + ': dq = 1 + 2tanφ(1 − sinφ)²k', doc: 'Depth factor for surcharge (Hansen); dγ = 1', fn: (p: number, d: number, b: number) => named('d_q', depthHansen(p, d, b).dq) }),
+  defineFunction({ name: 'dc_meyerhof', params: dep, returns: '1', clause: MEYERHOF + ': dc = 1 + 0.2√Kp·Df/B', doc: 'Depth factor for cohesion (Meyerhof)', fn: (p: number, d: number, b: number) => named('d_c', depthMeyerhof(p, d, b).dc) }),
+  defineFunction({ name: 'dq_meyerhof', params: dep, returns: '1', clause: MEYERHOF + ': dq = dγ = 1 + 0.1√Kp·Df/B (φ > 10°), else 1', doc: 'Depth factor for surcharge and weight (Meyerhof)', fn: (p: number, d: number, b: number) => named('d_q', depthMeyerhof(p, d, b).dq) }),
   defineFunction({
     name: 'qu_general',
     params: [

@@ -9,6 +9,7 @@
 import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
 import { choice, finite, nonNegative, positive } from './support-args';
 import { deg } from '../units/si';
+import { quietly, working } from '../working/recorder';
 
 export const SHAPES = ['strip', 'square', 'circular', 'rectangular'] as const;
 export const SHEAR_MODES = ['general', 'local'] as const;
@@ -61,20 +62,30 @@ export function frictionAngle(v: unknown): number {
 
 /** φ' = atan((2/3) tan φ) for Terzaghi local shear (Terzaghi 1943, as in Das §3.3) [from memory]. */
 export function localPhi(phi: number): number {
-  return Math.atan((2 / 3) * Math.tan(frictionAngle(phi)));
+  const p = Math.atan((2 / 3) * Math.tan(frictionAngle(phi)));
+  working()?.step('phi_local', 'atan(2 / 3 * tan(phi))', p, 'deg', { vars: { phi: [phi, 'deg'] }, clause: 'Terzaghi (1943), local shear [from memory]' });
+  return p;
 }
 
 /** Nq = e^{2(3π/4 − φ/2)tanφ} / (2cos²(45° + φ/2)) (Terzaghi 1943). */
 export function nqTerzaghi(phi: number): number {
   const p = frictionAngle(phi);
-  return Math.exp(2 * (0.75 * Math.PI - p / 2) * Math.tan(p)) / (2 * Math.cos(Math.PI / 4 + p / 2) ** 2);
+  const n = Math.exp(2 * (0.75 * Math.PI - p / 2) * Math.tan(p)) / (2 * Math.cos(Math.PI / 4 + p / 2) ** 2);
+  working()?.step('N_q', 'exp(2 * (3 * pi / 4 - phi / 2) * tan(phi)) / (2 * cos(pi / 4 + phi / 2)^2)', n, '', { vars: { phi: [p, 'deg'] }, clause: 'Terzaghi (1943)' });
+  return n;
 }
 
 /** Nc = (Nq − 1) cot φ, and 1.5π + 1 at φ = 0 (Terzaghi 1943). */
 export function ncTerzaghi(phi: number): number {
   const p = frictionAngle(phi);
-  if (p < 1e-9) return 1.5 * Math.PI + 1;
-  return (nqTerzaghi(p) - 1) / Math.tan(p);
+  const w = working();
+  if (p < 1e-9) {
+    w?.step('N_c', '1.5 * pi + 1', 1.5 * Math.PI + 1, '', { clause: 'Terzaghi (1943)', note: 'φ = 0' });
+    return 1.5 * Math.PI + 1;
+  }
+  const n = (nqTerzaghi(p) - 1) / Math.tan(p);
+  w?.step('N_c', '(N_q - 1) / tan(phi)', n, '', { vars: { phi: [p, 'deg'] }, clause: 'Terzaghi (1943)' });
+  return n;
 }
 
 /** Nγ from the family's table (Das Table 3.1 by default), log-linear between its rows. */
@@ -88,13 +99,19 @@ export function ngammaTerzaghi(phi: number, family: NgammaFamily = 'das'): numbe
   const [p0, n0] = rows[i];
   const [p1, n1] = rows[i + 1];
   const t = (d - p0) / (p1 - p0);
-  if (n0 === 0) return n0 + t * (n1 - n0);
-  return n0 * Math.pow(n1 / n0, t);
+  const n = n0 === 0 ? n0 + t * (n1 - n0) : n0 * Math.pow(n1 / n0, t);
+  working()?.step('N_gamma', n0 === 0 ? `${n0} + (phi - ${p0}) / (${p1} - ${p0}) * (${n1} - ${n0})` : `${n0} * (${n1} / ${n0})^((phi - ${p0}) / (${p1} - ${p0}))`, n, '', {
+    vars: { phi: [phi, 'deg'] }, code: true, clause: TABLE_NAME[family].general,
+    note: `rows ${p0}° and ${p1}°, ${n0 === 0 ? 'linear' : 'log-linear'} between them`,
+  });
+  return n;
 }
 
 /** Name of the printed table the factors come from, for the output. */
 export function terzaghiTable(mode: ShearMode = 'general', family: NgammaFamily = 'das'): string {
-  return TABLE_NAME[family][mode];
+  const t = TABLE_NAME[family][mode];
+  working()?.lookup('table', t, '', `${mode} shear, ${family} Nγ family`);
+  return t;
 }
 
 export interface TerzaghiFactors { nc: number; nq: number; ngamma: number; }
@@ -102,7 +119,8 @@ export interface TerzaghiFactors { nc: number; nq: number; ngamma: number; }
 /** The three factors at φ (general shear) or at φ' (local shear), Nγ from one family. */
 export function terzaghiFactors(phi: number, mode: ShearMode = 'general', family: NgammaFamily = 'das'): TerzaghiFactors {
   const p = mode === 'local' ? localPhi(phi) : frictionAngle(phi);
-  return { nc: ncTerzaghi(p), nq: nqTerzaghi(p), ngamma: ngammaTerzaghi(p, family) };
+  const nc = ncTerzaghi(p); // its working shows Nq on the way
+  return { nc, nq: quietly(() => nqTerzaghi(p)), ngamma: ngammaTerzaghi(p, family) };
 }
 
 /**
@@ -115,14 +133,28 @@ export function quTerzaghi(c: number, q: number, gamma: number, b: number, phi: 
   const cc = nonNegative('c', c) * (mode === 'local' ? 2 / 3 : 1);
   const sc = shape === 'strip' || shape === 'rectangular' ? 1 : 1.3;
   const sg = shape === 'strip' ? 0.5 : shape === 'circular' ? 0.3 : 0.4;
-  return sc * cc * f.nc + nonNegative('q', q) * f.nq + sg * nonNegative('gamma', gamma) * positive('B', b) * f.ngamma;
+  const qu = sc * cc * f.nc + nonNegative('q', q) * f.nq + sg * nonNegative('gamma', gamma) * positive('B', b) * f.ngamma;
+  const w = working();
+  if (w) {
+    const vars = { c: [cc, 'psf'], q: [q, 'psf'], gamma: [gamma, 'pcf'], B: [b, 'ft'], N_c: f.nc, N_q: f.nq, N_gamma: f.ngamma } as const;
+    if (mode === 'local') w.step('c', '2 / 3 * c', cc, 'psf', { vars: { c: [c, 'psf'] }, clause: "Terzaghi (1943), local shear: c′ = 2c/3" });
+    w.step('q_u', `${sc} * c * N_c + q * N_q + ${sg} * gamma * B * N_gamma`, qu, 'psf', {
+      vars, clause: 'Terzaghi (1943); Das §3.3', note: `${shape} footing${shape === 'rectangular' ? ': the lower strip/square factors (a bound)' : ''}`,
+    });
+  }
+  return qu;
 }
 
 const phiParam: LibParam = { name: 'phi', type: 'rad', doc: 'soil friction angle' };
 const modeParam: LibParam = { name: 'shear', type: 'text', choices: SHEAR_MODES, doc: "'general' (default) or 'local' (φ' = atan(2/3 tan φ))" };
 const familyParam: LibParam = { name: 'ngamma_table', type: 'text', choices: NGAMMA_FAMILIES, doc: "'das' (default, Das Tables 3.1/3.2) or 'bowles' (higher Nγ, less conservative; only when chosen)" };
 const mode = (v: unknown): ShearMode => (v === undefined ? 'general' : choice('shear mode', v, SHEAR_MODES));
-const factor = (k: keyof TerzaghiFactors) => (phi: number, m?: string, fam?: string) => terzaghiFactors(phi, mode(m), ngammaFamily(fam))[k];
+const SYMBOL: Record<keyof TerzaghiFactors, string> = { nc: 'N_c', nq: 'N_q', ngamma: 'N_gamma' };
+const factor = (k: keyof TerzaghiFactors) => (phi: number, m?: string, fam?: string) => {
+  const v = terzaghiFactors(phi, mode(m), ngammaFamily(fam))[k];
+  working()?.result(SYMBOL[k], SYMBOL[k], v);
+  return v;
+};
 const LOCAL = "; local shear at φ' = atan((2/3)tanφ) [from memory]";
 
 export const functions: LibFunction[] = [

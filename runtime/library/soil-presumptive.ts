@@ -3,6 +3,7 @@
 
 import { LibraryError, defineFunction, type LibFunction } from './types';
 import { ft, psf } from '../units/si';
+import { working } from '../working/recorder';
 
 export const SOIL_CLASSES = ['crystalline bedrock', 'sedimentary rock', 'sandy gravel', 'sand', 'clay'] as const;
 export type SoilClass = (typeof SOIL_CLASSES)[number];
@@ -54,18 +55,23 @@ export function soilClass(v: unknown): SoilClass {
 
 /** Allowable vertical foundation pressure (IBC Table 1806.2). */
 export function qPresumptive(cls: SoilClass): number {
-  return TABLE[cls].vertical * psf;
+  const q = TABLE[cls].vertical * psf;
+  working()?.lookup('q_a', q, 'psf', `row: ${cls}, vertical foundation pressure`, 'IBC Table 1806.2');
+  return q;
 }
 
 /** Lateral bearing pressure per depth below natural grade (IBC Table 1806.2). */
 export function lateralPresumptive(cls: SoilClass): number {
-  return (TABLE[cls].lateral * psf) / ft;
+  const v = (TABLE[cls].lateral * psf) / ft;
+  working()?.lookup('p_lat', v, 'psf/ft', `row: ${cls}, lateral bearing pressure`, 'IBC Table 1806.2');
+  return v;
 }
 
 /** Sliding friction coefficient, to multiply the dead load (IBC Table 1806.2, note a). */
 export function muPresumptive(cls: SoilClass): number {
   const f = TABLE[cls].friction;
   if (f === null) throw new LibraryError(`IBC Table 1806.2 gives no friction coefficient for ${cls}: use c_presumptive (cohesion)`);
+  working()?.lookup('mu', f, '', `row: ${cls}, coefficient of friction`, 'IBC Table 1806.2, note a');
   return f;
 }
 
@@ -73,6 +79,7 @@ export function muPresumptive(cls: SoilClass): number {
 export function cPresumptive(cls: SoilClass): number {
   const c = TABLE[cls].cohesion;
   if (c === null) throw new LibraryError(`IBC Table 1806.2 gives no cohesion for ${cls}: use mu_presumptive (friction)`);
+  working()?.lookup('c', c * psf, 'psf', `row: ${cls}, cohesion`, 'IBC Table 1806.2, note b');
   return c * psf;
 }
 

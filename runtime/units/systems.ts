@@ -26,6 +26,8 @@ const PAIRS: readonly (readonly [string, string])[] = [
   ['klf', 'kN/m'],
   ['plf', 'kN/m'],
   ['kip/in', 'kN/mm'],
+  ['in^2/ft', 'mm^2/m'],
+  ['kip*ft/ft', 'kN*m/m'],
 ];
 
 /** Same unit written another common way, mapped to the spelling in PAIRS. */

@@ -1,0 +1,58 @@
+// Every library function shows its working: over random valid arguments (fast-check), the
+// working recorded while the function computes ends in the value it returns, each step's
+// expression evaluated on the values it shows gives the value it shows, and every name it
+// shows was given. A function with no recorded steps fails here.
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { libraryFunctions } from '../../runtime/library/index';
+import { LibraryError, type LibValue } from '../../runtime/library/types';
+import { argsArb } from './arbitrary-args';
+import { checkCall } from './check-working';
+
+/** The plate solver is slow: fewer samples for it. */
+const RUNS = (name: string) => (name.startsWith('plate_') ? 6 : 60);
+const ONLY = process.env.WORKING_ONLY ? new RegExp(process.env.WORKING_ONLY) : undefined;
+
+/**
+ * Functions of the column files another helper is still writing (P–M interaction, moment
+ * magnification, edge and corner columns, dowels): instrumented once that work has landed.
+ * Emptied then; the test below keeps this list from hiding anything else.
+ */
+const AWAITING = new Set([
+  'col_phi_mn', 'col_phi_at', 'col_phi_pn_e', 'col_pm_ratio', 'col_pb', 'col_mb', 'col_biaxial_ratio', 'col_biaxial_method',
+  'msc_interior', 'msc_column', 'col_moment_share', 'm2_min', 'cm_factor', 'ei_eff', 'pc_column', 'delta_ns', 'mc_nonsway',
+  'frame_width', 'b_slab_transfer', 'vu_punch_biaxial', 'ldc', 'lsc', 'lap_dowel_col', 'ldc_avail_footing',
+]);
+
+describe('every library function records its working', () => {
+  it('only functions of the column files still being written wait for their working', async () => {
+    const files = ['column-interaction', 'column-biaxial', 'column-moment', 'column-position', 'footing-dowels'];
+    const mods = await Promise.all(files.map((f) => import(`../../runtime/library/${f}.ts`)));
+    const theirs = new Set(mods.flatMap((m) => (m.functions as { name: string }[]).map((f) => f.name)));
+    for (const name of AWAITING) expect(theirs.has(name), name).toBe(true);
+  });
+
+  for (const f of libraryFunctions) {
+    if (ONLY && !ONLY.test(f.name)) continue;
+    if (AWAITING.has(f.name)) continue;
+    it(`${f.name}: last step = value returned; every step evaluates to what it shows`, () => {
+      let valid = 0;
+      fc.assert(
+        fc.property(argsArb(f), (args: LibValue[]) => {
+          try {
+            f.fn(...args);
+          } catch (e) {
+            if (e instanceof LibraryError) return; // not a valid call: the function refused it
+            throw e;
+          }
+          valid++;
+          const { problems } = checkCall(f, args);
+          expect(problems, `${f.name}(${args.map(String).join(', ')})`).toEqual([]);
+        }),
+        { numRuns: RUNS(f.name), seed: 18 },
+      );
+      if (process.env.WORKING_COUNTS) console.log(f.name, valid);
+      expect(valid, `${f.name}: valid random calls`).toBeGreaterThanOrEqual(f.name.startsWith('plate_') ? 2 : 8);
+    });
+  }
+});
