@@ -69,9 +69,9 @@ export function lldFactor(AT: number, KLL: number, floors: number): number {
   const floor = n >= 2 ? 0.4 : 0.5;
   const out = Math.min(1, Math.max(factor, floor));
   if (w) {
-    w.step('f_LL', '0.25 + 15 / sqrt(KLL_AT)', factor, '', { code: true, clause: 'ASCE 7-22 Eq. 4.7-1' });
+    w.step('L_Lo', '0.25 + 15 / sqrt(KLL_AT)', factor, '', { code: true, clause: 'ASCE 7-22 Eq. 4.7-1' });
     const bites = factor < floor;
-    w.step('L_Lo', `min(1, max(f_LL, ${floor}))`, out, '', {
+    w.step('L_Lo', `min(1, max(L_Lo, ${floor}))`, out, '', {
       vars: { floors: n }, clause: 'ASCE 7-22 §4.7.2', governs: bites,
       note: bites
         ? `the limit ${floor.toFixed(2)} governs (${n >= 2 ? 'two or more floors: not below 0.40' : 'one floor: not below 0.50'})`

@@ -3,6 +3,7 @@
 // governing mark; each nested call as a foldable group headed by the call with its
 // arguments and result. Both the live sheet and the record's static page draw from this.
 
+import type { MathNode } from 'mathjs';
 import type { CellState, DisplayValue } from '../engine-types';
 import { displayNumber, displayOther } from '../formula/display';
 import { exprTex, parseForDisplay, type HandCalcScope } from '../handcalc/formula';
@@ -67,21 +68,42 @@ function stateOf(d: DisplayValue): CellState {
   return { id: '', status: 'ok', value: d.value, display: d, clauses: [], reads: [] };
 }
 
+const nodes = new Map<string, MathNode | undefined>();
+
+/**
+ * A step's expression parsed for display, without the brackets a fraction bar or a function's
+ * own brackets make redundant: `Mu / (phi * b * d^2)` sets as a plain fraction. Cached by text, so
+ * the typesetter's templates (kept per node) are reused.
+ */
+function displayNode(expr: string): MathNode | undefined {
+  if (nodes.has(expr)) return nodes.get(expr);
+  const parsed = parseForDisplay(expr);
+  const strip = (n: MathNode, redundant: boolean): MathNode => {
+    if (redundant && n.type === 'ParenthesisNode') return strip((n as unknown as { content: MathNode }).content, true);
+    const op = n as unknown as { type: string; fn?: unknown };
+    const inner = n.type === 'FunctionNode' || (n.type === 'OperatorNode' && op.fn === 'divide');
+    return n.map((child) => strip(child, inner));
+  };
+  const node = parsed && strip(parsed, true);
+  if (nodes.size > 2000) nodes.clear();
+  nodes.set(expr, node);
+  return node;
+}
+
 /** The TeX line of one step. */
 export function stepTex(s: Step, sheet: UnitSystem): string {
   const system = s.code ? 'US' : sheet;
   const symbol = nameTex(s.symbol);
   const result = quantityTex(shownDisplay(s.unit && typeof s.value === 'number' ? [s.value, s.unit] : s.value, system));
   const parts = [symbol];
-  const node = s.expr === undefined ? undefined : parseForDisplay(s.expr);
+  const node = s.expr === undefined ? undefined : displayNode(s.expr);
   if (node) {
     const scope: HandCalcScope = {
       isCell: (n) => n in s.vars,
       state: (n) => (n in s.vars ? stateOf(shownDisplay(s.vars[n], system)) : undefined),
     };
     parts.push(exprTex(node, scope, 'symbolic'));
-    const lone = node.type === 'SymbolNode' || node.type === 'ConstantNode';
-    if (!lone || node.type === 'SymbolNode') parts.push(exprTex(node, scope, 'values'));
+    if (node.type !== 'ConstantNode') parts.push(exprTex(node, scope, 'values'));
   }
   if (parts[parts.length - 1] !== result) parts.push(result);
   return parts.join(' = ');

@@ -183,7 +183,7 @@ describe('check', () => {
     expect(passHtml).toContain('ratio 0.75');
     expect(passHtml).toContain('aria-valuenow="0.747"');
     expect(checkKind.render(fail)).toContain('✗</span> NOT OK');
-    expect(pass.symbol).toBe('{\\mathit{chk}_{\\mathrm{w}}}:');
+    expect(pass.symbol).toBe('{\\text{chk}_{\\mathrm{w}}}:');
     expect(pass.steps.map((s) => s.rel)).toEqual(['', '\\Rightarrow', '\\quad']);
     expect(pass.steps[1].tex).toBe('224\\,\\mathrm{psf} \\le 300\\,\\mathrm{psf}');
   });

@@ -48,14 +48,14 @@ describe('nameTex', () => {
     expect(nameTex('beta1')).toBe('{\\beta_{1}}');
     expect(nameTex('lambda_s')).toBe('{\\lambda_{\\mathrm{s}}}');
     expect(nameTex('alpha')).toBe('{\\alpha}');
-    expect(nameTex('f_c_prime')).toBe("{f'_{\\mathrm{c}}}");
+    expect(nameTex('fc')).toBe("{f'_{\\mathrm{c}}}");
     expect(nameTex('c1')).toBe('{c_{1}}');
     expect(nameTex('Vu')).toBe('{V_{\\mathrm{u}}}');
-    expect(nameTex('Ast')).toBe('{A_{\\mathrm{st}}}');
-    expect(nameTex('DL')).toBe('{\\mathrm{DL}}');
-    expect(nameTex('span')).toBe('{\\mathit{span}}');
-    expect(nameTex('q_allow_net')).toBe('{q_{\\mathrm{allow},\\mathrm{net}}}');
-    expect(nameTex('d_avg')).toBe('{d_{\\mathrm{avg}}}');
+    expect(nameTex('Ast')).toBe('{A_{\\text{st}}}');
+    expect(nameTex('DL')).toBe('{\\text{DL}}');
+    expect(nameTex('span')).toBe('{\\text{span}}');
+    expect(nameTex('q_allow_net')).toBe('{q_{\\text{allow},\\text{net}}}');
+    expect(nameTex('d_avg')).toBe('{d_{\\text{avg}}}');
     expect(nameTex('b')).toBe('{b}');
   });
 
@@ -193,9 +193,9 @@ describe('nameTex on run-together trade names', () => {
   it('reads a Greek word run into a capital, and capital heads with subscripts', () => {
     expect(nameTex('phiVc')).toBe('{\\phi V_{\\mathrm{c}}}');
     expect(nameTex('phiVc_f')).toBe('{\\phi V_{\\mathrm{c},\\mathrm{f}}}');
-    expect(nameTex('Vu_slab')).toBe('{V_{\\mathrm{u},\\mathrm{slab}}}');
-    expect(nameTex('chk_w')).toBe('{\\mathit{chk}_{\\mathrm{w}}}');
+    expect(nameTex('Vu_slab')).toBe('{V_{\\mathrm{u},\\text{slab}}}');
+    expect(nameTex('chk_w')).toBe('{\\text{chk}_{\\mathrm{w}}}');
     expect(nameTex('Lo')).toBe('{L_{\\mathrm{o}}}');
-    expect(nameTex('floors')).toBe('{\\mathit{floors}}');
+    expect(nameTex('floors')).toBe('{\\text{floors}}');
   });
 });
