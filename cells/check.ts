@@ -10,6 +10,7 @@ import {
   type CellKindModule, type CellViewBase, type ParsedSource,
 } from './kind';
 import { handCalcHtml } from './tex';
+import { foldedWorkingsHtml } from '../runtime/working/sheet';
 
 export interface CheckView extends CellViewBase {
   kind: 'check';
@@ -25,6 +26,8 @@ export interface CheckView extends CellViewBase {
   capacity?: string;
   /** 'pass' / 'fail' once computed. */
   verdict?: 'pass' | 'fail';
+  /** Folds for the working of each library call (runtime/working/sheet.ts). */
+  workings?: string;
 }
 
 export const checkKind: CellKindModule<CheckCell, { name?: string; expr: string }, CheckView> = {
@@ -54,12 +57,13 @@ export const checkKind: CellKindModule<CheckCell, { name?: string; expr: string 
       symbol: cell.name ? `${nameTex(cell.name)}:` : '', steps,
       reading: `${cell.expr}${state?.demand && state.capacity ? `: ${state.demand.text} against ${state.capacity.text}` : ''}`,
       ratio: state?.ratio, demand: state?.demand?.text, capacity: state?.capacity?.text, verdict,
+      workings: foldedWorkingsHtml(cell.expr),
     };
   },
 
   render(v) {
     return `${renderNumber(v.number)}<div class="cell-body">${renderLabel(v.label)}<div class="cell-math" data-act="open">${
-      handCalcHtml(v.symbol, v.steps, v.reading)}</div>${renderVerdict(v)}${renderError(v.error)}</div>${renderRefs(v.refs)}`;
+      handCalcHtml(v.symbol, v.steps, v.reading)}</div>${renderVerdict(v)}${renderError(v.error)}${v.workings ?? ''}</div>${renderRefs(v.refs)}`;
   },
 
   edit(doc, id, source) {

@@ -9,6 +9,7 @@ import {
   type CellKindModule, type CellViewBase, type ParsedSource,
 } from './kind';
 import { handCalcHtml } from './tex';
+import { foldedWorkingsHtml } from '../runtime/working/sheet';
 
 export interface FormulaView extends CellViewBase {
   kind: 'formula';
@@ -18,6 +19,8 @@ export interface FormulaView extends CellViewBase {
   parts: string[];
   /** The line in plain words for screen readers: `d = h - cover - db = 7.625 in`. */
   reading: string;
+  /** Folds for the working of each library call (runtime/working/sheet.ts). */
+  workings?: string;
 }
 
 export const formulaKind: CellKindModule<FormulaCell, { name: string; expr: string }, FormulaView> = {
@@ -38,12 +41,13 @@ export const formulaKind: CellKindModule<FormulaCell, { name: string; expr: stri
       refs: marginRefs(cell.clause, state), error: errorOf(state, cell.expr), name: cell.name,
       symbol: t.symbol, parts: t.parts,
       reading: `${cell.name} = ${cell.expr}${state?.display && (state.status === 'ok' || state.status === 'fail') ? ` = ${state.display.text}` : ''}`,
+      workings: foldedWorkingsHtml(cell.expr),
     };
   },
 
   render: (v) =>
     `${renderNumber(v.number)}<div class="cell-body">${renderLabel(v.label)}<div class="cell-math" data-act="open">${
-      handCalcHtml(v.symbol, v.parts.map((p) => ({ rel: '=', tex: p })), v.reading)}</div>${renderError(v.error)}</div>${renderRefs(v.refs)}`,
+      handCalcHtml(v.symbol, v.parts.map((p) => ({ rel: '=', tex: p })), v.reading)}</div>${renderError(v.error)}${v.workings ?? ''}</div>${renderRefs(v.refs)}`,
 
   edit(doc, id, source) {
     const { name, expr } = orThrow(formulaKind.parse(source));

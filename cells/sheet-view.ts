@@ -14,6 +14,7 @@ import { bindCell, cellSource, numberCells, renderView } from './registry';
 import { writeSummary } from './summary';
 import { writeCellContent } from './step-patch';
 import { LaterBatches } from './later-batches';
+import { WorkingFolds } from './working';
 
 export interface SheetEvents {
   commitValue(id: string, value: string): void;
@@ -81,7 +82,11 @@ export class SheetView {
     });
     // A printed sheet shows every cell typeset.
     window.addEventListener('beforeprint', () => this.renderAll());
+    this.folds = new WorkingFolds(host, () => this.engine, () => this.doc);
   }
+
+  /** The working folds of library calls (cells/working.ts). */
+  private readonly folds: WorkingFolds;
 
   /** Shows a whole new sheet (on open). */
   show(doc: CalcDocument, engine: Engine): void {
@@ -323,6 +328,7 @@ export class SheetView {
     if (html === slot.html) return;
     slot.html = html;
     this.writeContent(slot, html);
+    this.folds.restore(slot.el, id);
   }
 
   /**

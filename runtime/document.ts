@@ -1,6 +1,7 @@
 // The calc document as plain, serialisable data. Everything else (engine, view,
 // record export) reads this; all editing is a pure operation that returns a new one.
 
+import type { WorkingSetting } from './format/settings';
 import type { ReviewState } from './review/types';
 
 /** Title-block fields, printed at the top of every sheet. */
@@ -112,6 +113,8 @@ export interface CalcDocument {
   cells: Cell[];
   /** Issued revisions, checker's comments and sign-offs (runtime/review); absent until the first. */
   review?: ReviewState;
+  /** How the record shows the working of library calls; absent: open for the governing checks. */
+  working?: WorkingSetting;
 }
 
 export function emptyMeta(): DocMeta {

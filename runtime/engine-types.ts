@@ -2,6 +2,7 @@
 // Values are SI base units inside the engine; `display` is the value converted
 // to the cell's display unit and formatted for people.
 
+import type { LibraryCall } from './working/calls';
 import type { CalcDocument } from './document';
 import type { FigureSpec, SweepResult } from './figures/spec';
 
@@ -78,6 +79,11 @@ export interface Engine {
    * results and checks at each point, computed without changing the document or any state.
    */
   whatIf?(input: string, values: readonly (number | string | boolean)[], outputs: readonly string[]): Record<string, WhatIfOutcome>[];
+  /**
+   * The library calls of a formula or check with the values they were called with now, for
+   * showing their working (runtime/working). Computed when asked, never on an edit.
+   */
+  libraryCalls?(id: string): LibraryCall[];
   /** Resolves when every cell has a final state for the current document. */
   settled(): Promise<void>;
   dispose(): void;

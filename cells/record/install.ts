@@ -13,6 +13,7 @@ import type { App } from '../app';
 import { escapeHtml } from '../kind';
 import { sheetTitle } from '../templates';
 import { recordShell } from './shell';
+import { callsOf } from '../../runtime/working/calls';
 
 export interface RecordHooks {
   /** On a record page: opens the embedded document and returns true; elsewhere false. */
@@ -67,7 +68,7 @@ export function installRecord(app: App): RecordHooks {
     const engine = app.engine!;
     await engine.settled();
     const shell = await recordShell();
-    return (await exportRecord(app.doc, (id) => engine.state(id), shell)).html;
+    return (await exportRecord(app.doc, (id) => engine.state(id), shell, undefined, callsOf(engine))).html;
   }
 
   async function exportNow(): Promise<void> {
@@ -138,7 +139,7 @@ export function installRecord(app: App): RecordHooks {
     const engine = app.engine;
     if (!old || !engine) return;
     const fresh = document.createElement('div');
-    fresh.innerHTML = staticHtml(app.doc, (id) => engine.state(id), { warning: sealWarning });
+    fresh.innerHTML = staticHtml(app.doc, (id) => engine.state(id), { warning: sealWarning, calls: callsOf(engine) });
     old.replaceWith(fresh.firstElementChild!);
     const style = document.getElementById('lt-static-style');
     if (style) style.textContent = `${STATIC_CSS}\n${pageCss(app.doc.meta)}`;

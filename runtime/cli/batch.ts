@@ -17,6 +17,7 @@ import { readBatchCsv, type BatchRun } from './batch-csv';
 import { withMeta } from './meta';
 import { openPrinter, sheetsPage, type Printer } from './pdf';
 import { recordShellFile } from './record-shell';
+import { callsOf } from '../working/calls';
 
 /** One line of the index. */
 export interface BatchIndexRow {
@@ -119,11 +120,11 @@ export async function runBatch(doc: CalcDocument, args: CalcArgs, out: (s: strin
       const state = (id: string) => engine.state(id);
       if (shell !== undefined) {
         files.push(`${name}.html`);
-        writeFileSync(join(dir, `${name}.html`), (await exportRecord(d, state, shell)).html);
+        writeFileSync(join(dir, `${name}.html`), (await exportRecord(d, state, shell, undefined, callsOf(engine))).html);
       }
       if (printer) {
         files.push(`${name}.pdf`);
-        await printer.print(await sheetsPage(d, state), join(dir, `${name}.pdf`), args.paper ?? 'Letter');
+        await printer.print(await sheetsPage(d, state, undefined, callsOf(engine)), join(dir, `${name}.pdf`), args.paper ?? 'Letter');
       }
       return { row: run.row, files, ...governing(d, engine) };
     } finally {

@@ -16,6 +16,7 @@ import { runBatch } from './batch';
 import { withMeta } from './meta';
 import { openPrinter, sheetsPage } from './pdf';
 import type { Engine } from '../engine-types';
+import { callsOf } from '../working/calls';
 
 /** A file's document, its faults reported through `err`; undefined when it cannot be read at all. */
 async function loadDocument(file: string, err: (s: string) => void): Promise<{ doc: CalcDocument; broken: boolean } | undefined> {
@@ -100,7 +101,7 @@ async function calc(args: CalcArgs, out: (s: string) => void, err: (s: string) =
   }
   if (args.exportTo !== undefined) {
     try {
-      const record = await exportRecord(doc, (id) => engine.state(id), recordShellFile(err));
+      const record = await exportRecord(doc, (id) => engine.state(id), recordShellFile(err), undefined, callsOf(engine));
       writeFileSync(args.exportTo, record.html);
       err(`record written: ${args.exportTo} (${(record.html.length / 1e6).toFixed(2)} MB, SHA-256 ${record.digest})`);
     } catch (e) {
@@ -124,7 +125,7 @@ async function writePdf(doc: CalcDocument, engine: Engine, args: CalcArgs, err: 
   try {
     const printer = await openPrinter();
     try {
-      const bytes = await printer.print(await sheetsPage(doc, (id) => engine.state(id)), to, args.paper ?? 'Letter');
+      const bytes = await printer.print(await sheetsPage(doc, (id) => engine.state(id), undefined, callsOf(engine)), to, args.paper ?? 'Letter');
       err(`PDF written: ${to} (${(bytes / 1e6).toFixed(2)} MB, ${args.paper ?? 'Letter'})`);
     } finally {
       await printer.close();

@@ -10,6 +10,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { CalcDocument } from '../document';
 import type { CellState } from '../engine-types';
+import type { LibraryCall } from '../working/calls';
 import { serialize } from '../format/index';
 import { pack, sha256Hex, staticHtml } from '../record/index';
 import type { Paper } from './args';
@@ -31,10 +32,12 @@ export class PrintError extends Error {}
 const NO_APP = '<!doctype html><html lang="en"><head></head><body></body></html>';
 
 /** The record's static page for a computed document (what a record shows with JavaScript off). */
-export async function sheetsPage(doc: CalcDocument, state: (id: string) => CellState | undefined, exportedAt = new Date().toISOString()): Promise<string> {
+export async function sheetsPage(
+  doc: CalcDocument, state: (id: string) => CellState | undefined, exportedAt = new Date().toISOString(), calls?: (id: string) => LibraryCall[],
+): Promise<string> {
   const docText = serialize(doc);
   const digest = await sha256Hex(docText);
-  return pack({ shell: NO_APP, docText, digest, meta: doc.meta, staticHtml: staticHtml(doc, state, { digest, exportedAt }) });
+  return pack({ shell: NO_APP, docText, digest, meta: doc.meta, staticHtml: staticHtml(doc, state, { digest, exportedAt, calls }) });
 }
 
 export interface Printer {

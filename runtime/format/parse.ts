@@ -4,6 +4,7 @@
 import { emptyMeta, type CalcDocument, type Cell, type DocMeta } from '../document';
 import { kindFormat } from './kinds/index';
 import { FORMAT_TAG, FORMAT_VERSION, metaField } from './meta';
+import { WORKING_CHOICES, WORKING_KEYWORD, workingSetting, type WorkingSetting } from './settings';
 import { decodeValue, isCellId } from './quote';
 import { ReviewCollector, reviewBlockFormat } from './review/index';
 import type { ReviewBlockFormat } from './review/block';
@@ -42,6 +43,7 @@ class Reader {
   readonly cells: Cell[] = [];
   readonly review = new ReviewCollector();
   private readonly metaLines = new Map<string, number>();
+  working: WorkingSetting | undefined;
   private readonly ids = new Map<string, number>();
   /** The current block: a draft, 'skip' after a header we could not read, null between blocks. */
   private block: Draft | 'skip' | null = null;
@@ -82,6 +84,7 @@ class Reader {
     if (format) this.readCellHeader(n, text, word, format);
     else if (reviewFormat) this.readReviewHeader(n, text, word, reviewFormat);
     else if (field) this.readMeta(n, text, word, field);
+    else if (word === WORKING_KEYWORD) this.readWorking(n, text);
     else {
       this.report(n, 1, word === FORMAT_TAG
         ? `the "${FORMAT_TAG}" header may appear only once, on the first line`
@@ -113,6 +116,20 @@ class Reader {
     if (first !== undefined) return this.report(n, 1, `duplicate "${word}" line (first on line ${first})`);
     this.metaLines.set(word, n);
     this.meta[field] = value.value;
+  }
+
+  private readWorking(n: number, text: string): void {
+    if (this.cellSeen) {
+      this.report(n, 1, `setting line "${WORKING_KEYWORD}" must come before the first cell`);
+      this.block = 'skip';
+      return;
+    }
+    const at = skipBlanks(text, WORKING_KEYWORD.length);
+    const value = text.slice(at);
+    const setting = workingSetting(value);
+    if (!setting) return this.report(n, at + 1, `"${WORKING_KEYWORD}" takes ${WORKING_CHOICES.join(', ')}; got "${value}"`);
+    if (this.working !== undefined) return this.report(n, 1, `duplicate "${WORKING_KEYWORD}" line`);
+    this.working = setting;
   }
 
   private readCellHeader(n: number, text: string, word: string, format: KindFormat<Cell>): void {
@@ -226,5 +243,7 @@ export function parse(text: string): ParseResult {
     reader.errors.push({ line: 1, column: 1, message: `internal error in the reader: ${String(e)}` });
   }
   const review = reader.review.result();
-  return { doc: review ? { meta: reader.meta, cells: reader.cells, review } : { meta: reader.meta, cells: reader.cells }, errors: reader.errors };
+  const doc: CalcDocument = review ? { meta: reader.meta, cells: reader.cells, review } : { meta: reader.meta, cells: reader.cells };
+  if (reader.working) doc.working = reader.working;
+  return { doc, errors: reader.errors };
 }

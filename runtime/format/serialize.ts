@@ -3,6 +3,7 @@
 import type { CalcDocument, Cell } from '../document';
 import { keyWidth, kindFormat } from './kinds/index';
 import { FORMAT_TAG, FORMAT_VERSION, META_KEY_WIDTH, META_LINES } from './meta';
+import { WORKING_KEYWORD } from './settings';
 import { encodeNoteLine, encodeValue, isCellId } from './quote';
 import { reviewBlocks } from './review/index';
 
@@ -28,6 +29,7 @@ export function serialize(doc: CalcDocument): string {
     const value = doc.meta[field];
     if (typeof value === 'string' && value !== '') lines.push(word.padEnd(META_KEY_WIDTH) + encodeValue(value));
   }
+  if (doc.working) lines.push(WORKING_KEYWORD.padEnd(META_KEY_WIDTH) + doc.working);
   for (const cell of doc.cells) lines.push('', ...serializeCell(cell));
   for (const block of reviewBlocks(doc.review)) lines.push('', ...block);
   return lines.join('\n') + '\n';

@@ -30,6 +30,11 @@ export interface CompileScope {
   /** What a suggested name is ("the input d, Effective depth"), so a look-alike is not taken for the one meant. */
   describe?(name: string): string | undefined;
   functions: ReadonlyMap<string, LibFunction>;
+  /**
+   * Only when the working of a cell's calls is asked for: the function a library call
+   * runs, given the function and the types of its arguments (their units as written).
+   */
+  wrapLibrary?(lib: LibFunction, argTypes: readonly VType[]): LibFunction['fn'];
 }
 
 
@@ -349,7 +354,7 @@ export class Compiler {
       }
     });
     if (!this.clauses.includes(lib.clause)) this.clauses.push(lib.clause);
-    const fn = lib.fn;
+    const fn = this.scope.wrapLibrary ? this.scope.wrapLibrary(lib, args.map((a) => a.type)) : lib.fn;
     const node = derive(typeFromDeclaration(lib.returns), args, (...v: unknown[]) => {
       try {
         return fn(...v);

@@ -28,6 +28,8 @@ import { Pacer } from './pacer';
 import { computeAfterThisTask } from './scheduling';
 import { CellNames } from './cell-names';
 import { upstreamFirst } from './upstream-first';
+// The working of a cell's library calls, asked for by the view (runtime/working).
+import { captureCalls, type LibraryCall } from '../working/calls';
 
 export interface EngineOptions {
   functions?: readonly LibFunction[];
@@ -330,6 +332,15 @@ class DocEngine implements Engine {
 
   whatIf(input: string, values: readonly (number | string | boolean)[], outputs: readonly string[]): Record<string, WhatIfOutcome>[] {
     return whatIfRun(this.whatIfGraph, (n) => this.names.sweepInfo(n), input, values, outputs);
+  }
+
+  libraryCalls(id: string): LibraryCall[] {
+    const slot = this.slots.get(id);
+    if (!slot || (slot.cell.kind !== 'formula' && slot.cell.kind !== 'check')) return [];
+    return captureCalls(slot.cell.expr, this.names.scopeFor(slot.cell.expr, this.functions), (key) => {
+      const s = this.slots.get(key);
+      return s?.cell.kind === 'check' ? { value: s.state.value } : s?.state.value;
+    });
   }
 
   // ---- the reactive graph ------------------------------------------------

@@ -4,6 +4,7 @@
 
 import type { CalcDocument } from '../document';
 import type { CellState } from '../engine-types';
+import type { LibraryCall } from '../working/calls';
 import { createEngine } from '../engine';
 import { serialize } from '../format/index';
 import { pack } from './pack';
@@ -22,10 +23,11 @@ export async function exportRecord(
   state: (id: string) => CellState | undefined,
   shell: string,
   exportedAt: string = new Date().toISOString(),
+  calls?: (id: string) => LibraryCall[],
 ): Promise<ExportedRecord> {
   const docText = serialize(doc);
   const digest = await sha256Hex(docText);
-  const html = await pack({ shell, docText, digest, meta: doc.meta, staticHtml: staticHtml(doc, state, { digest, exportedAt }) });
+  const html = await pack({ shell, docText, digest, meta: doc.meta, staticHtml: staticHtml(doc, state, { digest, exportedAt, calls }) });
   return { html, docText, digest };
 }
 
@@ -34,7 +36,7 @@ export async function exportComputed(doc: CalcDocument, shell: string, exportedA
   const engine = createEngine(doc);
   try {
     await engine.settled();
-    return await exportRecord(doc, (id) => engine.state(id), shell, exportedAt);
+    return await exportRecord(doc, (id) => engine.state(id), shell, exportedAt, (id) => engine.libraryCalls?.(id) ?? []);
   } finally {
     engine.dispose();
   }

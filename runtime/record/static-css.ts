@@ -5,6 +5,7 @@
 import type { DocMeta } from '../document';
 import { cssString } from './escape';
 import { CAUTION } from './static-html';
+import { WORKING_CSS } from '../working/css';
 
 /** Printed title-block fields are cut to this many characters so the margin stays one or two lines. */
 const FIELD_MAX = 80;
@@ -112,4 +113,5 @@ html.lt-live > body > #lt-static { display: none; }
   .lt-static a { color: inherit; text-decoration: none; }
   .lt-note a[href^="http"]::after { content: " (" attr(href) ")"; font-size: 8pt; }
 }
+${WORKING_CSS}
 `;

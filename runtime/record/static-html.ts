@@ -14,6 +14,16 @@ import { reviewHtml } from './static-review';
 import { texHtml } from './tex';
 // Figures and sweeps: the DOM-free SVG from runtime/figures (every text in it escaped).
 import { cellSvg } from '../figures/render';
+// The working of each library call, open or folded by the sheet's setting (runtime/working).
+import type { LibraryCall } from '../working/calls';
+import { cellWorkingsHtml, recordOpen } from '../working/sheet';
+import { sheetSystem } from '../units/systems';
+function recordWorkings(doc: CalcDocument, state: (id: string) => CellState | undefined, calls?: (id: string) => LibraryCall[]) {
+  if (!calls) return () => '';
+  const open = recordOpen(doc, state);
+  const face = { tex: (t: string) => texHtml(t, false), system: sheetSystem(doc) };
+  return (cell: Cell) => (cell.kind === 'formula' || cell.kind === 'check' ? cellWorkingsHtml(calls(cell.id), face, open(cell.id)) : '');
+}
 const figureHtml = (cell: Cell, s: CellState | undefined): string => {
   const svg = cellSvg(cell, s);
   return svg ? `<figure class="lt-figure">${svg}</figure>` : '';
@@ -41,6 +51,8 @@ export interface StaticOptions {
   exportedAt?: string;
   /** A plain message for the top of the page (e.g. a failed seal). */
   warning?: string;
+  /** The library calls of a formula or check (Engine.libraryCalls), to print their working. */
+  calls?: (id: string) => LibraryCall[];
 }
 
 export const META_LABELS: Record<keyof DocMeta, string> = {
@@ -68,6 +80,8 @@ interface Ctx {
   state: (id: string) => CellState | undefined;
   scope: HandCalcScope;
   numbers: Map<string, string>;
+  /** The working of a cell's library calls (runtime/working), '' when none. */
+  workings: (cell: Cell) => string;
 }
 
 const done = (s: CellState | undefined): boolean => s?.status === 'ok' || s?.status === 'fail';
@@ -183,10 +197,10 @@ function cellHtml(cell: Cell, ctx: Ctx): string {
       return `${open}<div class="lt-no">${no}</div><div class="lt-body">${inputHtml(cell, s)}</div><div class="lt-res">${
         resultHtml(s)}</div>${refsHtml(cell, s)}</div>`;
     case 'formula':
-      return `${open}<div class="lt-no">${no}</div><div class="lt-body">${formulaHtml(cell, s, ctx)}</div><div class="lt-res">${
+      return `${open}<div class="lt-no">${no}</div><div class="lt-body">${formulaHtml(cell, s, ctx)}${ctx.workings(cell)}</div><div class="lt-res">${
         resultHtml(s)}</div>${refsHtml(cell, s)}</div>`;
     case 'check':
-      return `${open}<div class="lt-no">${no}</div><div class="lt-body">${checkHtml(cell, s, ctx)}</div><div class="lt-res">${
+      return `${open}<div class="lt-no">${no}</div><div class="lt-body">${checkHtml(cell, s, ctx)}${ctx.workings(cell)}</div><div class="lt-res">${
         checkResult(s)}</div>${refsHtml(cell, s)}</div>`;
     default:
       return `${open}<div class="lt-no">${no}</div><div class="lt-body">${otherHtml(cell, s)}</div><div class="lt-res">${
@@ -246,6 +260,7 @@ export function staticHtml(
     state,
     numbers: numberCells(doc.cells),
     scope: { isCell: (n) => byName.has(n), state: (n) => state(byName.get(n) ?? '') },
+    workings: recordWorkings(doc, state, options.calls),
   };
   const warning = options.warning ? `<p class="lt-warning" role="alert">${escapeHtml(options.warning)}</p>` : '';
   const foot = [

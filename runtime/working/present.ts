@@ -26,6 +26,8 @@ export interface StepLine {
 
 export interface CallBlock {
   kind: 'call';
+  /** The library function's name. */
+  fn: string;
   /** The call with its arguments, as TeX: vc_punch(5000 psi, 20 in, ...). */
   head: string;
   /** name = value for each argument. */
@@ -102,10 +104,13 @@ export function stepTex(s: Step, sheet: UnitSystem): string {
       isCell: (n) => n in s.vars,
       state: (n) => (n in s.vars ? stateOf(shownDisplay(s.vars[n], system)) : undefined),
     };
-    parts.push(exprTex(node, scope, 'symbolic'));
+    // A result named again (vc_a = vc_a) shows its value once.
+    const same = node.type === 'SymbolNode' && (node as unknown as { name: string }).name === s.symbol;
+    if (!same) parts.push(exprTex(node, scope, 'symbolic'));
     if (node.type !== 'ConstantNode') parts.push(exprTex(node, scope, 'values'));
   }
-  if (parts[parts.length - 1] !== result) parts.push(result);
+  const bare = (t: string) => t.replace(/^\{(.*)\}$/, '$1');
+  if (bare(parts[parts.length - 1]) !== bare(result)) parts.push(result);
   return parts.join(' = ');
 }
 
@@ -129,6 +134,7 @@ export function callBlock(g: Group, system: UnitSystem, seen = new Set<string>()
   for (const e of g.entries) lines.push(entryLine(e, system, here));
   const block: CallBlock = {
     kind: 'call',
+    fn: g.fn,
     head: callHead(g, system),
     inputs: g.inputs.map((i) => inputTex(i.name, i.value, system)),
     lines,

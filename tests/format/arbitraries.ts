@@ -2,6 +2,7 @@
 // every corner the quoting rule must handle: newlines, CR, quotes, backslashes,
 // leading/trailing blanks, `|`, `=`, `#` starts, hidden characters, lone surrogates.
 
+import { WORKING_CHOICES } from '../../runtime/format/settings';
 import fc from 'fast-check';
 import type { CalcDocument, Cell, DocMeta } from '../../runtime/document';
 import { reviewStates } from '../review/arbitraries';
@@ -122,6 +123,6 @@ export const meta: fc.Arbitrary<DocMeta> = fc.record(
 
 /** About half the documents carry a review (revisions, remarks, sign-offs: FORMAT.md "Review"). */
 export const documents: fc.Arbitrary<CalcDocument> = fc.record(
-  { meta, cells, review: reviewStates(anyText) },
+  { meta, cells, review: reviewStates(anyText), working: fc.constantFrom(...WORKING_CHOICES) },
   { ...opts, requiredKeys: ['meta', 'cells'] },
 );
