@@ -3,7 +3,9 @@
 // demo record and on a generated 2,000-cell record with the same 10 dependents.
 // Prints medians, 90th percentiles and the ratio.
 
-import { readFileSync, rmSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import type { CalcDocument, Cell } from '../runtime/document';
@@ -151,40 +153,58 @@ async function measure(page: Page, key: string, doc: CalcDocument): Promise<{ ed
   return { edits: times, opened };
 }
 
+/** Builds another checkout's app (BENCH_BASE) with that checkout's own vite. */
+function buildBase(dir: string): string {
+  const outDir = mkdtempSync(join(tmpdir(), 'loadtrace-dist-base-'));
+  const r = spawnSync(join(dir, 'node_modules/.bin/vite'), ['build', '--outDir', outDir, '--emptyOutDir', '--logLevel', 'warn'], { cwd: dir, encoding: 'utf8' });
+  if (r.status !== 0) throw new Error(`vite build of ${dir} failed:\n${r.stdout}\n${r.stderr}`);
+  return outDir;
+}
+
+/**
+ * BENCH_BASE=DIR (another checkout with node_modules) measures its app too, each record
+ * alternating between the two builds in one browser, and prints both side by side with the
+ * ratio: before and after a change, in one run under the same load.
+ */
 async function main(): Promise<void> {
   const demo = parse(readFileSync(join(ROOT, 'docs-templates/demo.lt'), 'utf8')).doc;
   const small: CalcDocument = { ...demo, cells: [...benchBlock(), ...demo.cells] };
   const big = withFiller(small, SIZE);
-  const outDir = buildApp();
-  const server = await serve(outDir);
+  const builds = [{ label: process.env.BENCH_BASE ? 'this checkout' : '', dir: buildApp() }];
+  if (process.env.BENCH_BASE) builds.push({ label: 'base', dir: buildBase(process.env.BENCH_BASE) });
+  const servers = await Promise.all(builds.map((b) => serve(b.dir)));
   const browser = await launch();
   // Printed only after the browser and server are closed, so a closed pipe cannot leave them running.
   const out: string[] = [];
   try {
     const page = browser.context.pages()[0] ?? (await browser.context.newPage());
-    await page.goto(server.url);
-    await page.waitForSelector('body[data-ready="true"]', { timeout: 30_000 });
-    const ta = await measure(page, 'bench-demo', small);
-    const tb = await measure(page, 'bench-2000', big);
     const fmt = (x: number) => x.toFixed(1).padStart(6);
-    const line = (label: string, { edits: t, opened: o }: { edits: EditTiming[]; opened: OpenTiming }) => {
-      const all = stats(t.map((x) => x.ms));
-      const part = (f: (x: EditTiming) => number) => fmt(stats(t.map(f)).median);
-      const first = t.filter((x) => x.inFirstFrame).length;
-      out.push(`  ${label} median ${fmt(all.median)} ms   p90 ${fmt(all.p90)} ms   (medians: handler ${part((x) => x.sync)}, then compute + re-typeset ${part((x) => x.work)}; edit to next frame start ${part((x) => x.frame)}, to that frame rendered ${part((x) => x.rendered)}; done before that frame in ${first} of ${t.length} edits)`);
-      opens.push(`  ${label} engine settled ${fmt(o.firstView)} ms, cells in and near view typeset ${fmt(o.allRendered)} ms, longest task ${fmt(o.longestTask)} ms`);
-      return all.median;
-    };
     const opens: string[] = [];
+    const medians: number[][] = builds.map(() => []);
     out.push(`edit → last of 10 dependents re-typeset (${EDITS} edits each, headless Chromium)`);
-    const a = line(`demo record (${small.cells.length} cells):     `, ta);
-    const b = line(`generated record (${big.cells.length} cells):`, tb);
-    out.push(`  ratio 2,000-cell / demo (medians): ${(b / a).toFixed(2)}`);
+    for (const [name, doc] of [['demo record', small], ['generated record', big]] as const) {
+      for (let i = 0; i < builds.length; i++) {
+        await page.goto(servers[i].url);
+        await page.waitForSelector('body[data-ready="true"]', { timeout: 30_000 });
+        const { edits: t, opened: o } = await measure(page, `bench-${name.split(' ')[0]}-${i}`, doc);
+        const all = stats(t.map((x) => x.ms));
+        const part = (f: (x: EditTiming) => number) => fmt(stats(t.map(f)).median);
+        const first = t.filter((x) => x.inFirstFrame).length;
+        const label = `${`${name} (${doc.cells.length} cells)`.padEnd(31)}${builds[i].label ? ` ${builds[i].label.padEnd(13)}` : ''}`;
+        out.push(`  ${label} median ${fmt(all.median)} ms   p90 ${fmt(all.p90)} ms   (medians: handler ${part((x) => x.sync)}, then compute + re-typeset ${part((x) => x.work)}; edit to next frame start ${part((x) => x.frame)}, to that frame rendered ${part((x) => x.rendered)}; done before that frame in ${first} of ${t.length} edits)`);
+        opens.push(`  ${label} engine settled ${fmt(o.firstView)} ms, cells in and near view typeset ${fmt(o.allRendered)} ms, longest task ${fmt(o.longestTask)} ms`);
+        medians[i].push(all.median);
+      }
+    }
+    out.push(`  ratio 2,000-cell / demo (medians): ${medians.map((m) => (m[1] / m[0]).toFixed(2)).join(' / ')}`);
+    if (builds.length > 1) {
+      out.push(`  this checkout / base (medians): demo ${(medians[0][0] / medians[1][0]).toFixed(2)}, generated ${(medians[0][1] / medians[1][1]).toFixed(2)}`);
+    }
     out.push('opening the record (one run each)', ...opens);
   } finally {
     await browser.close();
-    server.stop();
-    rmSync(outDir, { recursive: true, force: true });
+    servers.forEach((s) => s.stop());
+    for (const b of builds) rmSync(b.dir, { recursive: true, force: true });
   }
   process.stdout.write(`${out.join('\n')}\n`);
 }
