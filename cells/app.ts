@@ -4,8 +4,8 @@
 import type { CalcDocument, CellKind, DocMeta } from '../runtime/document';
 import { cellName } from '../runtime/document';
 import {
-  EditError, addCell, canRedo, canUndo, deleteCell, duplicateCell, moveCell, record, redo, setCellFields,
-  setInputValueKeepUnit, setMeta, startHistory, undo, type CellFields, type History,
+  EditError, SourceError, addCell, applySource, canRedo, canUndo, cellSource, deleteCell, duplicateCell, moveCell, record, redo,
+  setCellFields, setInputValueKeepUnit, setMeta, startHistory, undo, type CellFields, type History,
 } from '../runtime/edit/index';
 import { createEngine } from '../runtime/engine';
 import type { Engine } from '../runtime/engine-types';
@@ -13,8 +13,6 @@ import { sheetSystem, switchSystem, type UnitMemory } from '../runtime/units/sys
 import { Autosave } from './autosave';
 import { CellEditor } from './cell-editor';
 import { ComputingState } from './computing';
-import { SourceError } from './kind';
-import { cellSource, editSource } from './registry';
 import { SheetView } from './sheet-view';
 import { sheetTitle } from './templates';
 import { TitleBlock } from './title-block';
@@ -254,7 +252,7 @@ export class App {
     if (!cell) return { message: 'this cell is no longer in the sheet' };
     try {
       this.fromEditor = true;
-      this.apply(editSource(this.doc, cell, source), `src:${id}`);
+      this.apply(applySource(this.doc, id, source), `src:${id}`);
       return undefined;
     } catch (e) {
       if (e instanceof SourceError) return { message: e.message, column: e.column };

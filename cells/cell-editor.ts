@@ -5,10 +5,11 @@
 // what is typed there carries over.
 
 import type { Cell } from '../runtime/document';
-import type { CellFields } from '../runtime/edit/index';
+import { cellSource, type CellFields } from '../runtime/edit/index';
 import type { CellState } from '../runtime/engine-types';
-import { escapeHtml, exprOffset } from './kind';
-import { cellSource } from './registry';
+import { describe, type FieldSpec } from '../runtime/kinds/index';
+import { exprOffset } from '../runtime/kinds/shared';
+import { escapeHtml } from '../runtime/present/escape';
 import type { SourceEditor, SourceMark } from './source-editor';
 import { loadSourceEditor } from './source-editor-load';
 import type { Vocabulary } from './vocabulary';
@@ -21,46 +22,18 @@ export interface CellEditorHooks {
   vocabulary(): Vocabulary;
 }
 
-type FieldSpec = { key: keyof CellFields; label: string; size: number; hint?: string };
-
-const FIELDS: Partial<Record<Cell['kind'], FieldSpec[]>> = {
-  section: [{ key: 'clause', label: 'Reference', size: 24 }],
-  note: [{ key: 'clause', label: 'Reference', size: 24 }],
-  input: [
-    { key: 'label', label: 'Label', size: 36 },
-    { key: 'unit', label: 'Display unit', size: 10, hint: 'e.g. in, MPa' },
-    { key: 'min', label: 'Least', size: 10 },
-    { key: 'max', label: 'Greatest', size: 10 },
-    { key: 'choices', label: 'Choices', size: 24, hint: 'comma-separated' },
-    { key: 'description', label: 'About', size: 36 },
-    { key: 'clause', label: 'Reference', size: 24 },
-  ],
-  formula: [
-    { key: 'label', label: 'Label', size: 36 },
-    { key: 'unit', label: 'Display unit', size: 10, hint: 'e.g. kip*ft' },
-    { key: 'precision', label: 'Sig. figures', size: 3 },
-    { key: 'clause', label: 'Reference', size: 24 },
-  ],
-  check: [
-    { key: 'label', label: 'Label', size: 36 },
-    { key: 'clause', label: 'Reference', size: 24 },
-  ],
-  // Figure and sweep kinds (cells/figure.ts, cells/sweep.ts): label and reference.
-  figure: [{ key: 'label', label: 'Label', size: 36 }, { key: 'clause', label: 'Reference', size: 24 }],
-  sweep: [{ key: 'label', label: 'Label', size: 36 }, { key: 'clause', label: 'Reference', size: 24 }],
-};
-
 const DEBOUNCE_MS = 180;
 
-function fieldText(cell: Cell, key: keyof CellFields): string {
-  const v = (cell as unknown as Record<string, unknown>)[key];
+function fieldText(cell: Cell, key: string): string {
+  const v: unknown = Reflect.get(cell, key);
   if (Array.isArray(v)) return v.join(', ');
   return v === undefined ? '' : String(v);
 }
 
-function fieldValue(key: keyof CellFields, text: string): CellFields[keyof CellFields] {
-  if (key === 'choices') return text.split(',').map((s) => s.trim()).filter(Boolean);
-  if (key === 'precision') return text.trim() === '' ? undefined : Number(text.trim());
+/** The value a field's text stands for, as its kind's description reads it. */
+function fieldValue(spec: FieldSpec<Cell> | undefined, text: string): unknown {
+  if (spec?.type === 'list') return text.split(',').map((s) => s.trim()).filter(Boolean);
+  if (spec?.type === 'integer') return text.trim() === '' ? undefined : Number(text.trim());
   return text.trim();
 }
 
@@ -89,9 +62,9 @@ export class CellEditor {
     this.message.setAttribute('aria-live', 'polite');
     const fields = document.createElement('div');
     fields.className = 'editor-fields';
-    fields.innerHTML = (FIELDS[cell.kind] ?? [{ key: 'label', label: 'Label', size: 36 }, { key: 'clause', label: 'Reference', size: 24 }])
-      .map((f) => `<label>${escapeHtml(f.label)} <input data-field="${f.key}" size="${f.size}" value="${
-        escapeHtml(fieldText(cell, f.key))}"${f.hint ? ` placeholder="${escapeHtml(f.hint)}"` : ''}></label>`)
+    fields.innerHTML = describe(cell.kind).fields
+      .map((f) => `<label>${escapeHtml(f.label)} <input data-field="${escapeHtml(String(f.key))}" size="${f.size}" value="${
+        escapeHtml(fieldText(cell, String(f.key)))}"${f.hint ? ` placeholder="${escapeHtml(f.hint)}"` : ''}></label>`)
       .join('');
     const bar = document.createElement('div');
     bar.className = 'editor-bar';
@@ -99,7 +72,8 @@ export class CellEditor {
     panel.append(srcHost, this.message, fields, bar);
     host.append(panel);
 
-    if (cell.kind === 'section') {
+    const mode = describe(cell.kind).source.mode;
+    if (mode === 'line') {
       const t = document.createElement('input');
       t.className = 'title-field';
       t.value = cellSource(cell);
@@ -109,18 +83,18 @@ export class CellEditor {
       srcHost.append(t);
       this.titleField = t;
     } else {
-      const label = cell.kind === 'note' ? 'Note text' : `${cell.kind} source`;
+      const label = mode === 'note' ? 'Note text' : `${cell.kind} source`;
       const plain = document.createElement('textarea');
       plain.className = 'src-plain';
       plain.value = cellSource(cell);
       // As tall as the editor that replaces it: a formula is one line, a note gets room to grow.
-      plain.rows = Math.min(12, plain.value.split('\n').length + (cell.kind === 'note' ? 1 : 0));
+      plain.rows = Math.min(12, plain.value.split('\n').length + (mode === 'note' ? 1 : 0));
       plain.spellcheck = false;
       plain.setAttribute('aria-label', label);
       plain.addEventListener('input', () => this.schedule(plain.value));
       plain.addEventListener('keydown', (e) => {
         // As in the full editor: a formula is one line, so Enter finishes it.
-        if (cell.kind !== 'note' && e.key === 'Enter' && !e.shiftKey && !e.ctrlKey && !e.metaKey) {
+        if (mode !== 'note' && e.key === 'Enter' && !e.shiftKey && !e.ctrlKey && !e.metaKey) {
           e.preventDefault();
           this.close(true);
         } else this.onFieldKey(e);
@@ -136,7 +110,7 @@ export class CellEditor {
         this.source = new Editor({
           parent: srcHost,
           text,
-          mode: cell.kind === 'note' ? 'note' : 'formula',
+          mode,
           vocabulary: () => hooks.vocabulary(),
           label,
           onChange: (t) => this.schedule(t),
@@ -250,9 +224,10 @@ export class CellEditor {
   private applyFieldsNow(fields: HTMLElement): void {
     this.fieldTimer = undefined;
     const patch: CellFields = {};
+    const specs = describe(this.cell.kind).fields;
     fields.querySelectorAll<HTMLInputElement>('input[data-field]').forEach((inp) => {
-      const key = inp.dataset.field as keyof CellFields;
-      (patch as Record<string, unknown>)[key] = fieldValue(key, inp.value);
+      const key = inp.dataset.field ?? '';
+      Reflect.set(patch, key, fieldValue(specs.find((f) => f.key === key), inp.value));
     });
     const problem = this.hooks.applyFields(this.cell.id, patch);
     this.setMessage(problem ?? '');

@@ -1,6 +1,6 @@
 // Keyboard shortcuts: one table, used both to dispatch keys and to fill the help panel.
 
-import { escapeHtml } from './kind';
+import { escapeHtml } from '../runtime/present/escape';
 
 export type Command =
   | 'next' | 'prev' | 'edit' | 'editFull' | 'moveUp' | 'moveDown' | 'duplicate' | 'delete'

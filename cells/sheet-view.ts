@@ -5,15 +5,18 @@
 // memory. Printing typesets every cell.
 
 import DOMPurify from 'dompurify';
-import type { CalcDocument, Cell } from '../runtime/document';
-import { cellName } from '../runtime/document';
+import { cellName, type CalcDocument, type Cell } from '../runtime/document';
 import type { Engine } from '../runtime/engine-types';
+import { cellSource } from '../runtime/edit/index';
 import { samePlaces } from '../runtime/graph/doc-diff';
-import { escapeHtml, type BindContext } from './kind';
-import { bindCell, cellSource, numberCells, renderView } from './registry';
-import { writeSummary } from './summary';
+import { describe } from '../runtime/kinds/index';
+import type { ViewContext } from '../runtime/present/cell-frame';
+import { escapeHtml } from '../runtime/present/escape';
+import { numberCells } from '../runtime/present/numbering';
+import { inSummary, writeSummary } from './summary';
 import { writeCellContent } from './step-patch';
 import { LaterBatches } from './later-batches';
+import { listenToValueFields } from './value-fields';
 import { WorkingFolds } from './working';
 
 export interface SheetEvents {
@@ -67,9 +70,14 @@ export class SheetView {
     private readonly summaryHost: HTMLElement,
     private readonly events: SheetEvents,
   ) {
-    host.addEventListener('keydown', (e) => this.onKey(e));
-    host.addEventListener('focusout', (e) => this.onFocusOut(e));
-    host.addEventListener('change', (e) => this.onChange(e));
+    listenToValueFields(host, {
+      inputOf: (t) => {
+        const cell = this.slots.get(this.cellIdOf(t) ?? '')?.cell;
+        return cell?.kind === 'input' ? cell : undefined;
+      },
+      commitValue: (id, value) => events.commitValue(id, value),
+      restoring: () => this.restoring,
+    });
     host.addEventListener('click', (e) => this.onClick(e));
     // Whatever has the focus is the selected cell (Tab, Esc out of a field, a click).
     host.addEventListener('focusin', (e) => {
@@ -196,7 +204,7 @@ export class SheetView {
         if (name) this.byName.set(name, cell.id);
       }
       slot.cell = cell;
-      checks ||= cell.kind === 'check';
+      checks ||= inSummary(cell);
       this.renderCell(cell.id);
     }
     if (checks) this.renderSummary();
@@ -211,7 +219,7 @@ export class SheetView {
       if (name) this.readers.get(name)?.forEach((r) => todo.add(r));
     }
     for (const id of todo) this.renderCell(id);
-    if (changed.some((id) => this.slots.get(id)?.cell.kind === 'check')) this.renderSummary();
+    if (changed.some((id) => inSummary(this.slots.get(id)?.cell))) this.renderSummary();
   }
 
   /** Marks pending cells while the engine takes long (called after ~100 ms). */
@@ -289,7 +297,7 @@ export class SheetView {
     return { cell, el, content: el.firstElementChild as HTMLElement, number: this.numbers.get(cell.id) ?? '', near: false, stale: true };
   }
 
-  private context(id: string): BindContext {
+  private context(id: string): ViewContext {
     const engine = this.engine!;
     return {
       state: (i) => engine.state(i),
@@ -316,10 +324,10 @@ export class SheetView {
       if (!set) this.readers.set(name, (set = new Set()));
       set.add(id);
     }
-    const view = bindCell(slot.cell, this.context(id));
-    let html = renderView(slot.cell, view);
-    if (slot.cell.kind === 'note') {
-      // Notes come from the document: one more pass, so no markup a sheet carries can run.
+    const view = describe(slot.cell.kind).live(slot.cell, this.context(id));
+    let html = view.html;
+    if (view.fromMarkdown) {
+      // Markdown comes from the document: one more pass, so no markup a sheet carries can run.
       html = DOMPurify.sanitize(html, { ALLOWED_URI_REGEXP: /^(?:https?:|#)/i, ADD_ATTR: ['target'] });
     }
     // Only this view's own classes change; others (selection, review marks) stay.
@@ -351,39 +359,6 @@ export class SheetView {
 
   private cellIdOf(target: EventTarget | null): string | undefined {
     return (target as HTMLElement | null)?.closest?.<HTMLElement>('article.cell')?.dataset.id;
-  }
-
-  private commitField(field: HTMLInputElement | HTMLSelectElement): void {
-    const id = this.cellIdOf(field);
-    const cell = id ? this.slots.get(id)?.cell : undefined;
-    if (!id || cell?.kind !== 'input') return;
-    const value = field.value.trim();
-    if (value !== cell.value) this.events.commitValue(id, value);
-  }
-
-  private onKey(e: KeyboardEvent): void {
-    const field = e.target as HTMLElement;
-    if (!(field instanceof HTMLInputElement) || !field.classList.contains('value-field')) return;
-    if (e.key === 'Enter') {
-      e.preventDefault();
-      this.commitField(field);
-    } else if (e.key === 'Escape') {
-      const cell = this.slots.get(this.cellIdOf(field) ?? '')?.cell;
-      if (cell?.kind === 'input') field.value = cell.value;
-      field.closest<HTMLElement>('article.cell')?.focus();
-      e.stopPropagation();
-    }
-  }
-
-  private onFocusOut(e: FocusEvent): void {
-    if (this.restoring) return;
-    const field = e.target;
-    if (field instanceof HTMLInputElement && field.classList.contains('value-field')) this.commitField(field);
-  }
-
-  private onChange(e: Event): void {
-    const field = e.target;
-    if (field instanceof HTMLSelectElement && field.classList.contains('value-field')) this.commitField(field);
   }
 
   private onClick(e: MouseEvent): void {

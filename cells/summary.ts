@@ -5,7 +5,8 @@ import type { CalcDocument, Cell, CheckCell } from '../runtime/document';
 import { cellsInError, inErrorText, type CellInError } from '../runtime/graph/in-error';
 import type { CellState } from '../runtime/engine-types';
 import { ratioText } from '../runtime/handcalc/index';
-import { escapeHtml } from './kind';
+import { describe } from '../runtime/kinds/index';
+import { escapeHtml } from '../runtime/present/escape';
 
 export interface SummaryRow {
   id: string;
@@ -62,6 +63,11 @@ export function summaryHtml(rows: SummaryRow[], inError: readonly CellInError[] 
       glyph}</span> ${word}</span>${ratio}<span class="sum-no">${escapeHtml(r.number)}</span><span class="sum-title">${escapeHtml(r.title)}</span></a></li>`;
   });
   return `<h2 class="summary-head">Summary of checks <span class="summary-count">${escapeHtml(head)}</span></h2><ol class="summary-list">${items.join('')}</ol>`;
+}
+
+/** Is the cell listed in the summary of checks? */
+export function inSummary(cell: Cell | undefined): boolean {
+  return !!cell && describe(cell.kind).summaryTitle !== null;
 }
 
 /** Writes the summary of `cells`' checks into `host`, when it reads differently from what is there. */

@@ -3,7 +3,7 @@
 
 import type { DocMeta } from '../runtime/document';
 import { META_KEYS } from '../runtime/document';
-import { escapeHtml } from './kind';
+import { escapeHtml } from '../runtime/present/escape';
 
 const LABELS: Record<keyof DocMeta, string> = {
   project: 'Project', job: 'Job no.', subject: 'Subject', preparedBy: 'Prepared by',

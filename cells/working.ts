@@ -8,7 +8,7 @@ import type { Engine } from '../runtime/engine-types';
 import { sheetSystem } from '../runtime/units/systems';
 import { workingHtml } from '../runtime/working/html';
 import { callFor } from '../runtime/working/sheet';
-import { texHtml } from './tex';
+import { texHtml } from '../runtime/present/tex-live';
 
 export class WorkingFolds {
   /** Per cell, the calls (by index) whose fold is open. */

@@ -121,15 +121,7 @@ export function emptyMeta(): DocMeta {
   return { project: '', job: '', subject: '', preparedBy: '', checkedBy: '', revision: '', date: '' };
 }
 
-/** The name a cell publishes to the graph, if any. */
+/** The name a cell publishes to the graph, if any: the `name` of a kind that has one. */
 export function cellName(cell: Cell): string | undefined {
-  switch (cell.kind) {
-    case 'input':
-    case 'formula':
-      return cell.name;
-    case 'check':
-      return cell.name;
-    default:
-      return undefined;
-  }
+  return 'name' in cell ? cell.name : undefined;
 }

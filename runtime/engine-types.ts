@@ -2,11 +2,12 @@
 // Values are SI base units inside the engine; `display` is the value converted
 // to the cell's display unit and formatted for people.
 
-import type { LibraryCall } from './working/calls';
+import type { CellStatus } from './cell-status';
 import type { CalcDocument } from './document';
 import type { FigureSpec, SweepResult } from './figures/spec';
+import type { LibraryCall } from './library/call';
 
-export type CellStatus = 'pending' | 'ok' | 'fail' | 'error';
+export type { CellStatus };
 
 export type ErrorKind =
   | 'syntax'          // the text does not parse; `column` says where

@@ -10,7 +10,7 @@ import {
   DOC_ID, STATIC_CSS, checkEmbedded, exportRecord, pageCss, readDocumentSource, staticHtml,
 } from '../../runtime/record/index';
 import type { App } from '../app';
-import { escapeHtml } from '../kind';
+import { escapeHtml } from '../../runtime/present/escape';
 import { sheetTitle } from '../templates';
 import { recordShell } from './shell';
 import { callsOf } from '../../runtime/working/calls';

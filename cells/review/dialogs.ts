@@ -7,7 +7,7 @@ import { cellsInError, inErrorText, type CellInError } from '../../runtime/graph
 import { parse } from '../../runtime/format/index';
 import { readDocumentSource } from '../../runtime/record/index';
 import { compare, diffRecords, issueRevision, latestRevision, nextRevisionLabel } from '../../runtime/review/index';
-import { escapeHtml } from '../kind';
+import { escapeHtml } from '../../runtime/present/escape';
 import type { ReviewHost } from './host';
 import { changeCount, comparisonHtml } from './tables';
 

@@ -6,7 +6,7 @@ import type { CalcDocument } from '../../runtime/document';
 import type { Comparison } from '../../runtime/review/index';
 import { isStale } from '../../runtime/review/index';
 import type { Comment, Revision, SignOff } from '../../runtime/review/types';
-import { escapeHtml } from '../kind';
+import { escapeHtml } from '../../runtime/present/escape';
 import { changeCount, comparisonHtml } from './tables';
 
 /** Document text with its line breaks kept. */

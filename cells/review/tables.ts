@@ -5,7 +5,7 @@
 import type { Comparison, InputChange, ResultChange } from '../../runtime/review/index';
 import type { IssuedResult } from '../../runtime/review/types';
 import { deltaText } from '../../runtime/review/diff-text';
-import { escapeHtml } from '../kind';
+import { escapeHtml } from '../../runtime/present/escape';
 
 const VERDICT: Record<IssuedResult['status'], string> = { ok: 'OK', fail: 'NOT OK', error: 'error', pending: 'pending' };
 

@@ -3,3 +3,4 @@
 export * from './ops';
 export * from './history';
 export * from './delta';
+export * from './source';

@@ -4,6 +4,8 @@
 import type { CalcDocument, Cell, CellKind, DocMeta } from '../document';
 import { cellName } from '../document';
 import { isName, renameUses } from '../formula/tokens';
+import { describe } from '../kinds/index';
+import { COMMON_FIELDS, type CellFields, type CellOf } from '../kinds/types';
 import { hasFeetInches } from '../units/feet-inches';
 import { canonicalUnit, typedUnit } from '../units/systems';
 
@@ -41,20 +43,11 @@ export function freshName(doc: CalcDocument, name: string): string {
   }
 }
 
-const STEMS: Record<CellKind, string> = { section: 's', note: 'n', input: 'i', formula: 'f', check: 'k', figure: 'g', sweep: 'w' };
-
 /** A new cell of `kind` with placeholder content that computes. */
-export function blankCell(doc: CalcDocument, kind: CellKind): Cell {
-  const id = freshId(doc, STEMS[kind]);
-  switch (kind) {
-    case 'section': return { id, kind, title: 'New section' };
-    case 'note': return { id, kind, text: 'Note.' };
-    case 'input': return { id, kind, name: freshName(doc, 'x'), value: '1' };
-    case 'formula': return { id, kind, name: freshName(doc, 'y'), expr: '1' };
-    case 'check': return { id, kind, expr: '1 <= 2' };
-    case 'figure': return { id, kind, expr: 'punching_plan(12 in, 12 in, 6 in, "interior")' };
-    case 'sweep': return { id, kind, input: '', from: '', to: '', outputs: [] };
-  }
+export function blankCell<K extends CellKind>(doc: CalcDocument, kind: K): CellOf<K> {
+  const d = describe(kind);
+  if (!d.blank) throw new EditError(`a ${kind} cell cannot be added`);
+  return d.blank(freshId(doc, d.stem), (stem) => freshName(doc, stem));
 }
 
 function withCells(doc: CalcDocument, cells: Cell[]): CalcDocument {
@@ -82,10 +75,8 @@ export function addCell(doc: CalcDocument, kind: CellKind, afterId?: string): { 
 export function duplicateCell(doc: CalcDocument, id: string): { doc: CalcDocument; id: string } {
   const i = indexOfCell(doc, id);
   const src = doc.cells[i];
-  const copy = { ...src, id: freshId(doc, STEMS[src.kind]) } as Cell;
-  if (copy.kind === 'input' || copy.kind === 'formula') copy.name = freshName(doc, copy.name);
-  if (copy.kind === 'check' && copy.name) copy.name = freshName(doc, copy.name);
-  if (copy.kind === 'input' && copy.choices) copy.choices = copy.choices.slice();
+  const copy: Cell = { ...structuredClone(src), id: freshId(doc, describe(src.kind).stem) };
+  if ('name' in copy && copy.name) copy.name = freshName(doc, copy.name);
   return { doc: insertCell(doc, copy, i + 1), id: copy.id };
 }
 
@@ -117,15 +108,10 @@ export function updateCell<C extends Cell>(doc: CalcDocument, id: string, patch:
   return withCells(doc, cells);
 }
 
-function expectKind<K extends CellKind>(cell: Cell, kinds: K[]): Extract<Cell, { kind: K }> {
-  if (!(kinds as string[]).includes(cell.kind)) throw new EditError(`cell "${cell.id}" is a ${cell.kind}, not a ${kinds.join(' or ')}`);
-  return cell as Extract<Cell, { kind: K }>;
-}
-
 /** Stores an input's value exactly as typed; a bad value is kept so the engine can report it. */
 export function setInputValue(doc: CalcDocument, id: string, value: string): CalcDocument {
-  return updateCell(doc, id, (c) => {
-    const cell = expectKind(c, ['input']);
+  return updateCell(doc, id, (cell) => {
+    if (cell.kind !== 'input') throw new EditError(`cell "${cell.id}" is a ${cell.kind}, not an input`);
     return cell.value === value ? cell : { ...cell, value };
   });
 }
@@ -148,65 +134,52 @@ export function setInputValueKeepUnit(doc: CalcDocument, id: string, value: stri
   return setCellFields(next, id, { unit: hasFeetInches(before.value) ? 'in' : was });
 }
 
-/** Sets the expression of a formula or the condition of a check. */
+/** Sets the expression of a cell that has one (a formula's, a check's condition, a figure's call). */
 export function setExpr(doc: CalcDocument, id: string, expr: string): CalcDocument {
-  return updateCell(doc, id, (c) => {
-    const cell = expectKind(c, ['formula', 'check']);
+  return updateCell(doc, id, (cell) => {
+    if (!('expr' in cell)) throw new EditError(`cell "${cell.id}" is a ${cell.kind}, which has no expression`);
     return cell.expr === expr ? cell : { ...cell, expr };
   });
 }
 
-export function setNoteText(doc: CalcDocument, id: string, text: string): CalcDocument {
-  return updateCell(doc, id, (c) => {
-    const cell = expectKind(c, ['note']);
-    return cell.text === text ? cell : { ...cell, text };
-  });
+export type { CellFields };
+
+/** The fields a cell of this kind may set: its editor panel's, and those every cell has. */
+function fieldsOf(kind: CellKind): Map<string, ((value: unknown) => string | undefined) | undefined> {
+  return new Map([...COMMON_FIELDS.map((k) => [k, undefined] as const), ...describe(kind).fields.map((f) => [String(f.key), f.check] as const)]);
 }
 
-export function setSectionTitle(doc: CalcDocument, id: string, title: string): CalcDocument {
-  return updateCell(doc, id, (c) => {
-    const cell = expectKind(c, ['section']);
-    return cell.title === title ? cell : { ...cell, title };
-  });
+/**
+ * `cell` with each field set to its value, or removed when the value is undefined; the
+ * same object when nothing changes. The keys are the caller's to check against the
+ * kind (its fields, its source), so the copy is written by key.
+ */
+export function withFields<C extends Cell>(cell: C, entries: Iterable<[string, unknown]>): C {
+  const next: C = { ...cell };
+  let changed = false;
+  for (const [key, value] of entries) {
+    if (value === undefined) {
+      if (key in next) { Reflect.deleteProperty(next, key); changed = true; }
+    } else if (JSON.stringify(Reflect.get(next, key)) !== JSON.stringify(value)) {
+      Reflect.set(next, key, Array.isArray(value) ? value.slice() : value);
+      changed = true;
+    }
+  }
+  return changed ? next : cell;
 }
-
-/** Text fields any kind may carry; `undefined` or '' removes the field. */
-export type CellFields = Partial<{
-  label: string; clause: string; unit: string; precision: number;
-  min: string; max: string; choices: string[]; description: string;
-}>;
-
-const FIELD_KINDS: Record<keyof CellFields, CellKind[]> = {
-  label: ['section', 'note', 'input', 'formula', 'check', 'figure', 'sweep'],
-  clause: ['section', 'note', 'input', 'formula', 'check', 'figure', 'sweep'],
-  unit: ['input', 'formula'],
-  precision: ['formula'],
-  min: ['input'],
-  max: ['input'],
-  choices: ['input'],
-  description: ['input'],
-};
 
 /** Sets (or, with '' / undefined / [], removes) the optional fields of a cell. */
 export function setCellFields(doc: CalcDocument, id: string, fields: CellFields): CalcDocument {
   return updateCell(doc, id, (cell) => {
-    const next: Record<string, unknown> = { ...cell };
-    let changed = false;
-    for (const [key, value] of Object.entries(fields) as [keyof CellFields, unknown][]) {
-      if (!FIELD_KINDS[key].includes(cell.kind)) throw new EditError(`a ${cell.kind} cell has no ${key}`);
-      const empty = value === undefined || value === '' || (Array.isArray(value) && value.length === 0);
-      if (key === 'precision' && !empty && !(Number.isInteger(value) && (value as number) >= 1 && (value as number) <= 15)) {
-        throw new EditError('precision is a whole number of significant figures from 1 to 15');
-      }
-      const old = next[key];
-      if (empty) {
-        if (key in next) { delete next[key]; changed = true; }
-      } else if (JSON.stringify(old) !== JSON.stringify(value)) {
-        next[key] = Array.isArray(value) ? value.slice() : value;
-        changed = true;
-      }
-    }
-    return changed ? (next as unknown as Cell) : cell;
+    const allowed = fieldsOf(cell.kind);
+    const entries = Object.entries(fields).map(([key, value]): [string, unknown] => {
+      if (!allowed.has(key)) throw new EditError(`a ${cell.kind} cell has no ${key}`);
+      if (value === '' || (Array.isArray(value) && value.length === 0)) return [key, undefined];
+      const problem = value === undefined ? undefined : allowed.get(key)?.(value);
+      if (problem) throw new EditError(problem);
+      return [key, value];
+    });
+    return withFields(cell, entries);
   });
 }
 
@@ -229,31 +202,21 @@ export function renameInExpr(expr: string, from: string, to: string): string {
 export function renameCell(doc: CalcDocument, id: string, name: string, updateReferences = true): CalcDocument {
   const i = indexOfCell(doc, id);
   const cell = doc.cells[i];
-  if (cell.kind !== 'input' && cell.kind !== 'formula' && cell.kind !== 'check') {
-    throw new EditError(`a ${cell.kind} cell has no name`);
-  }
-  const old = cell.name;
-  if (cell.kind === 'check' && name === '') {
-    const { name: _dropped, ...rest } = cell;
-    return updateCell(doc, id, () => rest as Cell);
+  const named = describe(cell.kind).named;
+  if (!named) throw new EditError(`a ${cell.kind} cell has no name`);
+  const old = cellName(cell);
+  if (named === 'optional' && name === '') {
+    if (old === undefined) return doc;
+    return updateCell(doc, id, (c) => withFields(c, [['name', undefined]]));
   }
   if (old === name) return doc;
   const problem = nameClash(doc, id, name);
   if (problem) throw new EditError(problem);
   const cells = doc.cells.map((c) => {
-    if (c.id === id) return { ...c, name } as Cell;
-    if (updateReferences && old && c.kind === 'sweep') return renameInSweep(c, old, name);
-    if (!updateReferences || !old || (c.kind !== 'formula' && c.kind !== 'check' && c.kind !== 'figure')) return c;
-    const expr = renameInExpr(c.expr, old, name);
-    return expr === c.expr ? c : { ...c, expr };
+    if (c.id === id) return { ...c, name };
+    return updateReferences && old ? describe(c.kind).rename(c, old, name) : c;
   });
   return withCells(doc, cells);
-}
-
-/** A sweep names its input and outputs outright: rename them as whole names. */
-function renameInSweep(c: Extract<Cell, { kind: 'sweep' }>, from: string, to: string): Cell {
-  if (c.input !== from && !c.outputs.includes(from)) return c;
-  return { ...c, input: c.input === from ? to : c.input, outputs: c.outputs.map((o) => (o === from ? to : o)) };
 }
 
 export function setMeta(doc: CalcDocument, key: keyof DocMeta, value: string): CalcDocument {

@@ -1,7 +1,5 @@
 // One entry point: a figure spec (or a sweep result) to an SVG string.
 
-import type { Cell } from '../document';
-import type { CellState } from '../engine-types';
 import { renderFootingDrawing } from './footing';
 import { renderInteraction } from './interaction';
 import { renderLoadPath } from './load-path';
@@ -22,13 +20,6 @@ export function renderFigure(spec: FigureSpec): string {
 
 export function renderSweep(result: SweepResult, title = ''): string {
   return renderSweepChart(result, title);
-}
-
-/** The drawing of a figure or sweep cell from its engine state ('' for other kinds or until computed). */
-export function cellSvg(cell: Cell, state: CellState | undefined): string {
-  if (cell.kind === 'figure' && state?.figure) return renderFigure(state.figure);
-  if (cell.kind === 'sweep' && state?.sweep) return renderSweep(state.sweep, cell.label ?? '');
-  return '';
 }
 
 export type { FigureSpec, SweepResult } from './spec';

@@ -1,39 +1,41 @@
-// Building blocks the cell kinds are made of: header forms and attribute types.
+// Building blocks the cell kinds are made of: header forms and attribute types. Each
+// names the cell field it reads and writes, typed: a field of the wrong type, or one
+// the kind does not have, does not compile.
 
 import type { Cell } from '../document';
 import { decodeValue, encodeValue, isIdentifier, quote, scanQuoted } from './quote';
 import type { AttrSpec, HeaderSpec } from './types';
 
-type Fields = Record<string, unknown>;
-const fields = (cell: Cell): Fields => cell as unknown as Fields;
+/** The keys of C whose values (when present) are of type V. */
+type KeysOf<C, V> = { [P in keyof C]-?: Exclude<C[P], undefined> extends V ? P : never }[keyof C] & string;
 
 /** An optional text field written as one attribute line. */
-export function textAttr<C extends Cell>(key: string, field: string): AttrSpec<C> {
+export function textAttr<C extends Cell>(key: string, field: KeysOf<C, string>): AttrSpec<C> {
   return {
     key,
     write: (cell) => {
-      const v = fields(cell)[field];
+      const v = cell[field];
       return typeof v === 'string' ? [v] : [];
     },
     read: (cell, value) => {
-      fields(cell)[field] = value;
+      Reflect.set(cell, field, value);
       return undefined;
     },
   };
 }
 
 /** An optional whole number (e.g. significant figures). */
-export function integerAttr<C extends Cell>(key: string, field: string): AttrSpec<C> {
+export function integerAttr<C extends Cell>(key: string, field: KeysOf<C, number>): AttrSpec<C> {
   return {
     key,
     write: (cell) => {
-      const v = fields(cell)[field];
+      const v = cell[field];
       return typeof v === 'number' ? [String(v)] : [];
     },
     read: (cell, value) => {
       const n = /^[+-]?[0-9]+$/.test(value) ? Number(value) : NaN;
       if (!Number.isSafeInteger(n)) return `${key} must be a whole number, not ${JSON.stringify(value)}`;
-      fields(cell)[field] = n === 0 ? 0 : n; // no -0: it would print back as 0
+      Reflect.set(cell, field, n === 0 ? 0 : n); // no -0: it would print back as 0
       return undefined;
     },
   };
@@ -43,19 +45,18 @@ export function integerAttr<C extends Cell>(key: string, field: string): AttrSpe
  * An optional list, one line per item, in order. An empty list is written as
  * nothing and so reads back as absent: `[]` is normalised away.
  */
-export function listAttr<C extends Cell>(key: string, field: string): AttrSpec<C> {
+export function listAttr<C extends Cell>(key: string, field: KeysOf<C, string[]>): AttrSpec<C> {
   return {
     key,
     repeatable: true,
     write: (cell) => {
-      const v = fields(cell)[field];
-      return Array.isArray(v) ? (v as string[]) : [];
+      const v: unknown = cell[field];
+      return Array.isArray(v) ? v.map(String) : [];
     },
     read: (cell, value) => {
-      const f = fields(cell);
-      const list = f[field];
+      const list: unknown = cell[field];
       if (Array.isArray(list)) list.push(value);
-      else f[field] = [value];
+      else Reflect.set(cell, field, [value]);
       return undefined;
     },
   };
@@ -63,31 +64,27 @@ export function listAttr<C extends Cell>(key: string, field: string): AttrSpec<C
 
 /** Label and clause, which every kind carries, written last. */
 export function commonAttrs<C extends Cell>(): AttrSpec<C>[] {
-  return [textAttr<C>('label', 'label'), textAttr<C>('clause', 'clause')];
+  return [textAttr<Cell>('label', 'label'), textAttr<Cell>('clause', 'clause')];
 }
 
-function make<C extends Cell>(kind: C['kind'], id: string, values: Fields): C {
-  return { kind, id, ...values } as unknown as C;
-}
-
-/** Header with nothing after the id (the note). */
-export function bareHeader<C extends Cell>(kind: C['kind'], defaults: Fields): HeaderSpec<C> {
+/** Header with nothing after the id (the note); `make` builds the cell from its id. */
+export function bareHeader<C extends Cell>(kind: C['kind'], make: (id: string) => C): HeaderSpec<C> {
   return {
     write: () => '',
     read: (id, tail, column) =>
       tail === ''
-        ? { ok: true, cell: make<C>(kind, id, { ...defaults }) }
+        ? { ok: true, cell: make(id) }
         : { ok: false, message: `nothing may follow the id of a ${kind}`, column },
   };
 }
 
-/** Header `<kind> <id>  <value>` (section title, check expression). */
-export function valueHeader<C extends Cell>(kind: C['kind'], field: string, what: string): HeaderSpec<C> {
+/** Header `<kind> <id>  <value>` (section title, check expression); `make` builds the cell. */
+export function valueHeader<C extends Cell>(field: KeysOf<C, string>, what: string, make: (id: string, value: string) => C): HeaderSpec<C> {
   return {
-    write: (cell) => encodeValue(String(fields(cell)[field])),
+    write: (cell) => encodeValue(String(cell[field])),
     read: (id, tail, column) => {
       const d = decodeValue(tail, column, what);
-      return d.ok ? { ok: true, cell: make<C>(kind, id, { [field]: d.value }) } : d;
+      return d.ok ? { ok: true, cell: make(id, d.value) } : d;
     },
   };
 }
@@ -96,12 +93,11 @@ export function valueHeader<C extends Cell>(kind: C['kind'], field: string, what
  * Header `<kind> <id>  name = value` (input, formula). The name is raw when it
  * is an identifier, else quoted; the split is at the first `=` after the name.
  */
-export function assignHeader<C extends Cell>(kind: C['kind'], valueField: string, what: string): HeaderSpec<C> {
+export function assignHeader<C extends Cell & { name: string }>(
+  field: KeysOf<C, string>, what: string, make: (id: string, name: string, value: string) => C,
+): HeaderSpec<C> {
   return {
-    write: (cell) => {
-      const name = String(fields(cell).name);
-      return `${isIdentifier(name) ? name : quote(name)} = ${encodeValue(String(fields(cell)[valueField]))}`;
-    },
+    write: (cell) => `${isIdentifier(cell.name) ? cell.name : quote(cell.name)} = ${encodeValue(String(cell[field]))}`,
     read: (id, tail, column) => {
       let name: string;
       let eq: number;
@@ -121,7 +117,7 @@ export function assignHeader<C extends Cell>(kind: C['kind'], valueField: string
       let start = eq + 1;
       while (tail[start] === ' ') start++;
       const d = decodeValue(tail.slice(start), column + start, what);
-      return d.ok ? { ok: true, cell: make<C>(kind, id, { name, [valueField]: d.value }) } : d;
+      return d.ok ? { ok: true, cell: make(id, name, d.value) } : d;
     },
   };
 }

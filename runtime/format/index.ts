@@ -3,5 +3,4 @@
 export { parse, type ParseResult } from './parse';
 export { serialize, serializeCell } from './serialize';
 export { FORMAT_TAG, FORMAT_VERSION } from './meta';
-export { KIND_FORMATS } from './kinds/index';
 export type { FormatError, KindFormat, AttrSpec, HeaderSpec, BodySpec } from './types';

@@ -2,7 +2,7 @@
 // everything else still loads. Never throws, whatever the input.
 
 import { emptyMeta, type CalcDocument, type Cell, type DocMeta } from '../document';
-import { kindFormat } from './kinds/index';
+import { kindFormat, kindWords } from './kinds/index';
 import { FORMAT_TAG, FORMAT_VERSION, metaField } from './meta';
 import { WORKING_CHOICES, WORKING_KEYWORD, workingSetting, type WorkingSetting } from './settings';
 import { decodeValue, isCellId } from './quote';
@@ -88,7 +88,7 @@ class Reader {
     else {
       this.report(n, 1, word === FORMAT_TAG
         ? `the "${FORMAT_TAG}" header may appear only once, on the first line`
-        : `unknown keyword "${word}" (a block starts with section, note, input, formula or check)`);
+        : `unknown keyword "${word}" (a block starts with ${kindWords()})`);
       this.block = 'skip';
     }
   }

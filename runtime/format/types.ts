@@ -52,6 +52,3 @@ export interface KindFormat<C extends Cell> {
   attrs: AttrSpec<C>[];
   body?: BodySpec<C>;
 }
-
-/** The format table: one entry per cell kind, checked against the Cell union. */
-export type KindTable = { [K in Cell['kind']]: KindFormat<Extract<Cell, { kind: K }>> };

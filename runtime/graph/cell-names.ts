@@ -3,13 +3,27 @@
 // display unit of a named cell (for checks and figure labels), what a sweep needs of
 // the cells it varies and plots, and how a message names a cell.
 
-import type { Cell } from '../document';
+import { cellName, type Cell } from '../document';
 import { CellError } from '../formula/cell-error';
 import type { CompileScope, NameInfo } from '../formula/compile';
 import { columnOf } from '../formula/parse';
 import type { LibFunction } from '../library/types';
 import type { CellProgram } from './cell-program';
-import type { SweepCellInfo } from './sweep-program';
+import type { SweepCellInfo } from './what-if';
+
+/** The cells that own each name, in document order (more than one is an error the engine reports). */
+export function nameOwners(cells: readonly Cell[], has: (id: string) => boolean): Map<string, string[]> {
+  const owners = new Map<string, string[]>();
+  for (const cell of cells) {
+    const name = cellName(cell);
+    if (!name || !has(cell.id)) continue;
+    const list = owners.get(name);
+    if (list) {
+      if (!list.includes(cell.id)) list.push(cell.id);
+    } else owners.set(name, [cell.id]);
+  }
+  return owners;
+}
 
 /** What the names need of a computing cell. */
 export interface NamedSlot {
@@ -56,7 +70,7 @@ export class CellNames {
         if (!type || owners.length > 1) {
           throw new CellError('upstream', `reads ${name}, which has an error`, columnOf(source, name), name);
         }
-        return { key: slot.cell.id, type, unwrap: slot.cell.kind === 'check' };
+        return { key: slot.cell.id, type, unwrap: slot.program?.unwrap };
       },
     };
   }

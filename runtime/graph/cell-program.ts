@@ -37,9 +37,12 @@ export interface CellProgram {
   inputError?: CellError;
   /** Inputs: the parsed value (for display). */
   input?: InputValue;
+  /** The graph holds a check's result `{ value, pass, ... }`: readers take its `value`. */
+  unwrap?: boolean;
 }
 
-function failing(error: CellError, reads: string[] = []): CellProgram {
+/** A program that only reports `error` (with the names it would have read). */
+export function failing(error: CellError, reads: string[] = []): CellProgram {
   return {
     inputs: [],
     reads,
@@ -122,7 +125,7 @@ export function checkProgram(
   const { reads, clauses, inputs, pass } = compiled;
   if (compiled.form === 'condition') {
     return {
-      type: BOOL, inputs, reads, clauses, unit: '', form: 'condition',
+      type: BOOL, inputs, reads, clauses, unit: '', form: 'condition', unwrap: true,
       definition: (...args: unknown[]): CheckResult => {
         const ok = !!pass(args);
         return { value: ok, pass: ok };
@@ -135,7 +138,7 @@ export function checkProgram(
   const demandUnit = unitOf(d.source) || unitOf(k.source)
     || unitInSystem(knownUnit(d.type) || knownUnit(k.type), (d.type as { dims: readonly number[] }).dims, system);
   return {
-    type: NUMBER, inputs, reads, clauses, unit: '', demandUnit, form: 'ratio',
+    type: NUMBER, inputs, reads, clauses, unit: '', demandUnit, form: 'ratio', unwrap: true,
     definition: (...args: unknown[]): CheckResult => {
       const demand = d.run(args) as number;
       const capacity = k.run(args) as number;

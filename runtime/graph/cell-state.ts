@@ -1,5 +1,6 @@
 // From a computed value (or error) to the CellState the view, the CLI and the
-// record export read.
+// record export read. What a value means differs by kind: each kind's description
+// settles its state with one of the helpers below (runtime/kinds/).
 
 import type { Cell } from '../document';
 import type { CellState } from '../engine-types';
@@ -8,10 +9,14 @@ import { displayNumber, displayOther } from '../formula/display';
 import type { CellProgram, CheckResult } from './cell-program';
 import type { FigureSpec, SweepResult } from '../figures/spec';
 
+/** Fills a state from a value; the kind's own part of buildState. */
+export type Settle = (value: unknown, state: CellState) => void;
+
 export function buildState(
   cell: Cell,
   program: CellProgram | undefined,
   outcome: { value: unknown } | { error: CellError },
+  settle: Settle,
 ): CellState {
   const state: CellState = {
     id: cell.id,
@@ -24,40 +29,44 @@ export function buildState(
     state.error = outcome.error.toData();
     return state;
   }
-  const precision = cell.kind === 'formula' ? cell.precision : undefined;
-  const unit = program?.unit ?? '';
-  const v = outcome.value;
-  if (cell.kind === 'check') {
-    const r = v as CheckResult;
-    state.value = r.value;
-    state.status = r.pass ? 'ok' : 'fail';
-    if (typeof r.value === 'number') {
-      state.ratio = r.value;
-      const du = program?.demandUnit ?? '';
-      state.demand = displayNumber(r.demand!, du);
-      state.capacity = displayNumber(r.capacity!, du);
-    }
-    state.display = typeof r.value === 'number' ? displayNumber(r.value, '', 3) : displayOther(r.value);
-    return state;
-  }
-  if (cell.kind === 'figure' || cell.kind === 'sweep') {
-    if (v === undefined || v === null) state.status = 'pending';
-    else if (cell.kind === 'figure') state.figure = v as FigureSpec;
-    else state.sweep = v as SweepResult;
-    return state;
-  }
+  settle(outcome.value, state);
+  return state;
+}
+
+/** A number, text or boolean shown in the program's display unit (`precision` significant figures). */
+export function settleValue(program: CellProgram | undefined, v: unknown, state: CellState, precision?: number): void {
   if (v === undefined || v === null) {
     state.status = 'pending';
-    return state;
+    return;
   }
   state.value = v as number | string | boolean;
-  state.display = typeof v === 'number' ? displayNumber(v, unit, precision) : displayOther(v as string | boolean);
-  if (cell.kind === 'input' && program?.inputError) {
-    // The last good value keeps computing; the bad text is reported here.
-    state.status = 'error';
-    state.error = program.inputError.toData();
+  state.display = typeof v === 'number' ? displayNumber(v, program?.unit ?? '', precision) : displayOther(v as string | boolean);
+}
+
+/** A check: pass or fail, and for demand ≤ capacity the ratio with both sides shown. */
+export function settleCheck(program: CellProgram | undefined, v: unknown, state: CellState): void {
+  const r = v as CheckResult;
+  state.value = r.value;
+  state.status = r.pass ? 'ok' : 'fail';
+  if (typeof r.value === 'number') {
+    state.ratio = r.value;
+    const du = program?.demandUnit ?? '';
+    state.demand = displayNumber(r.demand!, du);
+    state.capacity = displayNumber(r.capacity!, du);
   }
-  return state;
+  state.display = typeof r.value === 'number' ? displayNumber(r.value, '', 3) : displayOther(r.value);
+}
+
+/** A drawing: the figure's spec. */
+export function settleFigure(v: unknown, state: CellState): void {
+  if (v === undefined || v === null) state.status = 'pending';
+  else state.figure = v as FigureSpec;
+}
+
+/** A what-if sweep: its points and series. */
+export function settleSweep(v: unknown, state: CellState): void {
+  if (v === undefined || v === null) state.status = 'pending';
+  else state.sweep = v as SweepResult;
 }
 
 export function sameState(a: CellState, b: CellState): boolean {

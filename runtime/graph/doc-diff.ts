@@ -1,8 +1,8 @@
 // Comparing document versions and reading what a cell mentions: the cheap
 // questions the engine asks on every update before it recompiles anything.
 
-import type { Cell, SweepCell } from '../document';
-import { parseFormula, symbolNames } from '../formula/parse';
+import type { Cell } from '../document';
+import { describe } from '../kinds/index';
 import type { CellProgram } from './cell-program';
 
 /** Indexes of cells that are new objects, when no cell was added, removed or moved. */
@@ -17,18 +17,9 @@ export function samePlaces(prev: readonly Cell[], next: readonly Cell[]): number
   return out;
 }
 
+/** Names the cell's source mentions (cells or not), as its kind reads them. */
 export function refsOf(cell: Cell): string[] {
-  if (cell.kind === 'sweep') return sweepRefs(cell);
-  if (cell.kind !== 'formula' && cell.kind !== 'check' && cell.kind !== 'figure') return [];
-  try {
-    return symbolNames(parseFormula(cell.expr));
-  } catch {
-    return [];
-  }
-}
-
-function sweepRefs(cell: SweepCell): string[] {
-  return [...new Set([cell.input, ...cell.outputs].filter((n) => n !== ''))];
+  return describe(cell.kind).refs(cell);
 }
 
 export function sameCell(a: Cell, b: Cell): boolean {

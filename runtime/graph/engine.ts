@@ -8,8 +8,8 @@ import type { CalcDocument, Cell } from '../document';
 import { cellName } from '../document';
 import type { CellState, Engine, WhatIfOutcome } from '../engine-types';
 import { CellError } from '../formula/cell-error';
-import { structuralProblem } from '../formula/compile-check';
 import { nameProblem } from '../formula/names';
+import { describe } from '../kinds/index';
 import { loopMessages } from './cycles';
 import { ReadersIndex } from './readers';
 import { Notifier } from './notifier';
@@ -17,16 +17,15 @@ import { isInputValueOnly, refsOf, sameCell, samePlaces, sameTypeOrBoth } from '
 import { cellSystem, sheetSystem, type UnitSystem } from '../units/systems';
 import type { LibFunction } from '../library/types';
 import { BUILTINS } from '../formula/builtins';
-import { checkProgram, formulaProgram, inputProgram, type CellProgram } from './cell-program';
+import { failing, type CellProgram } from './cell-program';
 import { buildState, sameState } from './cell-state';
-// Figure and sweep kinds (runtime/figures): their programs and the what-if evaluator.
+import type { ProgramEnv } from './program-env';
+// The figure functions, which only figure cells may call, and the what-if evaluator.
 import { figureLibrary } from '../figures/functions';
-import { figureProgram } from './figure-program';
-import { sweepProgram } from './sweep-program';
 import { whatIfRun, type WhatIfGraph } from './what-if';
 import { Pacer } from './pacer';
 import { computeAfterThisTask } from './scheduling';
-import { CellNames } from './cell-names';
+import { CellNames, nameOwners } from './cell-names';
 import { upstreamFirst } from './upstream-first';
 // The working of a cell's library calls, asked for by the view (runtime/working).
 import { captureCalls, type LibraryCall } from '../working/calls';
@@ -177,7 +176,7 @@ class DocEngine implements Engine {
     const affected = new Set(dirty);
     if (structural) {
       const before = this.owners;
-      this.owners = this.indexNames();
+      this.owners = nameOwners(this.doc.cells, (id) => this.slots.has(id));
       const namesChanged = new Set<string>();
       for (const n of new Set([...before.keys(), ...this.owners.keys()])) {
         if (String(before.get(n)) !== String(this.owners.get(n))) namesChanged.add(n);
@@ -192,7 +191,7 @@ class DocEngine implements Engine {
       if (system !== this.system) {
         this.system = system;
         // Checks and figures with no named cell to take a unit from show theirs in the sheet's system.
-        for (const slot of this.slots.values()) if (slot.cell.kind === 'check' || slot.cell.kind === 'figure') affected.add(slot.cell.id);
+        for (const slot of this.slots.values()) if (describe(slot.cell.kind).program?.followsUnits) affected.add(slot.cell.id);
       }
     }
     this.recompile(affected);
@@ -205,21 +204,8 @@ class DocEngine implements Engine {
     return {
       cell,
       refs: refsOf(cell),
-      state: { id: cell.id, status: cell.kind === 'section' || cell.kind === 'note' ? 'ok' : 'pending', clauses: [], reads: [] },
+      state: { id: cell.id, status: describe(cell.kind).program ? 'pending' : 'ok', clauses: [], reads: [] },
     };
-  }
-
-  private indexNames(): Map<string, string[]> {
-    const owners = new Map<string, string[]>();
-    for (const cell of this.doc.cells) {
-      const name = cellName(cell);
-      if (!name || !this.slots.has(cell.id)) continue;
-      const list = owners.get(name);
-      if (list) {
-        if (!list.includes(cell.id)) list.push(cell.id);
-      } else owners.set(name, [cell.id]);
-    }
-    return owners;
   }
 
   /** Finds loops; returns the cells whose membership in a loop changed. */
@@ -259,8 +245,8 @@ class DocEngine implements Engine {
       if (typeChanged || unitBefore !== slot.program?.unit) {
         const name = cellName(slot.cell);
         if (name) for (const id of this.readers.of(name)) {
-          const kind = this.slots.get(id)?.cell.kind;
-          if (!done.has(id) && (typeChanged || kind === 'check' || kind === 'figure')) {
+          const reader = this.slots.get(id)?.cell;
+          if (!done.has(id) && (typeChanged || (reader && describe(reader.kind).program?.followsUnits))) {
             affected.add(id);
             queue.push(id);
           }
@@ -273,7 +259,7 @@ class DocEngine implements Engine {
   private compileSlot(slot: Slot): void {
     const cell = slot.cell;
     this.notifier.markChanged(cell.id);
-    if (cell.kind === 'section' || cell.kind === 'note') {
+    if (!describe(cell.kind).program) {
       slot.state = { id: cell.id, status: 'ok', clauses: [], reads: [] };
       return;
     }
@@ -285,12 +271,7 @@ class DocEngine implements Engine {
   private program(slot: Slot): CellProgram {
     const cell = slot.cell;
     const name = cellName(cell);
-    const fail = (e: CellError): CellProgram => ({
-      inputs: [], reads: [], clauses: [], unit: '',
-      definition: () => {
-        throw e;
-      },
-    });
+    const fail = (e: CellError): CellProgram => failing(e);
     if (name !== undefined) {
       const problem = nameProblem(name, this.functionNames);
       if (problem) return fail(new CellError('syntax', problem));
@@ -300,26 +281,23 @@ class DocEngine implements Engine {
         return fail(new CellError('duplicate-name', `the name ${name} is also used by ${others.join(' and ')}; each name must be unique`));
       }
     }
+    const spec = describe(cell.kind).program;
+    if (!spec) return fail(new CellError('not-allowed', 'this cell does not compute'));
+    const env = this.programEnv(slot);
     const loop = this.cycleMembers.get(cell.id);
-    if (loop) {
-      // A formula that cannot compile for its own reasons says so before the loop does.
-      const own = cell.kind === 'formula' || cell.kind === 'check' ? structuralProblem(cell.expr, this.functions) : undefined;
-      return fail(own ?? new CellError('cycle', `these cells use each other in a loop: ${loop}`));
-    }
-    switch (cell.kind) {
-      case 'input':
-        return inputProgram(cell, slot.program);
-      case 'formula':
-        return formulaProgram(cell, this.names.scopeFor(cell.expr, this.functions));
-      case 'check':
-        return checkProgram(cell, this.names.scopeFor(cell.expr, this.functions), (node) => this.names.unitOfNode(node), this.system ?? sheetSystem(this.doc));
-      case 'figure':
-        return figureProgram(cell, this.names.scopeFor(cell.expr, this.figureFunctions), (n) => this.names.unitOfName(n));
-      case 'sweep':
-        return sweepProgram(cell, (n) => this.names.sweepInfo(n), this.whatIfGraph);
-      default:
-        return fail(new CellError('not-allowed', 'this cell does not compute'));
-    }
+    // A formula that cannot compile for its own reasons says so before the loop does.
+    if (loop) return fail(spec.ownProblem?.(cell, env) ?? new CellError('cycle', `these cells use each other in a loop: ${loop}`));
+    return spec.compile(cell, env);
+  }
+
+  /** What a kind's program sees of the engine while it compiles a cell. */
+  private programEnv(slot: Slot): ProgramEnv {
+    const names = this.names;
+    return {
+      scope: (source, figures) => names.scopeFor(source, figures ? this.figureFunctions : this.functions),
+      functions: this.functions, unitOfNode: (n) => names.unitOfNode(n), unitOfName: (n) => names.unitOfName(n),
+      system: this.system ?? sheetSystem(this.doc), sweepInfo: (n) => names.sweepInfo(n), whatIf: this.whatIfGraph, previous: slot.program,
+    };
   }
 
   private readonly whatIfGraph: WhatIfGraph = {
@@ -371,9 +349,14 @@ class DocEngine implements Engine {
       pending: () => {
         if (!handle.dead) this.notifier.busy(slot.cell.id);
       },
-      fulfilled: (value: unknown) => settle(buildState(slot.cell, slot.program, { value })),
-      rejected: (error: unknown) => settle(buildState(slot.cell, slot.program, { error: this.explain(error) })),
+      fulfilled: (value: unknown) => settle(buildState(slot.cell, slot.program, { value }, this.settler(slot))),
+      rejected: (error: unknown) => settle(buildState(slot.cell, slot.program, { error: this.explain(error) }, this.settler(slot))),
     });
+  }
+
+  /** The kind's reading of a computed value into the cell's state. */
+  private settler(slot: Slot) {
+    return (value: unknown, state: CellState) => describe(slot.cell.kind).program?.settle(slot.cell, slot.program, value, state);
   }
 
   private explain(error: unknown): CellError {

@@ -11,13 +11,9 @@ import { FIGURE_FUNCTIONS } from '../figures/functions';
 import type { FigureSpec, UnitSystem } from '../figures/spec';
 import { unitInfo } from '../units/dimension';
 import { systemOf, typedUnit } from '../units/systems';
-import { asCellError, type CellProgram } from './cell-program';
+import { asCellError, failing, type CellProgram } from './cell-program';
 
 const BY_NAME = new Map(FIGURE_FUNCTIONS.map((f) => [f.name, f]));
-
-function broken(error: CellError, reads: string[] = []): CellProgram {
-  return { inputs: [], reads, clauses: [], unit: '', definition: () => { throw error; } };
-}
 
 function knownUnit(u: string | undefined): string | undefined {
   if (!u) return undefined;
@@ -65,12 +61,12 @@ export function figureProgram(cell: FigureCell, scope: CompileScope, unitOf: (na
   try {
     compiled = compileExpression(cell.expr, scope);
   } catch (e) {
-    return broken(asCellError(e));
+    return failing(asCellError(e));
   }
   const { reads, clauses, inputs, run } = compiled;
   if (compiled.type.t !== 'figure') {
     const names = FIGURE_FUNCTIONS.map((f) => f.name).join(', ');
-    return broken(new CellError('not-allowed', `a figure cell calls a figure function (${names}); this gives a value, not a drawing`), reads);
+    return failing(new CellError('not-allowed', `a figure cell calls a figure function (${names}); this gives a value, not a drawing`), reads);
   }
   const units = argumentUnits(cell.expr, unitOf);
   // The sheet's system: the arguments' units first, then every cell the figure reads.

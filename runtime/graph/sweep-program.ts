@@ -10,23 +10,12 @@ import { limitsText, parseQuantityText } from '../formula/input-value';
 import { describeType } from '../formula/value-type';
 import type { SweepResult, SweepSeries } from '../figures/spec';
 import { sameDims } from '../units/dimension';
-import type { CellProgram } from './cell-program';
-import { outcomeOf, WhatIf, type WhatIfGraph } from './what-if';
+import { failing, type CellProgram } from './cell-program';
+import { outcomeOf, WhatIf, type SweepCellInfo, type WhatIfGraph } from './what-if';
 import { Pacer } from './pacer';
 
 export const DEFAULT_STEPS = 20;
 export const MAX_STEPS = 200;
-
-/** What a sweep needs to know about a named cell. */
-export interface SweepCellInfo {
-  id: string;
-  kind: string;
-  program?: CellProgram;
-}
-
-function broken(error: CellError, reads: string[] = []): CellProgram {
-  return { inputs: [], reads, clauses: [], unit: '', definition: () => { throw error; } };
-}
 
 /**
  * The range swept, SI: as written when the author fixed it; else as wide as written and
@@ -52,7 +41,7 @@ export function sweepPoints(from: number, to: number, steps: number): number[] {
 
 export function sweepProgram(cell: SweepCell, lookup: (name: string) => SweepCellInfo | undefined, graph: WhatIfGraph): CellProgram {
   const reads = [cell.input, ...cell.outputs];
-  const fail = (kind: CellError['kind'], msg: string) => broken(new CellError(kind, msg), reads);
+  const fail = (kind: CellError['kind'], msg: string) => failing(new CellError(kind, msg), reads);
   const input = lookup(cell.input);
   if (!cell.input.trim()) return fail('syntax', 'name the input to sweep');
   if (!input) return fail('unknown-name', `"${cell.input}" is not the name of any cell`);
@@ -72,7 +61,7 @@ export function sweepProgram(cell: SweepCell, lookup: (name: string) => SweepCel
     from = a.si;
     to = b.si;
   } catch (e) {
-    return broken(e instanceof CellError ? e : new CellError('syntax', String(e)), reads);
+    return failing(e instanceof CellError ? e : new CellError('syntax', String(e)), reads);
   }
   if (from === to) return fail('range', 'from and to are the same value; give a range');
   const steps = cell.steps ?? DEFAULT_STEPS;

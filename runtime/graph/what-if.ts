@@ -7,7 +7,13 @@
 import type { WhatIfOutcome } from '../engine-types';
 import type { CellProgram, CheckResult } from './cell-program';
 import { outsideLimits } from '../formula/input-value';
-import type { SweepCellInfo } from './sweep-program';
+
+/** What a sweep or a what-if needs to know about a named cell. */
+export interface SweepCellInfo {
+  id: string;
+  kind: string;
+  program?: CellProgram;
+}
 
 /** What the evaluator needs from the engine: programs by cell id, and names. */
 export interface WhatIfGraph {

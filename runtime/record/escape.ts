@@ -1,15 +1,9 @@
-// Escaping for the three places document text lands in a record: HTML text and
-// attributes, CSS strings (the printed title block), and the embedded data block.
+// Escaping for the places document text lands in a record besides HTML text (which
+// runtime/present/escape.ts escapes): CSS strings (the printed title block) and the
+// embedded data block.
 
-const HTML_ENTITIES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
-const HTML_SPECIAL = /[&<>"']/g;
-
-/** Escapes text for HTML content and attribute values (quoted with "). */
-export function escapeHtml(text: string): string {
-  HTML_SPECIAL.lastIndex = 0;
-  if (!HTML_SPECIAL.test(text)) return text;
-  return text.replace(HTML_SPECIAL, (ch) => HTML_ENTITIES[ch]);
-}
+// HTML text and attributes: the one escape of the presentation layer.
+export { escapeHtml } from '../present/escape';
 
 /**
  * A CSS string literal (with its quotes) that cannot end the string, the rule or the

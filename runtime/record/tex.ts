@@ -8,6 +8,8 @@ import { escapeHtml } from './escape';
 
 /** Beyond this many characters, TeX is shown as its source rather than typeset. */
 export const TEX_LIMIT = 4000;
+/** Formulas longer than this are not typeset as a hand calc (the engine refuses them too). */
+export const HANDCALC_LIMIT = 2000;
 
 export function texHtml(tex: string, display: boolean): string {
   if (tex.length > TEX_LIMIT) return `<code class="lt-tex-raw">${escapeHtml(tex.slice(0, TEX_LIMIT))}…</code>`;

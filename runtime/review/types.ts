@@ -2,7 +2,7 @@
 // their frozen baselines, comments on cells, and sign-offs. Travels with the
 // document (CalcDocument.review) and through the text format.
 
-import type { CellStatus } from '../engine-types';
+import type { CellStatus } from '../cell-status';
 
 /** An input as it stood when a revision was issued. */
 export interface IssuedInput {

@@ -5,14 +5,10 @@
 
 import { compileExpression, type CompileScope } from '../formula/compile';
 import type { VType } from '../formula/value-type';
-import type { LibFunction, LibValue } from '../library/types';
+import type { LibraryCall } from '../library/call';
+import type { LibValue } from '../library/types';
 
-export interface LibraryCall {
-  lib: LibFunction;
-  args: LibValue[];
-  /** The unit each argument was written in, when the formula says (`5000 psi`, a cell's unit). */
-  units: (string | undefined)[];
-}
+export type { LibraryCall };
 
 const unitOf = (t: VType): string | undefined => (t.t === 'num' ? t.hint : undefined);
 

@@ -7,9 +7,9 @@ import { createEngine } from '../../runtime/engine';
 import { renameCell, setInputValue } from '../../runtime/edit/index';
 import { switchSystem } from '../../runtime/units/systems';
 import { parse, serialize } from '../../runtime/format/index';
-import { parseSweepSource, setFigureExpr, sweepSource } from '../../runtime/figures/edit';
-import { figureKind } from '../../cells/figure';
-import { sweepKind } from '../../cells/sweep';
+import { applySource } from '../../runtime/edit/index';
+import { bindFigure, renderFigureView } from '../../runtime/kinds/figure';
+import { bindSweep, parseSweepSource, renderSweepView, sweep as sweepKind, sweepSource } from '../../runtime/kinds/sweep';
 import { checkXml, pathLength } from './xml';
 
 const IN = 0.0254;
@@ -48,7 +48,7 @@ function load(): CalcDocument {
 }
 
 function withFigure(d: CalcDocument, expr: string): CalcDocument {
-  return setFigureExpr(d, 'g1', expr);
+  return applySource(d, 'g1', expr);
 }
 
 describe('figure cell in the engine', () => {
@@ -79,7 +79,7 @@ describe('figure cell in the engine', () => {
     const next = engine.state('g1')!;
     expect(changed.flat()).toContain('g1');
     expect(next.figure).not.toBe(first);
-    const svg = figureKind.render(figureKind.bind(d.cells.find((c) => c.id === 'g1') as FigureCell, {
+    const svg = renderFigureView(bindFigure(d.cells.find((c) => c.id === 'g1') as FigureCell, {
       state: (id) => engine.state(id), scope: { isCell: () => false, state: () => undefined }, number: '1.1',
     }));
     const els = checkXml(svg.slice(svg.indexOf('<svg'), svg.indexOf('</svg>') + 6)).elements;
@@ -158,13 +158,13 @@ describe('figure and sweep cells in the format, the edits and the view', () => {
   it('the sweep source a person types reads back to the same cell', () => {
     const w = load().cells.find((c) => c.id === 'w1') as SweepCell;
     expect(sweepSource(w)).toBe('d from 4 in to 10 in steps 6 plot bo');
-    expect(sweepKind.serialize(w)).toBe('d from 4 in to 10 in steps 6 plot bo');
+    expect(sweepKind.source.write(w)).toBe('d from 4 in to 10 in steps 6 plot bo');
     expect(parseSweepSource('h from 6 in to 1\'-0" plot punch_ok, phiVc')).toEqual({
       ok: true, value: { input: 'h', from: '6 in', to: '1\'-0"', outputs: ['punch_ok', 'phiVc'] },
     });
     const bad = parseSweepSource('h from 6 in to 12 in');
     expect(bad.ok).toBe(false);
-    const edited = sweepKind.edit(load(), 'w1', 'c1 from 12 in to 30 in steps 9 plot bo');
+    const edited = applySource(load(), 'w1', 'c1 from 12 in to 30 in steps 9 plot bo');
     expect(edited.cells.find((c) => c.id === 'w1')).toMatchObject({ input: 'c1', from: '12 in', to: '30 in', steps: 9, outputs: ['bo'] });
   });
 
@@ -173,7 +173,7 @@ describe('figure and sweep cells in the format, the edits and the view', () => {
     const engine = createEngine(d);
     await engine.settled();
     const cell = d.cells.find((c) => c.id === 'w1') as SweepCell;
-    const html = sweepKind.render(sweepKind.bind(cell, { state: (id) => engine.state(id), scope: { isCell: () => false, state: () => undefined }, number: '1.2' }));
+    const html = renderSweepView(bindSweep(cell, { state: (id) => engine.state(id), scope: { isCell: () => false, state: () => undefined }, number: '1.2' }));
     const svg = html.slice(html.indexOf('<svg'), html.indexOf('</svg>') + 6);
     const { problems, elements } = checkXml(svg);
     expect(problems).toEqual([]);

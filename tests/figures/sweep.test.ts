@@ -9,7 +9,7 @@ import { createEngine } from '../../runtime/engine';
 import { setInputValue } from '../../runtime/edit/index';
 import { parse } from '../../runtime/format/index';
 import { sweepPoints, sweepRange } from '../../runtime/graph/sweep-program';
-import { sweepKind, outsideText } from '../../cells/sweep';
+import { bindSweep, outsideText, renderSweepView } from '../../runtime/kinds/sweep';
 import { renderSweepChart } from '../../runtime/figures/sweep-chart';
 
 const IN = 0.0254, FT = 0.3048;
@@ -271,7 +271,7 @@ describe("a sweep across the input's least and greatest values", () => {
     expect(outsideText({ ...sw, outside: sw.xs.map((_, i) => i) })).toMatch(/^All 11 points are outside/);
     expect(outsideText({ ...sw, outside: [0] })).toBe('1 of 11 points is outside the limits of x (≥ 5 in, ≤ 12 in): not computed, marked ×.');
     const cell = d.cells.find((c) => c.id === 'w1') as SweepCell;
-    const html = sweepKind.render(sweepKind.bind(cell, { state: (id) => engine.state(id), scope: { isCell: () => false, state: () => undefined }, number: '1' }));
+    const html = renderSweepView(bindSweep(cell, { state: (id) => engine.state(id), scope: { isCell: () => false, state: () => undefined }, number: '1' }));
     expect(html).toContain('data-role="sweep-outside"');
     expect(html).toContain('3 of 11 points are outside the limits of x (≥ 5 in, ≤ 12 in)');
     engine.dispose();

@@ -3,7 +3,7 @@
 // 2 s hang guard (an outcome threshold, not a speed target: before the fix, 400 KB of
 // "[a](" took 50 s in the app's renderer and 100 KB took 4.8 s in the record's).
 import { describe, expect, it } from 'vitest';
-import { markdownHtml } from '../../cells/markdown';
+import { markdownHtml } from '../../runtime/present/markdown-live';
 import { noteHtml } from '../../runtime/record/markdown';
 import { HANG_MS, timed } from './figures';
 

@@ -5,7 +5,7 @@ import { emptyMeta } from '../../runtime/document';
 import {
   EditError, addCell, applyDelta, canRedo, canUndo, deleteCell, diffSheets, duplicateCell, insertCell,
   moveCell, packSheets, record, redo, renameCell, renameInExpr, setCellFields, setExpr, setInputValue, setInputValueKeepUnit,
-  setMeta, setNoteText, setSectionTitle, startHistory, undo, unpackSheets,
+  setMeta, startHistory, applySource, undo, unpackSheets,
 } from '../../runtime/edit/index';
 
 function sheet(): CalcDocument {
@@ -46,8 +46,8 @@ describe('edit operations', () => {
     expect(e.cells[0]).toBe(d.cells[0]);
     expect(setInputValue(d, 'i1', '120 psf')).toBe(d); // same value: same sheet
     expect(setExpr(d, 'k1', 'w_u <= 250 psf').cells[4]).toMatchObject({ expr: 'w_u <= 250 psf' });
-    expect(setNoteText(d, 'n1', 'x').cells[5]).toMatchObject({ text: 'x' });
-    expect(setSectionTitle(d, 's1', 'Gravity loads').cells[0]).toMatchObject({ title: 'Gravity loads' });
+    expect(applySource(d, 'n1', 'x').cells[5]).toMatchObject({ text: 'x' });
+    expect(applySource(d, 's1', 'Gravity loads').cells[0]).toMatchObject({ title: 'Gravity loads' });
     expect(() => setInputValue(d, 'f1', '3')).toThrow(EditError);
     expect(() => setExpr(d, 'nope', '3')).toThrow(/no cell/);
   });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { inlineHtml, markdownHtml } from '../../cells/markdown';
+import { inlineHtml, markdownHtml } from '../../runtime/present/markdown-live';
 
 describe('note Markdown subset', () => {
   it('renders paragraphs, emphasis, code and lists', () => {

@@ -3,7 +3,7 @@
 
 import { describe, expect, it } from 'vitest';
 import { stepRanges } from '../../cells/step-patch';
-import { handCalcHtml } from '../../cells/tex';
+import { handCalcHtml } from '../../runtime/present/tex-live';
 
 const STEP_OPEN = '<span class="hc-step"';
 

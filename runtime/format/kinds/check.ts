@@ -6,6 +6,6 @@ import type { KindFormat } from '../types';
 
 export const checkFormat: KindFormat<CheckCell> = {
   kind: 'check',
-  header: valueHeader<CheckCell>('check', 'expr', 'condition'),
+  header: valueHeader<CheckCell>('expr', 'condition', (id, expr) => ({ kind: 'check', id, expr })),
   attrs: [textAttr<CheckCell>('name', 'name'), ...commonAttrs<CheckCell>()],
 };

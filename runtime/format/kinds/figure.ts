@@ -6,6 +6,6 @@ import type { KindFormat } from '../types';
 
 export const figureFormat: KindFormat<FigureCell> = {
   kind: 'figure',
-  header: valueHeader<FigureCell>('figure', 'expr', 'expression'),
+  header: valueHeader<FigureCell>('expr', 'expression', (id, expr) => ({ kind: 'figure', id, expr })),
   attrs: commonAttrs<FigureCell>(),
 };

@@ -6,7 +6,7 @@ import type { KindFormat } from '../types';
 
 export const formulaFormat: KindFormat<FormulaCell> = {
   kind: 'formula',
-  header: assignHeader<FormulaCell>('formula', 'expr', 'expression'),
+  header: assignHeader<FormulaCell>('expr', 'expression', (id, name, expr) => ({ kind: 'formula', id, name, expr })),
   attrs: [
     textAttr<FormulaCell>('unit', 'unit'),
     integerAttr<FormulaCell>('precision', 'precision'),

@@ -6,7 +6,7 @@ import type { KindFormat } from '../types';
 
 export const inputFormat: KindFormat<InputCell> = {
   kind: 'input',
-  header: assignHeader<InputCell>('input', 'value', 'value'),
+  header: assignHeader<InputCell>('value', 'value', (id, name, value) => ({ kind: 'input', id, name, value })),
   attrs: [
     textAttr<InputCell>('unit', 'unit'),
     textAttr<InputCell>('min', 'min'),

@@ -6,7 +6,7 @@ import type { KindFormat } from '../types';
 
 export const noteFormat: KindFormat<NoteCell> = {
   kind: 'note',
-  header: bareHeader<NoteCell>('note', { text: '' }),
+  header: bareHeader<NoteCell>('note', (id) => ({ kind: 'note', id, text: '' })),
   attrs: commonAttrs<NoteCell>(),
   body: {
     // '' has no lines at all; otherwise every line, empty ones included.

@@ -6,6 +6,6 @@ import type { KindFormat } from '../types';
 
 export const sectionFormat: KindFormat<SectionCell> = {
   kind: 'section',
-  header: valueHeader<SectionCell>('section', 'title', 'title'),
+  header: valueHeader<SectionCell>('title', 'title', (id, title) => ({ kind: 'section', id, title })),
   attrs: commonAttrs<SectionCell>(),
 };

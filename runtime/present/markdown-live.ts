@@ -3,8 +3,8 @@
 // built from escaped text and our own tags only; links other than http(s) stay text.
 // The page still passes the result through DOMPurify before it is shown.
 
-import { escapeHtml } from './kind';
-import { texHtml } from './tex';
+import { escapeHtml } from './escape';
+import { texHtml } from './tex-live';
 
 const SAFE_URL = /^https?:\/\/[^\s<>"'`]+$/i;
 

@@ -4,7 +4,7 @@
 // readers get a plain-text reading on the hand-calc line instead.
 
 import katex from 'katex';
-import { escapeHtml } from './kind';
+import { escapeHtml } from './escape';
 
 const cache = new Map<string, string>();
 const LIMIT = 4000;

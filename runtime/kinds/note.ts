@@ -1,0 +1,51 @@
+// Note: explanatory text with inline math ($...$), in a small Markdown subset.
+
+import type { NoteCell } from '../document';
+import { noteFormat } from '../format/kinds/note';
+import { labelHtml, recordFrame, renderLabel, type CellViewBase, type ViewContext } from '../present/cell-frame';
+import { marginRefs, renderRefs } from '../present/margin';
+import { markdownHtml } from '../present/markdown-live';
+import { noteHtml } from '../record/markdown';
+import { CLAUSE_FIELD, liveView } from './shared';
+import type { KindDescription } from './types';
+
+export interface NoteView extends CellViewBase {
+  kind: 'note';
+  text: string;
+}
+
+export function bindNote(cell: NoteCell, ctx: ViewContext): NoteView {
+  return {
+    id: cell.id, kind: 'note', status: 'plain', number: ctx.number, text: cell.text,
+    label: cell.label, refs: marginRefs(cell.clause, undefined),
+  };
+}
+
+export function renderNote(v: NoteView): string {
+  return `<div class="cell-no"></div><div class="cell-body">${renderLabel(v.label)}<div class="note-text">${
+    markdownHtml(v.text)}</div></div>${renderRefs(v.refs)}`;
+}
+
+export const note: KindDescription<'note'> = {
+  kind: 'note',
+  stem: 'n',
+  blank: (id) => ({ id, kind: 'note', text: 'Note.' }),
+  named: false,
+  fields: [CLAUSE_FIELD],
+  refs: () => [],
+  rename: (cell) => cell,
+  format: noteFormat,
+  source: {
+    mode: 'note',
+    write: (cell) => cell.text,
+    // Any text is a note; trailing blank lines are not kept.
+    read: (source) => ({ ok: true, value: { text: source.replace(/\s+$/, '') } }),
+    owns: ['text'],
+  },
+  numbering: 'none',
+  program: null,
+  summaryTitle: null,
+  live: liveView(bindNote, renderNote, true),
+  record: (cell, ctx) =>
+    recordFrame(cell, ctx, `${labelHtml(cell.label)}<div class="lt-note">${noteHtml(cell.text)}</div>`, '', 'plain'),
+};
