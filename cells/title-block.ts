@@ -1,19 +1,15 @@
 // The title block: project, job number, subject, prepared by, checked by, revision
-// and date. Edited in place; printed at the top of every page.
+// and date (labels from runtime/present/title-block.ts). Edited in place; printed at
+// the top of every page.
 
 import type { DocMeta } from '../runtime/document';
 import { META_KEYS } from '../runtime/document';
-import { escapeHtml } from '../runtime/present/escape';
-
-const LABELS: Record<keyof DocMeta, string> = {
-  project: 'Project', job: 'Job no.', subject: 'Subject', preparedBy: 'Prepared by',
-  checkedBy: 'Checked by', revision: 'Rev.', date: 'Date',
-};
+import { TITLE_LABELS } from '../runtime/present/title-block';
 
 export class TitleBlock {
   constructor(private readonly host: HTMLElement, onEdit: (key: keyof DocMeta, value: string) => void) {
     host.innerHTML = `<div class="tb-grid">${META_KEYS.map((k) =>
-      `<label class="tb-field tb-${k}"><span class="tb-label">${LABELS[k]}</span><input data-meta="${k}" spellcheck="false" autocomplete="off"><span class="tb-print" data-print="${k}"></span></label>`,
+      `<label class="tb-field tb-${k}"><span class="tb-label">${TITLE_LABELS[k].label}</span><input data-meta="${k}" spellcheck="false" autocomplete="off"><span class="tb-print" data-print="${k}"></span></label>`,
     ).join('')}</div>`;
     host.addEventListener('input', (e) => {
       const t = e.target as HTMLInputElement;
@@ -30,9 +26,4 @@ export class TitleBlock {
       this.host.querySelector<HTMLElement>(`[data-print="${k}"]`)!.textContent = meta[k];
     }
   }
-}
-
-/** A one-line running head for the printed page, e.g. "LT-26-101 · Halvorsen Street Studios". */
-export function runningHead(meta: DocMeta): string {
-  return escapeHtml([meta.job, meta.project, meta.subject].filter(Boolean).join(' · '));
 }

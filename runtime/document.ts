@@ -4,20 +4,14 @@
 import type { WorkingSetting } from './format/settings';
 import type { ReviewState } from './review/types';
 
-/** Title-block fields, printed at the top of every sheet. */
-export interface DocMeta {
-  project: string;
-  job: string;
-  subject: string;
-  preparedBy: string;
-  checkedBy: string;
-  revision: string;
-  date: string;
-}
+/**
+ * Title-block fields, printed at the top of every sheet, in the order the text format
+ * writes them. A new field here is a compile error wherever it still needs a label, a
+ * format keyword or an empty value (DEVELOPERS: "Add a title-block field").
+ */
+export const META_KEYS = ['project', 'job', 'subject', 'preparedBy', 'checkedBy', 'revision', 'date'] as const;
 
-export const META_KEYS: (keyof DocMeta)[] = [
-  'project', 'job', 'subject', 'preparedBy', 'checkedBy', 'revision', 'date',
-];
+export type DocMeta = { [K in (typeof META_KEYS)[number]]: string };
 
 /** Fields every cell has. `id` is stable for the life of the document. */
 export interface CellBase {

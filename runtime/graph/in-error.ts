@@ -2,7 +2,7 @@
 // still a fault of the document, counted by the summary and listed first by Issue and
 // sign-off (so neither goes ahead past an error nobody saw).
 
-import { cellName, type CalcDocument, type Cell } from '../document';
+import { cellName, type Cell } from '../document';
 import type { CellState } from '../engine-types';
 
 export interface CellInError {
@@ -16,7 +16,7 @@ export interface CellInError {
 }
 
 /** The cells in error, in document order, those whose error is their own first. */
-export function cellsInError(doc: CalcDocument, state: (id: string) => CellState | undefined): CellInError[] {
+export function cellsInError(doc: { cells: readonly Cell[] }, state: (id: string) => CellState | undefined): CellInError[] {
   const out: CellInError[] = [];
   for (const cell of doc.cells) {
     const s = state(cell.id);

@@ -15,7 +15,8 @@ import { escapeHtml } from '../present/escape';
 import { marginRefs } from '../present/margin';
 import { done } from '../present/result';
 import { handCalcHtml } from '../present/tex-live';
-import { prettyUnits, resultText } from '../present/units-text';
+import { unitText } from '../present/units-text';
+import { ratioBarPercent, STATUS_WORDS, statusText } from '../present/words';
 import { HANDCALC_LIMIT, texHtml as mathml } from '../record/tex';
 import { foldedWorkingsHtml } from '../working/sheet';
 import { assignedName, CLAUSE_FIELD, exprRefs, LABEL_FIELD, liveView, renameInCellExpr } from './shared';
@@ -66,16 +67,15 @@ export function renderCheck(v: CheckView): string {
 /** Live: outcome row: glyph + word, ratio figure and a bar with a mark at 1.00. */
 export function renderVerdict(v: CheckView): string {
   if (!v.verdict) return '';
-  const word = v.verdict === 'pass' ? 'OK' : 'NOT OK';
-  const glyph = v.verdict === 'pass' ? '✓' : '✗';
+  const { word, glyph } = STATUS_WORDS[v.verdict === 'pass' ? 'ok' : 'fail'];
   let ratio = '';
   if (v.ratio !== undefined) {
-    const pct = Math.max(0, Math.min(100, (v.ratio / 1.25) * 100)); // bar spans 0 to 1.25
+    const pct = ratioBarPercent(v.ratio);
     ratio = `<span class="ratio-fig">ratio ${escapeHtml(ratioText(v.ratio))}</span><span class="ratio-bar" role="meter" aria-label="demand over capacity" aria-valuemin="0" aria-valuemax="1" aria-valuenow="${
       Number.isFinite(v.ratio) ? v.ratio.toFixed(3) : '999'}"><span class="ratio-fill" style="width:${pct.toFixed(1)}%"></span><span class="ratio-one"></span></span>`;
   }
   const dc = v.demand && v.capacity
-    ? `<span class="dc">demand ${escapeHtml(prettyUnits(v.demand))} · capacity ${escapeHtml(prettyUnits(v.capacity))}</span>`
+    ? `<span class="dc">demand ${escapeHtml(unitText(v.demand))} · capacity ${escapeHtml(unitText(v.capacity))}</span>`
     : '';
   return `<div class="verdict verdict-${v.verdict}"><span class="verdict-word"><span class="glyph" aria-hidden="true">${glyph}</span> ${word}</span>${ratio}${dc}</div>`;
 }
@@ -86,8 +86,8 @@ function verdictHtml(s: CellState | undefined): string {
   const ok = s!.status === 'ok';
   const ratio = s!.ratio !== undefined ? ` <span class="lt-ratio">ratio ${escapeHtml(ratioText(s!.ratio))}</span>` : '';
   const dc = s!.demand && s!.capacity
-    ? ` <span class="lt-dc">demand ${escapeHtml(resultText(s!.demand.text))} · capacity ${escapeHtml(resultText(s!.capacity.text))}</span>` : '';
-  return `<p class="lt-verdict lt-${ok ? 'pass' : 'fail'}"><strong>${ok ? '✓ OK' : '✗ NOT OK'}</strong>${ratio}${dc}</p>`;
+    ? ` <span class="lt-dc">demand ${escapeHtml(unitText(s!.demand.text))} · capacity ${escapeHtml(unitText(s!.capacity.text))}</span>` : '';
+  return `<p class="lt-verdict lt-${ok ? 'pass' : 'fail'}"><strong>${statusText(s!.status)}</strong>${ratio}${dc}</p>`;
 }
 
 /** Record: the condition, values and ratio on one line, then the outcome. */
@@ -107,8 +107,7 @@ function recordBody(cell: CheckCell, ctx: ViewContext): string {
 function recordResult(s: CellState | undefined): string {
   if (s?.status === 'error') return '<span class="lt-res-err">error</span>';
   if (!done(s)) return '<span class="lt-res-none">—</span>';
-  const word = s!.status === 'ok' ? '✓ OK' : '✗ NOT OK';
-  return `${word}${s!.ratio !== undefined ? `<br>${escapeHtml(ratioText(s!.ratio))}` : ''}`;
+  return `${statusText(s!.status)}${s!.ratio !== undefined ? `<br>${escapeHtml(ratioText(s!.ratio))}` : ''}`;
 }
 
 export const check: KindDescription<'check'> = {

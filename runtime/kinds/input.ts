@@ -13,7 +13,7 @@ import { escapeHtml } from '../present/escape';
 import { marginRefs } from '../present/margin';
 import { done, resultHtml } from '../present/result';
 import { texHtml } from '../present/tex-live';
-import { prettyUnits } from '../present/units-text';
+import { unitText } from '../present/units-text';
 import { texHtml as mathml } from '../record/tex';
 import { CLAUSE_FIELD, LABEL_FIELD, liveView, parseAssignment } from './shared';
 import type { KindDescription } from './types';
@@ -62,8 +62,8 @@ export function renderInput(v: InputView): string {
     : `<input class="value-field" data-act="value" aria-label="${aria}" spellcheck="false" autocomplete="off" value="${
       escapeHtml(v.value)}" size="${Math.max(6, Math.min(28, v.value.length + 2))}">`;
   const shown = !v.shown ? ''
-    : v.stale ? `<span class="as-shown stale">still computing with ${escapeHtml(prettyUnits(v.shown))}</span>`
-      : `<span class="as-shown">= ${escapeHtml(prettyUnits(v.shown))}</span>`;
+    : v.stale ? `<span class="as-shown stale">still computing with ${escapeHtml(unitText(v.shown))}</span>`
+      : `<span class="as-shown">= ${escapeHtml(unitText(v.shown))}</span>`;
   const about = v.description || v.range
     ? `<div class="cell-about">${escapeHtml(v.description ?? '')}${v.range ? ` <span class="range">(${escapeHtml(v.range)})</span>` : ''}</div>`
     : '';

@@ -3,9 +3,11 @@
 import type { NoteCell } from '../document';
 import { noteFormat } from '../format/kinds/note';
 import { labelHtml, recordFrame, renderLabel, type CellViewBase, type ViewContext } from '../present/cell-frame';
-import { marginRefs, renderRefs } from '../present/margin';
-import { markdownHtml } from '../present/markdown-live';
-import { noteHtml } from '../record/markdown';
+import { marginRefs, refsHtml } from '../present/margin';
+import { escapeHtml } from '../present/escape';
+import { markdownRenderer } from '../present/markdown';
+import { texHtml } from '../present/tex-live';
+import { texHtml as mathml } from '../record/tex';
 import { CLAUSE_FIELD, liveView } from './shared';
 import type { KindDescription } from './types';
 
@@ -13,6 +15,16 @@ export interface NoteView extends CellViewBase {
   kind: 'note';
   text: string;
 }
+
+/** Live: math as KaTeX HTML, with its TeX as the reading for screen readers; links open a new tab. */
+export const liveMarkdown = markdownRenderer({
+  math: (tex) => `<span class="note-math" role="img" aria-label="${escapeHtml(tex)}">${texHtml(tex)}</span>`,
+  newTab: true,
+  longClass: 'note-long',
+});
+
+/** Record: math as MathML. */
+export const recordMarkdown = markdownRenderer({ math: (tex) => `<span class="lt-math">${mathml(tex, false)}</span>`, longClass: 'lt-long' });
 
 export function bindNote(cell: NoteCell, ctx: ViewContext): NoteView {
   return {
@@ -23,7 +35,7 @@ export function bindNote(cell: NoteCell, ctx: ViewContext): NoteView {
 
 export function renderNote(v: NoteView): string {
   return `<div class="cell-no"></div><div class="cell-body">${renderLabel(v.label)}<div class="note-text">${
-    markdownHtml(v.text)}</div></div>${renderRefs(v.refs)}`;
+    liveMarkdown(v.text)}</div></div>${refsHtml(v.refs, 'cell-ref')}`;
 }
 
 export const note: KindDescription<'note'> = {
@@ -47,5 +59,5 @@ export const note: KindDescription<'note'> = {
   summaryTitle: null,
   live: liveView(bindNote, renderNote, true),
   record: (cell, ctx) =>
-    recordFrame(cell, ctx, `${labelHtml(cell.label)}<div class="lt-note">${noteHtml(cell.text)}</div>`, '', 'plain'),
+    recordFrame(cell, ctx, `${labelHtml(cell.label)}<div class="lt-note">${recordMarkdown(cell.text)}</div>`, '', 'plain'),
 };

@@ -2,9 +2,9 @@
 
 import type { SectionCell } from '../document';
 import { sectionFormat } from '../format/kinds/section';
-import type { CellViewBase, ViewContext } from '../present/cell-frame';
+import { renderLabel, type CellViewBase, type ViewContext } from '../present/cell-frame';
 import { escapeHtml } from '../present/escape';
-import { marginRefs, renderRefs } from '../present/margin';
+import { marginRefs, refsHtml } from '../present/margin';
 import { CLAUSE_FIELD, liveView } from './shared';
 import type { KindDescription } from './types';
 
@@ -22,7 +22,7 @@ export function bindSection(cell: SectionCell, ctx: ViewContext): SectionView {
 
 export function renderSection(v: SectionView): string {
   return `<div class="cell-no sec-no">${escapeHtml(v.number)}</div><div class="cell-body"><h2 class="section-title">${
-    escapeHtml(v.title)}</h2>${v.label ? `<div class="cell-label">${escapeHtml(v.label)}</div>` : ''}</div>${renderRefs(v.refs)}`;
+    escapeHtml(v.title)}</h2>${renderLabel(v.label)}</div>${refsHtml(v.refs, 'cell-ref')}`;
 }
 
 export const section: KindDescription<'section'> = {

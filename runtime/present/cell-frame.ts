@@ -7,7 +7,7 @@ import type { Cell, CellKind } from '../document';
 import type { CellState } from '../engine-types';
 import type { HandCalcScope } from '../handcalc/index';
 import { escapeHtml } from './escape';
-import { marginRefs, refsHtml, renderRefs } from './margin';
+import { marginRefs, refsHtml } from './margin';
 
 /** What drawing a cell needs besides the cell: engine states, names, its number. */
 export interface ViewContext {
@@ -58,7 +58,7 @@ export function renderLabel(label: string | undefined): string {
 
 /** Live: number, body, references. */
 export function liveFrame(view: CellViewBase, body: string): string {
-  return `${renderNumber(view.number)}<div class="cell-body">${body}</div>${renderRefs(view.refs)}`;
+  return `${renderNumber(view.number)}<div class="cell-body">${body}</div>${refsHtml(view.refs, 'cell-ref')}`;
 }
 
 /** Record: the label line. */
@@ -75,5 +75,5 @@ export function recordFrame(cell: Cell, ctx: ViewContext, body: string, result: 
   const s = ctx.state(cell.id);
   const status = s?.status ?? idle;
   return `<div class="lt-cell lt-${cell.kind} lt-st-${status}" id="lt-c-${escapeHtml(cell.id)}" data-id="${escapeHtml(cell.id)}"><div class="lt-no">${
-    escapeHtml(ctx.number)}</div><div class="lt-body">${body}</div><div class="lt-res">${result}</div>${refsHtml(marginRefs(cell.clause, s))}</div>`;
+    escapeHtml(ctx.number)}</div><div class="lt-body">${body}</div><div class="lt-res">${result}</div>${refsHtml(marginRefs(cell.clause, s), 'lt-ref')}</div>`;
 }

@@ -4,6 +4,7 @@
 import type { CellState } from '../engine-types';
 import type { CellViewBase } from './cell-frame';
 import { escapeHtml } from './escape';
+import { errorLead, STATUS_WORDS } from './words';
 
 /** The error part of a live view, from the engine state and the source it refers to. */
 export function errorOf(state: CellState | undefined, source: string): CellViewBase['error'] {
@@ -21,14 +22,12 @@ export function renderError(error: CellViewBase['error']): string {
     where = `<code class="err-src">${escapeHtml(error.source.slice(0, at))}<mark class="err-at" title="here">${
       escapeHtml(error.source.slice(at, at + 1) || ' ')}</mark>${escapeHtml(error.source.slice(at + 1))}</code>`;
   }
-  const lead = error.kind === 'upstream' ? 'Waiting on' : 'Problem';
-  return `<div class="cell-error" role="alert"><span class="err-glyph" aria-hidden="true">⚠</span> <strong>${lead}:</strong> ${
+  return `<div class="cell-error" role="alert"><span class="err-glyph" aria-hidden="true">${STATUS_WORDS.error.glyph}</span> <strong>${errorLead(error.kind)}:</strong> ${
     escapeHtml(error.message)}${where}</div>`;
 }
 
 /** Record: the error line. */
 export function errorHtml(s: CellState | undefined): string {
   if (s?.status !== 'error' || !s.error) return '';
-  const lead = s.error.kind === 'upstream' ? 'Waiting on' : 'Problem';
-  return `<p class="lt-err" role="alert">⚠ <strong>${lead}:</strong> ${escapeHtml(s.error.message)}</p>`;
+  return `<p class="lt-err" role="alert">${STATUS_WORDS.error.glyph} <strong>${errorLead(s.error.kind)}:</strong> ${escapeHtml(s.error.message)}</p>`;
 }

@@ -10,13 +10,7 @@ export function marginRefs(clause: string | undefined, state: CellState | undefi
   return [...new Set(refs)];
 }
 
-/** Live: HTML for the right-margin references. */
-export function renderRefs(refs: string[]): string {
-  if (refs.length === 0) return '<aside class="cell-ref"></aside>';
-  return `<aside class="cell-ref">${refs.map((r) => `<span>${escapeHtml(r)}</span>`).join('')}</aside>`;
-}
-
-/** Record: HTML for the right-margin references. */
-export function refsHtml(refs: string[]): string {
-  return `<aside class="lt-ref">${refs.map((r) => `<span>${escapeHtml(r)}</span>`).join('')}</aside>`;
+/** HTML for the margin: the live sheet's class is cell-ref, the record's lt-ref. */
+export function refsHtml(refs: string[], className: 'cell-ref' | 'lt-ref'): string {
+  return `<aside class="${className}">${refs.map((r) => `<span>${escapeHtml(r)}</span>`).join('')}</aside>`;
 }

@@ -3,7 +3,7 @@
 
 import type { CellState } from '../engine-types';
 import { escapeHtml } from './escape';
-import { resultText } from './units-text';
+import { unitText } from './units-text';
 
 /** A text result longer than this is written under the hand calc, not in the result column. */
 const LONG_TEXT = 28;
@@ -20,5 +20,5 @@ export function resultHtml(s: CellState | undefined): string {
   if (s?.status === 'error') return '<span class="lt-res-err">error</span>';
   if (!done(s) || !s!.display) return '<span class="lt-res-none">—</span>';
   if (longText(s)) return '<span class="lt-res-none">see left</span>';
-  return escapeHtml(resultText(s!.display.text));
+  return escapeHtml(unitText(s!.display.text));
 }

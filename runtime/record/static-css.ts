@@ -3,6 +3,7 @@
 // sheet with "sheet n of m"; its texts come from the document, as escaped CSS strings.
 
 import type { DocMeta } from '../document';
+import { TITLE_LABELS } from '../present/title-block';
 import { cssString } from './escape';
 import { CAUTION } from './static-html';
 import { WORKING_CSS } from '../working/css';
@@ -10,9 +11,11 @@ import { WORKING_CSS } from '../working/css';
 /** Printed title-block fields are cut to this many characters so the margin stays one or two lines. */
 const FIELD_MAX = 80;
 
-function field(label: string, value: string): string {
+/** A field in a page margin: its short label in capitals, then its value. */
+function field(key: keyof DocMeta, meta: DocMeta): string {
+  const value = meta[key];
   const v = value.length > FIELD_MAX ? `${value.slice(0, FIELD_MAX)}…` : value;
-  return `${cssString(`${label}  `)} ${cssString(v || '—')}`;
+  return `${cssString(`${TITLE_LABELS[key].short.toUpperCase()}  `)} ${cssString(v || '—')}`;
 }
 
 /** The @page rules for a document's title block (screen rules do not depend on the document). */
@@ -21,8 +24,8 @@ export function pageCss(meta: DocMeta): string {
   // Only the left and right boxes: a centre box is always centred on the page and would overlap a long left one.
   return `@page {
   margin: 27mm 13mm 15mm 13mm;
-  @top-left { ${box} width: 60%; text-align: left; content: ${field('PROJECT', meta.project)} "\\A " ${field('SUBJECT', meta.subject)}; }
-  @top-right { ${box} width: 40%; text-align: right; content: ${field('JOB NO.', meta.job)} "   " ${field('REV.', meta.revision)} "   " ${field('DATE', meta.date)} "\\A " ${field('PREPARED', meta.preparedBy)} "   " ${field('CHECKED', meta.checkedBy)} "\\A SHEET " counter(page) " OF " counter(pages); }
+  @top-left { ${box} width: 60%; text-align: left; content: ${field('project', meta)} "\\A " ${field('subject', meta)}; }
+  @top-right { ${box} width: 40%; text-align: right; content: ${field('job', meta)} "   " ${field('revision', meta)} "   " ${field('date', meta)} "\\A " ${field('preparedBy', meta)} "   " ${field('checkedBy', meta)} "\\A SHEET " counter(page) " OF " counter(pages); }
   @bottom-center { font: 7pt system-ui, "DejaVu Sans", sans-serif; color: #000; content: ${cssString(CAUTION)}; }
 }`;
 }

@@ -3,14 +3,14 @@
 // the review state when the document has one. Plain HTML from escaped text and
 // KaTeX output only, so it reads with JavaScript off and prints as calc sheets.
 
-import type { CalcDocument, Cell, CheckCell, DocMeta } from '../document';
+import type { CalcDocument, Cell } from '../document';
 import { cellName } from '../document';
 import type { CellState } from '../engine-types';
-import { cellsInError, inErrorText } from '../graph/in-error';
-import { ratioText, type HandCalcScope } from '../handcalc/index';
+import type { HandCalcScope } from '../handcalc/index';
 import { describe } from '../kinds/index';
-import { done } from '../present/result';
 import { numberCells } from '../present/numbering';
+import { summaryOf, summaryTableHtml } from '../present/summary';
+import { titleBlockHtml } from '../present/title-block';
 import { sheetSystem } from '../units/systems';
 import type { LibraryCall } from '../working/calls';
 import { cellWorkingsHtml, recordOpen } from '../working/sheet';
@@ -39,74 +39,35 @@ function recordWorkings(doc: CalcDocument, state: (id: string) => CellState | un
   return (cell: Cell) => cellWorkingsHtml(calls(cell.id), face, open(cell.id));
 }
 
-export const META_LABELS: Record<keyof DocMeta, string> = {
-  project: 'Project', job: 'Job no.', subject: 'Subject', preparedBy: 'Prepared by',
-  checkedBy: 'Checked by', revision: 'Revision', date: 'Date',
-};
-
 export { numberCells };
 
-interface Ctx {
-  state: (id: string) => CellState | undefined;
-  scope: HandCalcScope;
-  numbers: Map<string, string>;
-}
-
-function titleBlockHtml(meta: DocMeta): string {
-  const field = (k: keyof DocMeta, cls = '') =>
-    `<div class="lt-tb-f${cls}"><span class="lt-tb-k">${META_LABELS[k]}</span><span class="lt-tb-v" data-meta="${k}">${
-      escapeHtml(meta[k]) || '&#8212;'}</span></div>`;
-  return `<header class="lt-tb" aria-label="Title block">${field('project')}${field('job')}${field('revision')}${field('date')}${
-    field('subject')}${field('preparedBy')}${field('checkedBy', ' lt-span2')}</header>`;
-}
-
-/** Governing first: failures, errors, pending, passes; within each the highest ratio first. */
-function summaryHtml(doc: CalcDocument, ctx: Ctx): string {
-  const rank = { fail: 0, error: 1, pending: 2, ok: 3 } as const;
-  const rows = doc.cells
-    .filter((c): c is CheckCell => c.kind === 'check')
-    .map((c, order) => ({ c, s: ctx.state(c.id), order }))
-    .sort((a, b) => rank[a.s?.status ?? 'pending'] - rank[b.s?.status ?? 'pending']
-      || (b.s?.ratio ?? -Infinity) - (a.s?.ratio ?? -Infinity) || a.order - b.order);
-  const inError = cellsInError(doc, ctx.state);
-  if (rows.length === 0 && inError.length === 0) return '';
-  const failing = rows.filter((r) => r.s?.status === 'fail').length;
-  const broken = rows.filter((r) => r.s?.status === 'error' || !done(r.s)).length;
-  const head = `${rows.length} check${rows.length === 1 ? '' : 's'}: ${failing ? `${failing} NOT OK` : 'none NOT OK'}${
-    broken ? `, ${broken} without a result` : ''}${inError.length ? `; ${inErrorText(inError)}` : ''}`;
-  const words = { ok: '✓ OK', fail: '✗ NOT OK', error: '⚠ ERROR', pending: '… pending' } as const;
-  // Cells other than checks whose error is their own come first (summary of every cell in error).
-  const sources = inError.filter((e) => e.source && e.kind !== 'check').map((e) => `<tr class="lt-st-error"><td class="lt-sum-v">${
-    words.error}</td><td class="lt-sum-r">—</td><td class="lt-sum-no"><a href="#lt-c-${escapeHtml(e.id)}">${
-    escapeHtml(ctx.numbers.get(e.id) ?? '')}</a></td><td>${escapeHtml(`${e.title}: ${e.message}`)}</td><td class="lt-sum-ref"></td></tr>`);
-  const body = rows.map(({ c, s }) => {
-    const st = s?.status ?? 'pending';
-    return `<tr class="lt-st-${st}"><td class="lt-sum-v">${words[st]}</td><td class="lt-sum-r">${
-      s?.ratio !== undefined ? escapeHtml(ratioText(s.ratio)) : '—'}</td><td class="lt-sum-no"><a href="#lt-c-${escapeHtml(c.id)}">${
-      escapeHtml(ctx.numbers.get(c.id) ?? '')}</a></td><td>${escapeHtml(c.label || c.name || c.expr.slice(0, 200))}</td><td class="lt-sum-ref">${
-      escapeHtml(c.clause ?? s?.clauses.join('; ') ?? '')}</td></tr>`;
-  });
-  return `<section class="lt-summary" aria-label="Summary of checks"><h2>Summary of checks <small>${escapeHtml(head)}</small></h2>
-<table><thead><tr><th>Outcome</th><th>Ratio</th><th>No.</th><th>Check</th><th>Reference</th></tr></thead><tbody>${sources.join('')}${body.join('')}</tbody></table></section>`;
-}
-
-/** The whole static rendering (one element, id "lt-static") for the given engine states. */
-export function staticHtml(
-  doc: CalcDocument,
-  state: (id: string) => CellState | undefined,
-  options: StaticOptions = {},
-): string {
+/**
+ * The calc itself: the summary of checks, then every cell as its kind draws it for the
+ * record, with the working of its library calls when `calls` gives them.
+ */
+export function calcHtml(doc: CalcDocument, state: (id: string) => CellState | undefined, calls?: (id: string) => LibraryCall[]): string {
   const byName = new Map<string, string>();
   for (const c of doc.cells) {
     const n = cellName(c);
     if (n !== undefined && !byName.has(n)) byName.set(n, c.id);
   }
-  const ctx: Ctx = {
-    state,
-    numbers: numberCells(doc.cells),
-    scope: { isCell: (n) => byName.has(n), state: (n) => state(byName.get(n) ?? '') },
-  };
-  const workings = recordWorkings(doc, state, options.calls);
+  const scope: HandCalcScope = { isCell: (n) => byName.has(n), state: (n) => state(byName.get(n) ?? '') };
+  const numbers = numberCells(doc.cells);
+  const workings = recordWorkings(doc, state, calls);
+  const cells = doc.cells.map((c) => describe(c.kind).record(c, { state, scope, number: numbers.get(c.id) ?? '', workings }));
+  return `${summaryTableHtml(summaryOf(doc, state, numbers))}\n<main class="lt-calc">${cells.join('\n')}</main>`;
+}
+
+/**
+ * The whole static rendering (one element, id "lt-static") for the given engine states:
+ * the page's head (a warning, the title block, the caution, how to open the file), the
+ * calc, the review state, and the footer that names the file.
+ */
+export function staticHtml(
+  doc: CalcDocument,
+  state: (id: string) => CellState | undefined,
+  options: StaticOptions = {},
+): string {
   const warning = options.warning ? `<p class="lt-warning" role="alert">${escapeHtml(options.warning)}</p>` : '';
   const foot = [
     'Calc record written by Loadtrace',
@@ -116,8 +77,7 @@ export function staticHtml(
   return `<div id="lt-static" class="lt-static" lang="en">${warning}${titleBlockHtml(doc.meta)}
 <p class="lt-caution" role="note">△ ${CAUTION}</p>
 <p class="lt-howto">This is the issued calc record. Open the file in a web browser with JavaScript on to edit and recompute it; the document it was computed from is kept inside the file.</p>
-${summaryHtml(doc, ctx)}
-<main class="lt-calc">${doc.cells.map((c) => describe(c.kind).record(c, { state, scope: ctx.scope, number: ctx.numbers.get(c.id) ?? '', workings })).join('\n')}</main>
+${calcHtml(doc, state, options.calls)}
 ${reviewHtml(doc)}
 <footer class="lt-foot">${foot}</footer></div>`;
 }

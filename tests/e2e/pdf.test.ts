@@ -16,7 +16,7 @@ import type { Engine } from '../../runtime/engine-types';
 import { parse } from '../../runtime/format/index';
 import { ratioText } from '../../runtime/handcalc/index';
 import { libraryFunctions } from '../../runtime/library/index';
-import { resultText } from '../../runtime/present/units-text';
+import { unitText as resultText } from '../../runtime/present/units-text';
 import { ROOT } from './harness';
 
 const MAIN = join(ROOT, 'docs-templates/load-path.lt');

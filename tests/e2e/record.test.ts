@@ -15,7 +15,7 @@ import { setInputValue } from '../../runtime/edit/index';
 import { createEngine } from '../../runtime/engine';
 import { parse } from '../../runtime/format/index';
 import { exportComputed, unpack } from '../../runtime/record/index';
-import { resultText } from '../../runtime/present/units-text';
+import { unitText as resultText } from '../../runtime/present/units-text';
 import { hostileDocument } from '../record/fixtures';
 import { ARTIFACTS, CHROMIUM_ARGS, ROOT, artifactsDir } from './harness';
 import { appDist } from './app-session';

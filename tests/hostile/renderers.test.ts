@@ -3,16 +3,15 @@
 // 2 s hang guard (an outcome threshold, not a speed target: before the fix, 400 KB of
 // "[a](" took 50 s in the app's renderer and 100 KB took 4.8 s in the record's).
 import { describe, expect, it } from 'vitest';
-import { markdownHtml } from '../../runtime/present/markdown-live';
-import { noteHtml } from '../../runtime/record/markdown';
+import { liveMarkdown, recordMarkdown } from '../../runtime/kinds/note';
 import { HANG_MS, timed } from './figures';
 
 const PATTERNS = ['[a](', '[', '](', '*a', '**a*', '`', '$', '[a](b ', '[**a', '*', '_', '<a href="javascript:alert(1)">', '1. [a](', '- *'];
 const SIZES = [100_000, 1_000_000];
 
 describe.each([
-  ['the app', markdownHtml],
-  ['the record', noteHtml],
+  ['the app', liveMarkdown],
+  ['the record', recordMarkdown],
 ] as const)('%s renders hostile note Markdown in linear time', (_where, render) => {
   for (const size of SIZES) {
     it.each(PATTERNS)(`"%s" repeated to ${size / 1000} KB`, (pattern) => {

@@ -1,9 +1,7 @@
 // The summary counts every cell in error, not only the checks: a broken formula no check
 // reads made the app say "25 checks: 1 NOT OK" (issue 15, item 10). Live and record alike.
 import { describe, expect, it } from 'vitest';
-import { summaryHtml, summaryRows } from '../../cells/summary';
-import type { CheckCell } from '../../runtime/document';
-import { cellsInError } from '../../runtime/graph/in-error';
+import { summaryListHtml, summaryOf } from '../../runtime/present/summary';
 import { staticHtml } from '../../runtime/record/static-html';
 import { check, doc, formula, input, run } from '../engine/helpers';
 
@@ -16,8 +14,7 @@ describe('the summary counts every cell in error', () => {
   it('in the app: the head counts them and the broken formula is listed first', async () => {
     const { engine } = await run(d);
     const state = (id: string) => engine.state(id);
-    const checks = d.cells.filter((c): c is CheckCell => c.kind === 'check');
-    const html = summaryHtml(summaryRows(checks, state, new Map()), cellsInError(d, state));
+    const html = summaryListHtml(summaryOf(d, state, new Map()));
     expect(html).toMatch(/1 check: none NOT OK; 2 cells in error, 1 at its source/);
     expect(html.indexOf('bad: ')).toBeGreaterThan(0);
     expect(html.indexOf('bad: ')).toBeLessThan(html.indexOf('Width within the bay'));
