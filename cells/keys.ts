@@ -16,14 +16,14 @@ export interface Shortcut {
 }
 
 export const SHORTCUTS: Shortcut[] = [
-  { keys: ['ArrowDown', 'j'], command: 'next', what: 'Select the next cell' },
-  { keys: ['ArrowUp', 'k'], command: 'prev', what: 'Select the previous cell' },
+  { keys: ['ArrowDown'], command: 'next', what: 'Select the next cell' },
+  { keys: ['ArrowUp'], command: 'prev', what: 'Select the previous cell' },
   { keys: ['Enter'], command: 'edit', what: 'Edit the selected cell (an input: its value, in place)' },
   { keys: ['e'], command: 'editFull', what: 'Open the full editor of the selected cell (name, unit, label, reference)' },
   { keys: ['Alt+ArrowUp'], command: 'moveUp', what: 'Move the selected cell up' },
   { keys: ['Alt+ArrowDown'], command: 'moveDown', what: 'Move the selected cell down' },
   { keys: ['d'], command: 'duplicate', what: 'Duplicate the selected cell' },
-  { keys: ['Delete', 'x'], command: 'delete', what: 'Delete the selected cell (undo brings it back)' },
+  { keys: ['Delete'], command: 'delete', what: 'Delete the selected cell (undo brings it back)' },
   { keys: ['i'], command: 'addInput', what: 'Add an input below' },
   { keys: ['f'], command: 'addFormula', what: 'Add a formula below' },
   { keys: ['c'], command: 'addCheck', what: 'Add a check below' },

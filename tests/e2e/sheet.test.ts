@@ -242,7 +242,7 @@ describe('the calc sheet in Chromium', () => {
     expect(await page.evaluate((id) => (window as any).loadtrace.doc.cells.find((c: any) => c.id === id).name, copy)).toBe('D_2');
     await page.keyboard.press('Alt+ArrowUp');
     expect((await ids()).indexOf(copy)).toBe((await ids()).indexOf('f2') - 1);
-    await page.keyboard.press('x');
+    await page.keyboard.press('Delete');
     expect(await ids()).toEqual(start);
     await shot('12-keyboard-edits');
     await page.keyboard.press('Control+z');
