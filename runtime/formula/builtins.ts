@@ -2,6 +2,7 @@
 // each with a type rule (checked at compile time) and a plain-number body.
 
 import { DIMLESS, isDimless, sameDims, scaleDims, unitInfo } from '../units/dimension';
+import type { Kernel } from './closures';
 import { describeType, NUMBER, numType, type VType } from './value-type';
 
 export interface Builtin {
@@ -12,7 +13,7 @@ export interface Builtin {
   maxArgs: number;
   /** Result type, or a sentence saying what is wrong with the arguments. */
   type(args: VType[]): VType | string;
-  fn: (...args: any[]) => unknown;
+  fn: Kernel;
 }
 
 const ANGLE = unitInfo('rad').dims;
@@ -89,7 +90,7 @@ const list: Builtin[] = [
   { name: 'floor', signature: 'floor(x)', doc: 'Round a pure number down.', minArgs: 1, maxArgs: 1, type: pureNumbers, fn: Math.floor },
   {
     name: 'round', signature: 'round(x, digits)', doc: 'Round a pure number (to digits decimals).', minArgs: 1, maxArgs: 2, type: pureNumbers,
-    fn: (x: number, n = 0) => {
+    fn: (x: number, n: number = 0) => {
       const k = Math.pow(10, Math.round(n));
       return Math.round(x * k) / k;
     },

@@ -2,6 +2,7 @@
 // input slots, folded to a constant when it reads no cell. Plain numbers throughout.
 
 import { DIMLESS } from '../units/dimension';
+import { isConstant, isOperator, isParenthesis, type MathNode } from './nodes';
 import type { VType } from './value-type';
 
 export type Ev = (a: readonly unknown[]) => unknown;
@@ -18,7 +19,13 @@ export function constant(type: VType, value: unknown): CNode {
 }
 
 /** A node computed from others; folded to a constant when all of them are. */
-export function derive(type: VType, args: CNode[], f: (...v: any[]) => unknown): CNode {
+/**
+ * A function of plain values whose types the compiler has checked (numbers in SI, texts,
+ * booleans). Declared as a method, so each one names its own argument types.
+ */
+export type Kernel = { run(...values: unknown[]): unknown }['run'];
+
+export function derive(type: VType, args: CNode[], f: Kernel): CNode {
   if (args.every((a) => a.constant)) return constant(type, f(...args.map((a) => a.constant!.value)));
   // Fixed-arity closures: no argument arrays on the hot path.
   const evs = args.map((a) => a.ev);
@@ -78,12 +85,16 @@ export function dimsOf(x: CNode): readonly number[] {
 }
 
 /** A number written without any name: `2`, `-3`, `(1/2)`, `1e3`. */
-export function pureConstant(n: any): number | undefined {
-  if (n.type === 'ConstantNode') return typeof n.value === 'number' ? n.value : undefined;
-  if (n.type === 'ParenthesisNode') return pureConstant(n.content);
-  if (n.type === 'OperatorNode') {
-    const vals = n.args.map(pureConstant);
-    if (vals.some((v: number | undefined) => v === undefined)) return undefined;
+export function pureConstant(n: MathNode): number | undefined {
+  if (isConstant(n)) return typeof n.value === 'number' ? n.value : undefined;
+  if (isParenthesis(n)) return pureConstant(n.content);
+  if (isOperator(n)) {
+    const vals: number[] = [];
+    for (const arg of n.args) {
+      const v = pureConstant(arg);
+      if (v === undefined) return undefined;
+      vals.push(v);
+    }
     if (n.args.length === 1) return n.fn === 'unaryMinus' ? -vals[0] : n.fn === 'unaryPlus' ? vals[0] : undefined;
     const [a, b] = vals;
     switch (n.fn) {

@@ -1,7 +1,7 @@
 // Compiling a check: `demand <= capacity` (or `capacity >= demand`) gives a ratio,
 // any other true/false expression is a plain condition.
 
-import type { MathNode } from 'mathjs';
+import { isOperator, isParenthesis, type MathNode } from './nodes';
 import type { LibFunction } from '../library/types';
 import { CellError } from './cell-error';
 import type { Ev } from './closures';
@@ -47,11 +47,11 @@ const RATIO_OPS: Record<string, 'le' | 'ge'> = { '<=': 'le', '<': 'le', '>=': 'g
  * demand/capacity ratio; anything else true/false is a plain condition.
  */
 export function compileCheck(source: string, scope: CompileScope): CompiledCheck {
-  const ast = parseFormula(source) as any;
+  const ast = parseFormula(source);
   const c = new Compiler(source, scope);
-  const top = ast.type === 'ParenthesisNode' ? ast.content : ast;
-  const dir = top.type === 'OperatorNode' && top.args.length === 2 ? RATIO_OPS[top.op] : undefined;
-  if (dir) {
+  const top = isParenthesis(ast) ? ast.content : ast;
+  const dir = isOperator(top) && top.args.length === 2 ? RATIO_OPS[top.op] : undefined;
+  if (dir && isOperator(top)) {
     const left = c.node(top.args[0], 1);
     const right = c.node(top.args[1], 1);
     if (left.type.t === 'num' && sameType(left.type, right.type)) {

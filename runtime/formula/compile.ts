@@ -7,6 +7,9 @@ import { addDims, DIMLESS, isDimless, scaleDims, isUnitName, unitInfo } from '..
 import { BUILTINS } from './builtins';
 import { CellError } from './cell-error';
 import { approxEqual, arithmetic, arity, compareFn, constant, derive, dimsOf, hintOf, pureConstant, type CNode, type Ev } from './closures';
+import {
+  isCall, isConditional, isConstant, isOperator, isParenthesis, isRelational, isSymbol, type CallNode, type ConditionalNode, type ConstNode, type MathNode, type OpNode, type RelationalNode,
+} from './nodes';
 import { columnOf, parseFormula } from './parse';
 import { nearestName } from './suggest';
 import { BOOL, describeType, NUMBER, numType, sameType, TEXT, typeFromDeclaration, type VType } from './value-type';
@@ -84,25 +87,18 @@ export class Compiler {
     throw new CellError(kind, message, name ? columnOf(this.source, name) : undefined);
   }
 
-  node(n: any, depth: number): CNode {
+  node(n: MathNode, depth: number): CNode {
     if (depth > MAX_DEPTH) this.fail('syntax', 'the formula is nested too deeply');
     const q = this.quantity(n);
     if (q) return q;
+    if (isConstant(n)) return this.constantNode(n);
+    if (isSymbol(n)) return this.symbol(n.name);
+    if (isParenthesis(n)) return this.node(n.content, depth + 1);
+    if (isOperator(n)) return this.operator(n, depth);
+    if (isConditional(n)) return this.conditional(n, depth);
+    if (isRelational(n)) return this.relational(n, depth);
+    if (isCall(n)) return this.call(n, depth);
     switch (n.type) {
-      case 'ConstantNode':
-        return this.constantNode(n);
-      case 'SymbolNode':
-        return this.symbol(n.name);
-      case 'ParenthesisNode':
-        return this.node(n.content, depth + 1);
-      case 'OperatorNode':
-        return this.operator(n, depth);
-      case 'ConditionalNode':
-        return this.conditional(n, depth);
-      case 'RelationalNode':
-        return this.relational(n, depth);
-      case 'FunctionNode':
-        return this.call(n, depth);
       case 'AssignmentNode':
       case 'FunctionAssignmentNode':
         return this.fail('not-allowed', 'a formula cannot assign; give the name in the cell and only the expression here');
@@ -121,7 +117,7 @@ export class Compiler {
     }
   }
 
-  private constantNode(n: any): CNode {
+  private constantNode(n: ConstNode): CNode {
     const v = n.value;
     if (typeof v === 'number') return constant(NUMBER, v);
     if (typeof v === 'string') {
@@ -158,8 +154,8 @@ export class Compiler {
   }
 
   /** `12 in`, `150 lbf/ft^3`, `5 kip ft`: a number followed by units folds to a constant. */
-  private quantity(n: any): CNode | undefined {
-    if (n.type !== 'OperatorNode' || n.args?.length !== 2) return undefined;
+  private quantity(n: MathNode): CNode | undefined {
+    if (!isOperator(n) || n.args.length !== 2) return undefined;
     const implicit = n.fn === 'multiply' && n.implicit;
     const chained = !implicit && (n.fn === 'multiply' || n.fn === 'divide');
     if (!implicit && !chained) return undefined;
@@ -174,38 +170,38 @@ export class Compiler {
     return constant(numType(dims, hint), value);
   }
 
-  private numberOrQuantity(n: any): { value: number; dims: readonly number[]; hint?: string } | undefined {
+  private numberOrQuantity(n: MathNode): { value: number; dims: readonly number[]; hint?: string } | undefined {
     const q = this.quantityOnly(n);
     if (q) return q;
     const v = pureConstant(n);
     return v === undefined ? undefined : { value: v, dims: DIMLESS };
   }
 
-  private quantityOnly(n: any): { value: number; dims: readonly number[]; hint?: string } | undefined {
+  private quantityOnly(n: MathNode): { value: number; dims: readonly number[]; hint?: string } | undefined {
     const q = this.quantity(n);
     if (!q?.constant || q.type.t !== 'num') return undefined;
     return { value: q.constant.value as number, dims: q.type.dims, hint: q.type.hint };
   }
 
-  private unitExpr(n: any, strict: boolean): { factor: number; dims: readonly number[]; text: string } | undefined {
-    if (n.type === 'SymbolNode') {
-      const name: string = n.name;
+  private unitExpr(n: MathNode, strict: boolean): { factor: number; dims: readonly number[]; text: string } | undefined {
+    if (isSymbol(n)) {
+      const name = n.name;
       if (this.scope.isCell(name) || !isUnitName(name)) return undefined;
       if (strict && name.length === 1 && !SHORT_UNITS_AFTER_OPERATOR.has(name)) return undefined;
       const u = unitInfo(name);
       return { factor: u.factor, dims: u.dims, text: name };
     }
-    if (n.type === 'ParenthesisNode') {
+    if (isParenthesis(n)) {
       const u = this.unitExpr(n.content, strict);
       return u && { ...u, text: `(${u.text})` };
     }
-    if (n.type === 'OperatorNode' && n.fn === 'pow') {
+    if (isOperator(n) && n.fn === 'pow') {
       const base = this.unitExpr(n.args[0], strict);
       const p = pureConstant(n.args[1]);
       if (!base || p === undefined) return undefined;
       return { factor: Math.pow(base.factor, p), dims: scaleDims(base.dims, p), text: `${base.text}^${p}` };
     }
-    if (n.type === 'OperatorNode' && (n.fn === 'multiply' || n.fn === 'divide') && n.args.length === 2) {
+    if (isOperator(n) && (n.fn === 'multiply' || n.fn === 'divide') && n.args.length === 2) {
       const a = this.unitExpr(n.args[0], strict);
       const b = a && this.unitExpr(n.args[1], strict || !n.implicit);
       if (!a || !b) return undefined;
@@ -219,9 +215,9 @@ export class Compiler {
     return undefined;
   }
 
-  private operator(n: any, depth: number): CNode {
+  private operator(n: OpNode, depth: number): CNode {
     const op: string = n.op;
-    const args: CNode[] = n.args.map((a: any) => this.node(a, depth + 1));
+    const args: CNode[] = n.args.map((a) => this.node(a, depth + 1));
     if (args.length === 1) {
       const [x] = args;
       if (op === '-' || op === '+') {
@@ -291,7 +287,7 @@ export class Compiler {
     return derive(numType(scaleDims(dimsOf(x), p)), [x, y], p === 2 ? (b: number) => b * b : p === 0.5 ? (b: number) => Math.sqrt(b) : Math.pow);
   }
 
-  private conditional(n: any, depth: number): CNode {
+  private conditional(n: ConditionalNode, depth: number): CNode {
     const c = this.node(n.condition, depth + 1);
     const a = this.node(n.trueExpr, depth + 1);
     const b = this.node(n.falseExpr, depth + 1);
@@ -303,9 +299,9 @@ export class Compiler {
     return node;
   }
 
-  private relational(n: any, depth: number): CNode {
-    const params: CNode[] = n.params.map((p: any) => this.node(p, depth + 1));
-    const tests = (n.conditionals as string[]).map((c, i) => {
+  private relational(n: RelationalNode, depth: number): CNode {
+    const params: CNode[] = n.params.map((p) => this.node(p, depth + 1));
+    const tests = n.conditionals.map((c, i) => {
       const op = ({ smaller: '<', larger: '>', smallerEq: '<=', largerEq: '>=', equal: '==', unequal: '!=' } as Record<string, string>)[c];
       if (!op) this.fail('not-allowed', `the comparison ${c} is not part of the formula language`);
       this.needSame(params[i], params[i + 1], 'compare');
@@ -316,10 +312,10 @@ export class Compiler {
     return derive(BOOL, params, (...v: unknown[]) => tests.every(({ i, f }) => f(v[i], v[i + 1])));
   }
 
-  private call(n: any, depth: number): CNode {
-    if (n.fn?.type !== 'SymbolNode') this.fail('not-allowed', 'only named functions can be called');
-    const name: string = n.fn.name;
-    const args: CNode[] = n.args.map((a: any) => this.node(a, depth + 1));
+  private call(n: CallNode, depth: number): CNode {
+    if (!isSymbol(n.fn)) return this.fail('not-allowed', 'only named functions can be called');
+    const name = n.fn.name;
+    const args: CNode[] = n.args.map((a) => this.node(a, depth + 1));
     const builtin = BUILTINS.get(name);
     if (builtin) {
       if (args.length < builtin.minArgs || args.length > builtin.maxArgs) {

@@ -2,7 +2,7 @@
 // exhausting the stack or memory: length, bracket depth, and a catch-all that
 // turns any parser failure into a syntax error with a column.
 
-import type { MathNode } from 'mathjs';
+import { isCall, isSymbol, type MathNode } from './nodes';
 import { math } from '../units/math';
 import { CellError } from './cell-error';
 
@@ -72,24 +72,21 @@ function plainSyntax(msg: string): string {
 export function symbolNames(node: MathNode): string[] {
   const out: string[] = [];
   const seen = new Set<string>();
-  const walk = (n: any, depth: number) => {
-    if (depth > 200 || !n) return;
-    if (n.type === 'SymbolNode') {
+  const walk = (n: MathNode, depth: number) => {
+    if (depth > 200) return;
+    if (isSymbol(n)) {
       if (!seen.has(n.name)) {
         seen.add(n.name);
         out.push(n.name);
       }
       return;
     }
-    if (n.type === 'FunctionNode') {
-      for (const a of n.args ?? []) walk(a, depth + 1);
+    // A call's own name is no value: only its arguments are walked.
+    if (isCall(n)) {
+      for (const a of n.args) walk(a, depth + 1);
       return;
     }
-    for (const key of ['args', 'items']) if (Array.isArray(n[key])) for (const c of n[key]) walk(c, depth + 1);
-    for (const key of ['content', 'condition', 'trueExpr', 'falseExpr', 'object', 'value', 'expr', 'index'])
-      if (n[key] && typeof n[key] === 'object') walk(n[key], depth + 1);
-    if (Array.isArray(n.params)) for (const c of n.params) walk(c, depth + 1);
-    if (Array.isArray(n.dimensions)) for (const c of n.dimensions) walk(c, depth + 1);
+    n.forEach((child) => walk(child, depth + 1));
   };
   walk(node, 0);
   return out;

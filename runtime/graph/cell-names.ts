@@ -6,6 +6,7 @@
 import { cellName, type Cell } from '../document';
 import { CellError } from '../formula/cell-error';
 import type { CompileScope, NameInfo } from '../formula/compile';
+import { isSymbol, unbracket, type MathNode } from '../formula/nodes';
 import { columnOf } from '../formula/parse';
 import type { LibFunction } from '../library/types';
 import type { CellProgram } from './cell-program';
@@ -82,9 +83,9 @@ export class CellNames {
   }
 
   /** Display unit for one side of a check (a mathjs node): the unit of the cell it names, if it is a bare name. */
-  unitOfNode(node: any): string {
-    while (node?.type === 'ParenthesisNode') node = node.content;
-    return node?.type === 'SymbolNode' ? this.unitOfName(node.name) : '';
+  unitOfNode(node: MathNode): string {
+    const n = unbracket(node);
+    return isSymbol(n) ? this.unitOfName(n.name) : '';
   }
 
   /** What a sweep needs of a cell it names (none when the name is missing or taken twice). */

@@ -3,6 +3,7 @@
 
 import type { CheckCell, FormulaCell, InputCell } from '../document';
 import { CellError } from '../formula/cell-error';
+import type { MathNode } from '../formula/nodes';
 import { compileExpression, type CompileScope } from '../formula/compile';
 import { compileCheck } from '../formula/compile-check';
 import { displayNumber } from '../formula/display';
@@ -113,7 +114,7 @@ export function formulaProgram(cell: FormulaCell, scope: CompileScope): CellProg
 export function checkProgram(
   cell: CheckCell,
   scope: CompileScope,
-  unitOf: (source: unknown) => string,
+  unitOf: (source: MathNode) => string,
   system: UnitSystem,
 ): CellProgram {
   let compiled;

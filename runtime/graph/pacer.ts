@@ -13,10 +13,11 @@ function nextTask(): Promise<void> {
   if (typeof setImmediate === 'function') return new Promise((r) => setImmediate(r));
   return new Promise((r) => {
     const ch = new MessageChannel();
-    ch.port1.onmessage = () => {
+    ch.port1.addEventListener('message', () => {
       ch.port1.close();
       r();
-    };
+    });
+    ch.port1.start(); // a listener added this way waits for start() (onmessage= starts by itself)
     ch.port2.postMessage(null);
   });
 }

@@ -3,6 +3,7 @@
 // needs of the cells it names, and the cell's previous program.
 
 import type { CompileScope } from '../formula/compile';
+import type { MathNode } from '../formula/nodes';
 import type { LibFunction } from '../library/types';
 import type { UnitSystem } from '../units/systems';
 import type { CellProgram } from './cell-program';
@@ -14,7 +15,7 @@ export interface ProgramEnv {
   /** The library, for a formula's faults of its own. */
   functions: ReadonlyMap<string, LibFunction>;
   /** Display unit of the cell a (mathjs) node names, if it is a bare name; '' otherwise. */
-  unitOfNode(node: unknown): string;
+  unitOfNode(node: MathNode): string;
   /** Display unit of the cell of this name ('' when none). */
   unitOfName(name: string): string;
   /** The sheet's unit system (the vote of its display units). */

@@ -161,12 +161,12 @@ export const functions: LibFunction[] = [
   defineFunction({
     name: 'nq_terzaghi', params: [phiParam, modeParam], optional: 1, returns: '1',
     clause: 'Terzaghi (1943): Nq = e^{2(3π/4 − φ/2)tanφ}/(2cos²(45° + φ/2))' + LOCAL,
-    doc: 'Terzaghi bearing capacity factor Nq', fn: factor('nq'),
+    doc: 'Terzaghi bearing capacity factor Nq', fn: (phi: number, m?: string) => factor('nq')(phi, m),
   }),
   defineFunction({
     name: 'nc_terzaghi', params: [phiParam, modeParam], optional: 1, returns: '1',
     clause: 'Terzaghi (1943): Nc = (Nq − 1)cotφ, 1.5π + 1 at φ = 0' + LOCAL,
-    doc: 'Terzaghi bearing capacity factor Nc', fn: factor('nc'),
+    doc: 'Terzaghi bearing capacity factor Nc', fn: (phi: number, m?: string) => factor('nc')(phi, m),
   }),
   defineFunction({
     name: 'ngamma_terzaghi', params: [phiParam, modeParam, familyParam], optional: 2, returns: '1',

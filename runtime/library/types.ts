@@ -34,7 +34,12 @@ export interface LibFunction {
   clause: string;
   /** One line for completion and the help panel. */
   doc: string;
-  fn: (...args: any[]) => LibValue;
+  /**
+   * Called with one value per param, in order, of the param's type (checked when the
+   * formula compiles; undefined for a left-out optional one). Method syntax: each
+   * function declares its own argument types, kept in step by defineFunction.
+   */
+  fn(...args: unknown[]): LibValue;
 }
 
 /** An error a library function raises about its arguments; shown at the calling cell. */
@@ -42,7 +47,33 @@ export class LibraryError extends Error {
   override name = 'LibraryError';
 }
 
-/** Identity helper that keeps the literal types checked. */
-export function defineFunction(def: LibFunction): LibFunction {
-  return def;
+/**
+ * The argument a param hands the function: a string for 'text', a boolean for 'bool', a
+ * number for a physical type. A param whose type was widened to `string` (declared as
+ * LibParam) is not checked (never: any argument type is accepted for it).
+ */
+type ArgOf<P> = P extends { type: infer T }
+  ? string extends T ? never
+    : T extends 'text' ? (P extends { choices: readonly (infer C)[] } ? C : string)
+      : T extends 'bool' ? boolean : number
+  : never;
+/** One argument per param; params built from an array of unknown length are not checked. */
+type ArgsOf<Ps extends readonly LibParam[]> = number extends Ps['length'] ? never[] : { -readonly [I in keyof Ps]: ArgOf<Ps[I]> };
+
+/** The function takes exactly as many arguments as there are params (optional ones included). */
+type ArgCount<F> = F extends (...args: infer A) => unknown ? Required<A>['length'] : never;
+type SameCount<Ps extends readonly LibParam[], F> =
+  number extends Ps['length'] ? unknown
+    : ArgCount<F> extends Ps['length'] ? unknown
+      : { error: 'the function takes another number of arguments than there are params' };
+
+/**
+ * A library function, with its params and its function kept in step: the function takes
+ * one argument per param, a string for a 'text' param, a boolean for 'bool', a number for
+ * the rest. A mismatch is a compile error at the definition.
+ */
+export function defineFunction<const Ps extends readonly LibParam[], F extends (...args: ArgsOf<Ps>) => LibValue>(
+  def: Omit<LibFunction, 'params' | 'fn'> & { params: Ps; fn: F & SameCount<Ps, F> },
+): LibFunction {
+  return { ...def, params: [...def.params], fn: def.fn };
 }
