@@ -52,7 +52,7 @@ describe('the whole building, mark by mark', () => {
     i.columns[0] = { ...i.columns[0], loads: { D: 150 * kip, L: 40 * kip } };
     const b = prepareBuilding(i);
     const a1 = computeMark(b, i.columns[0].mark);
-    // 1.2 × 150 + 1.6 × 40 + 0.5 × Lr(20 psf × 120 ft² = 2.4 kip) = 180 + 64 + 1.2 = 245.2 kip (ASCE 7-16 §2.3.1 comb. 2)
+    // 1.2 × 150 + 1.6 × 40 + 0.5 × Lr(20 psf × 120 ft² = 2.4 kip) = 180 + 64 + 1.2 = 245.2 kip (ASCE 7-22 §2.3.1 comb. 2)
     expect(a1.base.Pu / kip).toBeCloseTo(245.2, 6);
     expect(computeMark(b, 'C3').base.Pu).toBeCloseTo(byMark.get('C3')!.base.Pu, 9);
   });

@@ -96,13 +96,13 @@ describe('a whole takedown by hand: roof and two floors', () => {
   const rows = takedown(prepareStoreys(levels, wc), col(400 * ft2), wc);
   const lb = (v: number) => v / lbf;
 
-  it('roof row: 1.2D + 1.6Lr governs (ASCE 7-16 §2.3.1 comb. 3)', () => {
+  it('roof row: 1.2D + 1.6Lr governs (ASCE 7-22 §2.3.1 comb. 3)', () => {
     // D = 400 × 132.5 + 4,166.7 = 57,166.7 lb; Lr = 400 × 20 = 8,000 lb
     // 1.4D = 80,033; 1.2D + 0.5Lr = 72,600; 1.2D + 1.6Lr = 68,600 + 12,800 = 81,400 lb
     expect(lb(rows[0].D)).toBeCloseTo(57166.67, 1);
     expect(lb(rows[0].Pu)).toBeCloseTo(81400, 1);
     expect(rows[0].combo).toBe('1.2D + 1.6(Lr or S or R) + L');
-    // service: D + Lr = 65,166.7 lb (ASCE 7-16 §2.4.1)
+    // service: D + Lr = 65,166.7 lb (ASCE 7-22 §2.4.1)
     expect(lb(rows[0].Ps)).toBeCloseTo(65166.67, 1);
   });
 

@@ -4,12 +4,12 @@ import { LibraryError } from '../../runtime/library/types';
 import { inch, kip, ksi, kN, mm, MPa, psi } from '../../runtime/units/si';
 
 const in2 = inch * inch;
-// reference-values.md e.4: 18 x 18 in, 8 #9 (Ast = 8.00 in²), f'c = 5000 psi, fy = 60 ksi
+// ACI 318-19 §22.4.2 (Eq. 22.4.2.2, Table 22.4.2.1): 18 x 18 in, 8 #9 (Ast = 8.00 in²), f'c = 5000 psi, fy = 60 ksi
 const e4 = [5000 * psi, 324 * in2, 8 * in2, 60 * ksi] as const;
 
 describe('column axial strength, ACI 318-19 §22.4', () => {
   it('e.4 worked check: Po = 1823 kip, φPn,max = 948 kip (tied)', () => {
-    // reference-values.md e.4 [COMPUTED; Eq. 22.4.2.2 and Table 22.4.2.1 CONFIRMED]: printed to 1 kip
+    // hand calculation from ACI 318-19 Eq. 22.4.2.2 and Table 22.4.2.1: printed to 1 kip
     expect(Math.abs(num('po_column', ...e4) / kip - 1823)).toBeLessThan(0.5);
     expect(Math.abs(num('phi_pn_max', ...e4, 'tied') / kip - 948)).toBeLessThan(0.5);
     // Pn,max = 0.80 Po = 1458.4 kip (Table 22.4.2.1 [CONFIRMED])
@@ -17,12 +17,12 @@ describe('column axial strength, ACI 318-19 §22.4', () => {
   });
 
   it('spiral: Pn,max = 0.85 Po, φ = 0.75', () => {
-    // reference-values.md e.4 / e.3 [CONFIRMED]: 0.75·0.85·1823 = 1162.2 kip
+    // ACI 318-19 Table 22.4.2.1 and Table 21.2.2 (spiral φ = 0.75): 0.75·0.85·1823 = 1162.2 kip
     expect(num('phi_pn_max', ...e4, 'spiral') / kip).toBeCloseTo(1162.16, 1);
   });
 
   it('caps fy at 80 ksi in Po (§22.4.2.1)', () => {
-    // reference-values.md e.4 [CONFIRMED]: fy = 100 ksi counts as 80: 1343 + 80·8 = 1983 kip
+    // ACI 318-19 §22.4.2.1: fy = 100 ksi counts as 80: 1343 + 80·8 = 1983 kip
     expect(num('po_column', 5000 * psi, 324 * in2, 8 * in2, 100 * ksi) / kip).toBeCloseTo(1983, 6);
   });
 
@@ -35,7 +35,7 @@ describe('column axial strength, ACI 318-19 §22.4', () => {
   });
 
   it('ρg limits 0.01 to 0.08 (§10.6.1.1)', () => {
-    // reference-values.md e.4 [CONFIRMED]: 8/324 = 0.0247 inside; 3/324 = 0.0093 and 27/324 = 0.083 outside
+    // ACI 318-19 §10.6.1.1: 8/324 = 0.0247 inside; 3/324 = 0.0093 and 27/324 = 0.083 outside
     expect(num('rho_g', 8 * in2, 324 * in2)).toBeCloseTo(0.02469, 5);
     expect(call('rho_g_ok', 8 * in2, 324 * in2)).toBe(true);
     expect(call('rho_g_ok', 3 * in2, 324 * in2)).toBe(false);

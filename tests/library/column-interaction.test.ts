@@ -1,7 +1,7 @@
 // P–M interaction of a rectangular tied column by strain compatibility, checked against
 // points worked by hand here (kip, in, ksi) with the ACI 318-19 §22.2 assumptions:
 // εcu = 0.003 (§22.2.2.1), Es = 29,000 ksi (§20.2.2.2), 0.85 f'c over a = β1 c
-// (§22.2.2.4.1, CONFIRMED in reference-values e.3), β1 = 0.80 at 5000 psi (Table 22.2.2.4.3,
+// (ACI 318-19 §22.2.2.4.1), β1 = 0.80 at 5000 psi (Table 22.2.2.4.3,
 // CONFIRMED), φ from εt by Table 21.2.2 (0.65 tied at εt ≤ εty, 0.90 at εt ≥ εty + 0.003;
 // 318-14: 0.005; from memory), Pn,max = 0.80 Po (Table 22.4.2.1, CONFIRMED).
 

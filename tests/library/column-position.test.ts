@@ -12,7 +12,7 @@ const i = inch;
 
 describe('KLL and tributary area by position', () => {
   it('KLL: 4 for every column without a cantilever slab; 3 edge, 2 corner with one (ASCE 7-22 Table 4.7-1)', () => {
-    // Table 4.7-1 (CONFIRMED in reference-values d, ASCE 7-02 / IBC Table 1607.11.1 reproduction)
+    // Table 4.7-1 (ASCE 7-22; as in IBC Table 1607.11.1)
     expect(num('kll_column', 'interior')).toBe(4);
     expect(num('kll_column', 'edge')).toBe(4);
     expect(num('kll_column', 'corner')).toBe(4);
@@ -43,7 +43,7 @@ describe('KLL and tributary area by position', () => {
     expect(num('ddm_column_coef', 'edge', 'edge-beam')).toBe(0.3);
     expect(num('ddm_span_coef', 'edge', 'edge-beam')).toBe(0.5);
     // Column strip: 75 % of the interior negative (Table 8.10.5.1), 100 % of the exterior negative with βt = 0
-    // (Table 8.10.5.2), both from memory (flat plate, reference-values e.7)
+    // (Table 8.10.5.2), both from memory (flat plate, ACI 318-19 §8.10.5)
     expect(num('cs_column_fraction', 'interior', 22 / 24)).toBeCloseTo(0.75, 12);
     expect(num('cs_column_fraction', 'edge', 22 / 24)).toBeCloseTo(1, 12);
     expect(() => call('ddm_column_coef', 'edge', 'cantilever')).toThrow(/unknown end_case/);

@@ -5,7 +5,7 @@ import { ft, inch, kipFt, kNm, m, mm } from '../../runtime/units/si';
 
 describe('braced column slenderness, ACI 318-19 §6.2.5', () => {
   it('r = 0.3h for rectangular, 0.25D for circular sections', () => {
-    // §6.2.5.2 r = 0.30h (brief; clause number from memory); 16 in → 4.8 in; 0.25·20 in = 5 in (from memory)
+    // ACI 318-19 §6.2.5.2 r = 0.30h (from memory); 16 in → 4.8 in; 0.25·20 in = 5 in (from memory)
     expect(num('r_rect', 16 * inch) / inch).toBeCloseTo(4.8, 12);
     expect(num('r_circular', 20 * inch) / inch).toBeCloseTo(5, 12);
   });

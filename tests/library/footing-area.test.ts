@@ -5,7 +5,7 @@ import { ft, kip, kN, kPa, m, pcf, psf, ksf } from '../../runtime/units/si';
 
 describe('footing area from service loads on the net allowable pressure', () => {
   it('US: q_net = 4000 − 2·150 − 3·100 − 100 = 3300 psf; A = 600 kip / 3.3 ksf = 181.82 ft²', () => {
-    // q_net = q_allow − footing − fill − surcharge (common practice; reference-values.md d: D + L service)
+    // q_net = q_allow − footing − fill − surcharge (common practice; ASCE 7-22 §2.4.1: D + L service)
     const qNet = num('q_net_allow', 4000 * psf, 2 * ft, 150 * pcf, 3 * ft, 100 * pcf, 100 * psf);
     expect(qNet / psf).toBeCloseTo(3300, 6);
     expect(num('a_req_footing', 600 * kip, qNet) / (ft * ft)).toBeCloseTo(181.818, 3);

@@ -7,7 +7,7 @@ const in2 = inch * inch;
 
 describe('bearing at the column–footing interface, ACI 318-19 §22.8', () => {
   it('A2 from the 1:2 frustum inside the footing', () => {
-    // reference-values.md e.5 [MEMORY] frustum rule: 18 x 18 column, 10 x 10 ft footing, h = 24 in:
+    // ACI 318-19 §22.8.3.2, the frustum rule from memory: 18 x 18 column, 10 x 10 ft footing, h = 24 in:
     // spread 2h = 48 in each side, edge distance 51 in → A2 = (18 + 96)² = 12996 in²
     expect(num('a2_frustum', 18 * inch, 18 * inch, 10 * ft, 10 * ft, 24 * inch) / in2).toBeCloseTo(12996, 6);
     // 30 x 30 in footing: edge at 6 in stops the spread → A2 = 30² = 900 in²
@@ -15,7 +15,7 @@ describe('bearing at the column–footing interface, ACI 318-19 §22.8', () => {
   });
 
   it('Bn = 0.85 f\'c A1 √(A2/A1) with √(A2/A1) ≤ 2, φ = 0.65', () => {
-    // reference-values.md e.5 [CONFIRMED-indirect]: f'c = 3000, A1 = 324 in², A2 = 12996 → √ = 6.33 → 2:
+    // ACI 318-19 Table 22.8.3.2 (table number from memory): f'c = 3000, A1 = 324 in², A2 = 12996 → √ = 6.33 → 2:
     // Bn = 0.85·3·324·2 = 1652.4 kip; φBn = 0.65·1652.4 = 1074.06 kip
     expect(num('bn_bearing', 3000 * psi, 324 * in2, 12996 * in2) / kip).toBeCloseTo(1652.4, 6);
     expect(num('phi_bn_bearing', 3000 * psi, 324 * in2, 12996 * in2) / kip).toBeCloseTo(1074.06, 6);
@@ -46,7 +46,7 @@ describe('bearing at the column–footing interface, ACI 318-19 §22.8', () => {
   });
 
   it('dowels: 0.005 Ag', () => {
-    // reference-values.md e.5 [CONFIRMED-indirect]: 0.005·324 = 1.62 in²
+    // ACI 318-19 §16.3.4.1 (clause number from memory): 0.005·324 = 1.62 in²
     expect(num('as_dowel_min', 324 * in2) / in2).toBeCloseTo(1.62, 10);
   });
 

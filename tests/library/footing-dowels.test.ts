@@ -1,6 +1,6 @@
 // Column dowels in compression: development into the footing (ACI 318-19 §25.4.9) against
 // the depth available, and the lap with the column bars (§25.5.5). Bar diameters from ASTM
-// A615 (reference-values f, CONFIRMED). The clauses' formulas are from memory, as marked.
+// A615/A615M. The clauses' formulas are from memory, as marked.
 
 import { describe, expect, it } from 'vitest';
 import { num } from './support-call';
@@ -9,7 +9,7 @@ import { inch, ksi, mm, MPa, psi } from '../../runtime/units/si';
 const i = inch;
 
 describe('ℓdc, compression development (ACI 318-19 §25.4.9.2, from memory)', () => {
-  it('No. 8, Grade 60: 18.97 in at 4000 psi, 18.0 in at 5000 psi (reference-values g, COMPUTED)', () => {
+  it('No. 8, Grade 60: 18.97 in at 4000 psi, 18.0 in at 5000 psi (computed from ACI 318-19 §25.4.9.2, from memory)', () => {
     // 4000 psi: 0.02·60000/63.246·1.0 = 18.97 in > 0.0003·60000·1.0 = 18.0 in
     expect(num('ldc', 1.0 * i, 60 * ksi, 4000 * psi) / i).toBeCloseTo(18.974, 3);
     // 5000 psi: 0.02·60000/70.711 = 16.97 in < 18.0 in → 18.0 in

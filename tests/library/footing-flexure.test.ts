@@ -17,7 +17,7 @@ describe('footing flexure', () => {
     // k = 2·8670/(0.9·0.85·4·120·400) = 0.11806; As = (0.85·4·120·20/60)(1 − √(1 − k)) = 136·(1 − 0.939119) = 8.2798 in²
     const mu = 722.5 * kipFt;
     expect(num('as_req_footing', mu, 120 * inch, 20 * inch, 4000 * psi, 60 * ksi) / in2).toBeCloseTo(8.2798, 3);
-    // 0.0018·120·24 = 5.184 in² (reference-values.md e.3 [MEMORY]) — the required steel governs here
+    // 0.0018·120·24 = 5.184 in² (ACI 318-19 Table 7.6.1.1, from memory) — the required steel governs here
     expect(num('as_min_footing', 120 * inch, 24 * inch) / in2).toBeCloseTo(5.184, 9);
     expect(num('as_footing', mu, 120 * inch, 20 * inch, 24 * inch, 4000 * psi, 60 * ksi) / in2).toBeCloseTo(8.2798, 3);
     // a small moment: the minimum governs
@@ -31,13 +31,13 @@ describe('footing flexure', () => {
   });
 
   describe('minimum steel by code edition', () => {
-    // ρmin values: 318-19 from memory (reference-values.md e.3: 0.0018Ag, all deformed-bar grades);
-    // 318-14 from memory (reference-values.md e.3: 318-14 Table 7.6.1.1, 0.0020 below Grade 60,
+    // ρmin values: 318-19 from memory (ACI 318-19 Table 7.6.1.1: 0.0018Ag, all deformed-bar grades);
+    // 318-14 from memory (ACI 318-14 Table 7.6.1.1, 0.0020 below Grade 60,
     // 0.0018 at Grade 60, max(0.0018·60000/fy, 0.0014) above).
     const B = 120 * inch;
     const h = 24 * inch; // Ag = 2880 in²
 
-    it('318-19: 0.0018Ag for Grades 40, 60 and 80, with or without fy (from memory, reference-values.md e.3)', () => {
+    it('318-19: 0.0018Ag for Grades 40, 60 and 80, with or without fy (from memory, ACI 318-19 Table 7.6.1.1)', () => {
       for (const fy of [40, 60, 80]) {
         expect(num('as_min_footing', B, h, fy * ksi) / in2).toBeCloseTo(0.0018 * 2880, 9);
         expect(num('as_min_footing', B, h, fy * ksi, '318-19') / in2).toBeCloseTo(0.0018 * 2880, 9);
@@ -45,14 +45,14 @@ describe('footing flexure', () => {
       expect(num('as_min_footing', B, h) / in2).toBeCloseTo(5.184, 9);
     });
 
-    it('318-14: Grade 40 → 0.0020, Grade 60 → 0.0018, Grade 80 → 0.0014 (from memory, reference-values.md: 318-14 Table 7.6.1.1)', () => {
+    it('318-14: Grade 40 → 0.0020, Grade 60 → 0.0018, Grade 80 → 0.0014 (from memory, ACI 318-14 Table 7.6.1.1)', () => {
       expect(num('as_min_footing', B, h, 40 * ksi, '318-14') / in2).toBeCloseTo(0.0020 * 2880, 9); // 5.76 in²
       expect(num('as_min_footing', B, h, 60 * ksi, '318-14') / in2).toBeCloseTo(0.0018 * 2880, 9); // 5.184 in²
       // Grade 80: max(0.0018·60/80 = 0.00135, 0.0014) = 0.0014 → 4.032 in²
       expect(num('as_min_footing', B, h, 80 * ksi, '318-14') / in2).toBeCloseTo(0.0014 * 2880, 9);
     });
 
-    it('SI grades give the same ratios: Grade 280 / 420 / 550 (from memory, reference-values.md: 318-14 Table 7.6.1.1)', () => {
+    it('SI grades give the same ratios: Grade 280 / 420 / 550 (from memory, ACI 318-14 Table 7.6.1.1)', () => {
       const b = 3000 * mm;
       const t = 600 * mm; // Ag = 1.8e6 mm²
       const mm2 = mm * mm;

@@ -48,7 +48,7 @@ describe('worked example: 10.5 ft square footing under an 18 in column (US units
     expect(mu / kipFt).toBeCloseTo(462.86, 2);
     // Whitney: k = 2·5554.3/(0.9·0.85·4·126·400) = 0.072029; As = 142.8·(1 − 0.963313) = 5.239 in²
     expect(num('as_req_footing', mu, B, d, fcF, fy) / in2).toBeCloseTo(5.239, 3);
-    // minimum 0.0018·126·24 = 5.443 in² governs → 7 #8 = 5.53 in² (reference-values.md f: #8 = 0.79 in²)
+    // minimum 0.0018·126·24 = 5.443 in² governs → 7 #8 = 5.53 in² (ASTM A615: #8 = 0.79 in²)
     expect(num('as_footing', mu, B, d, h, fcF, fy) / in2).toBeCloseTo(5.4432, 4);
     // square footing: the band rule puts all of it in the band (γs = 1)
     expect(num('gamma_s_band', B, B)).toBe(1);

@@ -37,10 +37,10 @@ describe('a slab strip through the engine', () => {
       ...calc('in', 'in^2', 'psf', '#4'),
     ]);
     for (const k of Object.keys(v)) expect(v[k].error).toBeUndefined();
-    expect(v.b1.value).toBeCloseTo(0.85, 12); // reference-values.md e.3 [CONFIRMED]
+    expect(v.b1.value).toBeCloseTo(0.85, 12); // ACI 318-19 Table 22.2.2.4.3
     expect(v.b1.clauses).toContain('ACI 318-19 Table 22.2.2.4.3');
-    expect((v.hmin.value as number) / 0.0254).toBeCloseTo(240 / 33, 9); // reference-values.md e.6 [CONFIRMED]
-    expect((v.L.value as number) / 47.880259).toBeCloseTo(31.25, 4); // reference-values.md d [COMPUTED from Eq. 4.7-1]
+    expect((v.hmin.value as number) / 0.0254).toBeCloseTo(240 / 33, 9); // ACI 318-19 Table 8.3.1.1
+    expect((v.L.value as number) / 47.880259).toBeCloseTo(31.25, 4); // computed from ASCE 7-22 Eq. 4.7-1
     expect((v.As.value as number) / 0.0254 ** 2).toBeCloseTo(0.28253, 5); // hand calc in flexure.test.ts
     // common practice, 0.5 in steps: 0.20/0.28253·12 = 8.49 in → 8.0 in (≤ min(2h, 18 in) = 16 in)
     expect((v.s.value as number) / 0.0254).toBeCloseTo(8, 9);

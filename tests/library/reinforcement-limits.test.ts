@@ -6,13 +6,13 @@ const in2 = inch * inch;
 
 describe('minimum slab and footing steel', () => {
   it('318-19: 0.0018 Ag for any grade (US input)', () => {
-    // Tables 7.6.1.1 / 8.6.1.1, §24.4.3.2, reference-values.md e.3 [MEMORY]: 0.0018·12·8 = 0.1728 in²/ft
+    // Tables 7.6.1.1 / 8.6.1.1, §24.4.3.2 of ACI 318-19, from memory: 0.0018·12·8 = 0.1728 in²/ft
     expect(gn('as_min_slab', 12 * inch, 8 * inch, 60 * ksi) / in2).toBeCloseTo(0.1728, 9);
     expect(gn('rho_min_slab', 40 * ksi)).toBe(0.0018);
   });
 
   it('318-14: 0.0020 below Grade 60, 0.0018·60,000/fy ≥ 0.0014 above', () => {
-    // reference-values.md e.3 [MEMORY] (318-14 had 0.0020 for Grade 40/50)
+    // ACI 318-19 Table 7.6.1.1, from memory (318-14 had 0.0020 for Grade 40/50)
     expect(gn('as_min_slab', 12 * inch, 8 * inch, 40 * ksi, '318-14') / in2).toBeCloseTo(0.192, 9);
     expect(gn('rho_min_slab', 60 * ksi, '318-14')).toBeCloseTo(0.0018, 12);
     // from memory: 0.0018·60/75 = 0.00144 ≥ 0.0014
@@ -21,7 +21,7 @@ describe('minimum slab and footing steel', () => {
   });
 
   it('SI input: 1 m strip of a 200 mm slab', () => {
-    // 0.0018·1000·200 = 360 mm²/m (reference-values.md e.3 [MEMORY])
+    // 0.0018·1000·200 = 360 mm²/m (ACI 318-19 Table 7.6.1.1, from memory)
     expect(gn('as_min_slab', 1, 200 * mm, 420 * MPa) / (mm * mm)).toBeCloseTo(360, 9);
   });
 });
@@ -55,7 +55,7 @@ describe('maximum steel for a tension-controlled section', () => {
 
 describe('maximum bar spacing', () => {
   it('two-way min(2h, 18 in), one-way min(3h, 18 in), shrinkage min(5h, 18 in)', () => {
-    // §8.7.2.2 and §24.4.3.3, reference-values.md e.3 [MEMORY]; §7.7.2.3 one-way from memory
+    // §8.7.2.2 and §24.4.3.3 of ACI 318-19, from memory; §7.7.2.3 one-way from memory
     expect(gn('s_max_slab', 8 * inch, 'two-way') / inch).toBeCloseTo(16, 9);
     expect(gn('s_max_slab', 10 * inch, 'two-way') / inch).toBeCloseTo(18, 9);
     expect(gn('s_max_slab', 5 * inch, 'one-way') / inch).toBeCloseTo(15, 9);

@@ -4,11 +4,11 @@ import { MPa, ksi } from '../../runtime/units/si';
 
 describe('φ by action, ACI 318-19 Table 21.2.1', () => {
   it('values', () => {
-    expect(gn('phi_action', 'shear')).toBe(0.75); // reference-values.md e.3 [CONFIRMED]
-    expect(gn('phi_action', 'compression-tied')).toBe(0.65); // reference-values.md e.3 [CONFIRMED]
-    expect(gn('phi_action', 'compression-spiral')).toBe(0.75); // reference-values.md e.3 [CONFIRMED]
-    expect(gn('phi_action', 'tension-controlled')).toBe(0.9); // reference-values.md e.3 [MEMORY]
-    expect(gn('phi_action', 'bearing')).toBe(0.65); // reference-values.md e.3 [MEMORY]
+    expect(gn('phi_action', 'shear')).toBe(0.75); // ACI 318-19 Table 21.2.1(b)
+    expect(gn('phi_action', 'compression-tied')).toBe(0.65); // ACI 318-19 Table 21.2.2
+    expect(gn('phi_action', 'compression-spiral')).toBe(0.75); // ACI 318-19 Table 21.2.2
+    expect(gn('phi_action', 'tension-controlled')).toBe(0.9); // ACI 318-19 Table 21.2.2, from memory
+    expect(gn('phi_action', 'bearing')).toBe(0.65); // ACI 318-19 Table 21.2.1(d), from memory
     expect(gn('phi_action', 'torsion')).toBe(0.75); // from memory
   });
 });

@@ -4,7 +4,7 @@ import { LibraryError } from '../../runtime/library/types';
 import { inch, lbf, mm, psi } from '../../runtime/units/si';
 
 describe('lambda_s, size-effect factor', () => {
-  // reference-values.md e.1 [COMPUTED from §22.5.5.1.3, formula CONFIRMED]; printed to 4 decimals
+  // computed from ACI 318-19 §22.5.5.1.3, λs = √(2/(1 + d/10)) ≤ 1; printed to 4 decimals
   const rows: [number, number][] = [
     [6, 1.0], [10, 1.0], [12, 0.9535], [15, 0.8944], [20, 0.8165],
     [24, 0.767], [28, 0.7255], [30, 0.7071], [36, 0.6594],
@@ -14,12 +14,12 @@ describe('lambda_s, size-effect factor', () => {
   });
 
   it('is 1.0 in ACI 318-14, which has no size effect', () => {
-    // reference-values.md e.1 / brief: 318-14 two-way and one-way shear have no λs
+    // ACI 318-14 §22.5.5.1 and §22.6.5.2 have no λs (from memory)
     expect(num('lambda_s', 36 * inch, '318-14')).toBe(1);
   });
 
   it('SI input agrees with the SI form √(2/(1 + 0.004d)), d in mm, within its soft conversion', () => {
-    // reference-values.md e.1 [CONFIRMED SI form]: d = 500 mm → √(2/3) = 0.8165.
+    // ACI 318-19 §22.5.5.1.3, SI form √(2/(1 + 0.004d)): d = 500 mm → √(2/3) = 0.8165.
     // Our inch form at 500 mm = 19.685 in gives √(2/2.9685) = 0.8208; 0.004/mm vs 1/254 mm is a 1.6 % rounding.
     expect(num('lambda_s', 500 * mm)).toBeCloseTo(0.8208, 4);
     expect(Math.abs(num('lambda_s', 500 * mm) / Math.sqrt(2 / (1 + 0.004 * 500)) - 1)).toBeLessThan(0.006);

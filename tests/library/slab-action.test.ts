@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { g, expectLibError } from './gravity-call';
 import { ft } from '../../runtime/units/si';
 
-// Classification: ℓlong/ℓshort > 2 → one-way (textbook convention, reference-values.md e.6 [MEMORY]);
-// the 2.0 limit is the DDM ratio of ACI 318-19 §8.10.2.3 [CONFIRMED, reference-values.md e.6].
+// Classification: ℓlong/ℓshort > 2 → one-way (textbook convention, from memory);
+// the 2.0 limit is the DDM ratio of ACI 318-19 §8.10.2.3.
 describe('one-way or two-way by proportions (US input)', () => {
   it('30 ft × 12 ft on four sides: ratio 2.5 → one-way', () => {
     expect(g('slab_action', 30 * ft, 12 * ft, 'four-sides')).toBe('one-way');

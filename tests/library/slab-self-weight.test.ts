@@ -3,9 +3,9 @@ import { g, gn, expectLibError } from './gravity-call';
 import { ft, inch, ksi, kN, mm, MPa, pcf, psi } from '../../runtime/units/si';
 
 // Our own scenarios; a 12 in strip, f'c = 4000 psi, fy = 60 ksi, 150 pcf concrete.
-// Demand: 1.4 × self-weight (ASCE 7-16 §2.3.1 comb. 1, reference-values.md d [CONFIRMED]),
-// moment wℓ²/8 simple span (common practice). Capacity: As,min = 0.0018·b·h (reference-values.md e.3
-// [MEMORY]) with the stress block of §22.2 (reference-values.md e.3 [CONFIRMED]), φ = 0.90.
+// Demand: 1.4 × self-weight (ASCE 7-22 §2.3.1 comb. 1),
+// moment wℓ²/8 simple span (common practice). Capacity: As,min = 0.0018·b·h (ACI 318-19 Table 7.6.1.1, from memory
+// ) with the stress block of ACI 318-19 §22.2.2.4.1, φ = 0.90.
 describe('self-weight of a one-way strip with minimum steel (US input)', () => {
   it('8 in slab spanning 12 ft carries itself', () => {
     // w = 100 psf, qu = 140 psf, Mu = 140·144/8 = 2520 lb·ft = 30,240 lb·in per ft

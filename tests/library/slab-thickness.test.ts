@@ -3,7 +3,7 @@ import { g, gn, expectLibError, expectRel } from './gravity-call';
 import { ft, inch, ksi, MPa, pcf } from '../../runtime/units/si';
 
 describe('one-way slabs, ACI 318-19 Table 7.3.1.1 (US input)', () => {
-  // reference-values.md e.6 [MEMORY; ℓ/28 corroborated]: ℓ/20, ℓ/24, ℓ/28, ℓ/10 at fy = 60 ksi
+  // ACI 318-19 Tables 7.3.1.1 / 8.3.1.1 [MEMORY; ℓ/28 corroborated]: ℓ/20, ℓ/24, ℓ/28, ℓ/10 at fy = 60 ksi
   it('support conditions, ℓ = 12 ft', () => {
     expect(gn('h_min_one_way', 12 * ft, 'simple') / inch).toBeCloseTo(144 / 20, 9);
     expect(gn('h_min_one_way', 12 * ft, 'one-end') / inch).toBeCloseTo(144 / 24, 9);
@@ -12,7 +12,7 @@ describe('one-way slabs, ACI 318-19 Table 7.3.1.1 (US input)', () => {
   });
 
   it('fy and lightweight modifiers', () => {
-    // reference-values.md e.6 [MEMORY]: × (0.4 + fy/100,000): 40 ksi → 0.8
+    // ACI 318-19 Tables 7.3.1.1 / 8.3.1.1 from memory: × (0.4 + fy/100,000): 40 ksi → 0.8
     expect(gn('h_min_one_way', 12 * ft, 'simple', 40 * ksi) / inch).toBeCloseTo(7.2 * 0.8, 9);
     // × (1.65 − 0.005wc) ≥ 1.09: 100 pcf → 1.15; 115 pcf → 1.075 → 1.09
     expect(gn('h_min_one_way', 12 * ft, 'simple', 60 * ksi, 100 * pcf) / inch).toBeCloseTo(7.2 * 1.15, 9);
@@ -21,7 +21,7 @@ describe('one-way slabs, ACI 318-19 Table 7.3.1.1 (US input)', () => {
   });
 
   it('SI input: 4.2 m both ends continuous → 150 mm', () => {
-    // Table 7.3.1.1 [MEMORY]: 4200/28 = 150 mm (fy = 413.7 MPa = 60 ksi)
+    // Table 7.3.1.1 from memory: 4200/28 = 150 mm (fy = 413.7 MPa = 60 ksi)
     expectRel(gn('h_min_one_way', 4.2, 'both-ends', 413.685 * MPa), 0.15, 1e-5);
   });
 });
@@ -29,7 +29,7 @@ describe('one-way slabs, ACI 318-19 Table 7.3.1.1 (US input)', () => {
 describe('two-way slabs without interior beams, ACI 318-19 Table 8.3.1.1', () => {
   const ln = 20 * ft; // 240 in
   it('table values at 40, 60 ksi (both editions) and 75 ksi (318-14), US input', () => {
-    // reference-values.md e.6 [CONFIRMED]
+    // ACI 318-19 Tables 7.3.1.1 / 8.3.1.1 [CONFIRMED]
     expect(gn('h_min_two_way', ln, 'exterior', false, 60 * ksi) / inch).toBeCloseTo(240 / 30, 9);
     expect(gn('h_min_two_way', ln, 'exterior-edge-beam', false, 60 * ksi) / inch).toBeCloseTo(240 / 33, 9);
     expect(gn('h_min_two_way', ln, 'interior') / inch).toBeCloseTo(240 / 33, 9); // fy defaults to 60 ksi
@@ -43,19 +43,19 @@ describe('two-way slabs without interior beams, ACI 318-19 Table 8.3.1.1', () =>
   });
 
   it('linear interpolation in fy', () => {
-    // reference-values.md e.6 [CONFIRMED] "interpolate for fy between values"; COMPUTED at 50 ksi, interior,
+    // ACI 318-19 Tables 7.3.1.1 / 8.3.1.1 [CONFIRMED] "interpolate for fy between values"; COMPUTED at 50 ksi, interior,
     // no drop panels: 240/36 + 0.5(240/33 − 240/36) = 6.9697 in
     expect(gn('h_min_two_way', ln, 'interior', false, 50 * ksi) / inch).toBeCloseTo(6.9697, 4);
   });
 
   it('absolute minimums 5 in / 4 in', () => {
-    // reference-values.md e.6 [CONFIRMED]: ln = 10 ft → 120/33 = 3.64 in < 5 in; with drop panels 120/36 = 3.33 < 4 in
+    // ACI 318-19 Tables 7.3.1.1 / 8.3.1.1 [CONFIRMED]: ln = 10 ft → 120/33 = 3.64 in < 5 in; with drop panels 120/36 = 3.33 < 4 in
     expect(gn('h_min_two_way', 10 * ft, 'interior') / inch).toBeCloseTo(5, 9);
     expect(gn('h_min_two_way', 10 * ft, 'interior', true) / inch).toBeCloseTo(4, 9);
   });
 
   it('SI input: fy = 420 MPa gives ℓn/33 of the SI table within 0.5 %', () => {
-    // reference-values.md e.6 [CONFIRMED] SI table fy 420 MPa → ℓn/33 for interior panels; 420 MPa = 60.9 ksi
+    // ACI 318-19 Tables 7.3.1.1 / 8.3.1.1 [CONFIRMED] SI table fy 420 MPa → ℓn/33 for interior panels; 420 MPa = 60.9 ksi
     expectRel(gn('h_min_two_way', 6, 'interior', false, 420 * MPa), 6 / 33, 0.005);
   });
 });

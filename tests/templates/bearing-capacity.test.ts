@@ -1,6 +1,6 @@
 // Bearing capacity of a square footing, Terzaghi beside Meyerhof / Vesic, run headless and
 // checked against published factors and a hand calculation (US units: ft, lb, psf).
-// Tags as in /work/shared/reference-values.md, section (b).
+// Each value names its source beside it.
 
 import { describe, expect, it } from 'vitest';
 import { calcJson, expectAllPass, expectWellFormed, near, runTemplate } from './helpers';

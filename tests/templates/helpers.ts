@@ -171,7 +171,7 @@ export function floorTo(x: number, step: number): number {
 
 /**
  * Tension steel of a rectangular section by the Whitney block (ACI 318-19 §22.2.2.4.1,
- * CONFIRMED in reference-values e.3), φ = 0.90: Rn = Mu/(φ b d²),
+ * ACI 318-19 §22.2.2.4.1), φ = 0.90: Rn = Mu/(φ b d²),
  * ρ = 0.85f'c/fy·(1 − √(1 − 2Rn/(0.85f'c))), As = ρ b d. Mu in lb·in, lengths in in, psi.
  */
 export function whitneyAs(MuLbIn: number, b: number, d: number, fc: number, fy: number): number {

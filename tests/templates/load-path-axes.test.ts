@@ -24,7 +24,7 @@ function puFooting(c1: number, c2: number): number {
   const wCol = ((c1 * c2) / 144) * 150; // lb/ft
   // Dead: roof + 4 floors over AT, 5 storeys of column (statics).
   const PD = AT * (Droof + 4 * D) + 5 * wCol * 10;
-  // ASCE 7-22 §2.3.1 combinations 1–3 without wind (same factors as ASCE 7-16 §2.3.1 for D, L, Lr):
+  // ASCE 7-22 §2.3.1 combinations 1–3 without wind (the same factors for D, L, Lr as in earlier editions):
   // 1.4D; 1.2D + 1.6L + 0.5Lr; 1.2D + 1.6Lr + L.
   return Math.max(1.4 * PD, 1.2 * PD + 1.6 * PL + 0.5 * PLr, 1.2 * PD + 1.6 * PLr + PL);
 }

@@ -1,7 +1,7 @@
 // The main template, slab-to-footing load path of an interior column, run headless and
 // checked against a hand calculation done here from first principles (US units:
 // lengths in ft or in, loads in lb, stresses in psi or psf). Code values carry their
-// clause; tags follow /work/shared/reference-values.md (CONFIRMED / MEMORY).
+// clause; a value recalled, not read, says from memory.
 
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse } from '../../runtime/format/index';
@@ -25,7 +25,7 @@ const AT = l1 * l2;
 const D = (h / 12) * wc + SDL;
 const Droof = (h / 12) * wc + SDLroof;
 // qu = max(1.4·137.5, 1.2·137.5 + 1.6·40) = max(192.5, 229.0) = 229 psf
-// (ASCE 7-10 §2.3.2 comb. 1 and 2, CONFIRMED; same factors in ASCE 7-22 §2.3.1).
+// (ASCE 7-22 §2.3.1 comb. 1 and 2; the same factors in ASCE 7-10 §2.3.2).
 const qu = Math.max(1.4 * D, 1.2 * D + 1.6 * Lo);
 
 // Live load reduction of an interior column (KLL = 4, ASCE 7-22 Table 4.7-1, CONFIRMED):
@@ -108,12 +108,12 @@ const wCol = ((c * c) / 144) * wc;
 const deadAt = (n: number) => AT * (Droof + n * D) + (n + 1) * wCol * hStorey;
 const liveAt = (n: number) => n * AT * Lo * lldFactor(n);
 const PLr = AT * Lr; // 10,560 lb
-// Pu = max(1.4D, 1.2D + 1.6L + 0.5Lr, 1.2D + 1.6Lr + L) (ASCE 7-10 §2.3.2, CONFIRMED).
+// Pu = max(1.4D, 1.2D + 1.6L + 0.5Lr, 1.2D + 1.6Lr + L) (ASCE 7-22 §2.3.1; the same factors in ASCE 7-10 §2.3.2).
 const puAt = (n: number) => {
   const Dn = deadAt(n), Ln = liveAt(n);
   return Math.max(1.4 * Dn, 1.2 * Dn + 1.6 * Ln + 0.5 * PLr, 1.2 * Dn + 1.6 * PLr + Ln);
 };
-// Service: max(D, D + L, D + Lr, D + 0.75L + 0.75Lr) (ASCE 7-10 §2.4.1, CONFIRMED).
+// Service: max(D, D + L, D + Lr, D + 0.75L + 0.75Lr) (ASCE 7-22 §2.4.1; the same combination in ASCE 7-10 §2.4.1).
 const PD = deadAt(floors), PL = liveAt(floors), Pu = puAt(floors);
 const Ps = Math.max(PD, PD + PL, PD + PLr, PD + 0.75 * PL + 0.75 * PLr);
 // Tied column: φPn,max = 0.65·0.80·[0.85 f'c (Ag − Ast) + fy Ast], 8 #8 = 8·0.79 in²

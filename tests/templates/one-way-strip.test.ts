@@ -1,5 +1,5 @@
 // One-way slab strip with the self-weight check, run headless and checked against a
-// hand calculation (US units, a 12 in strip). Tags as in /work/shared/reference-values.md.
+// hand calculation (US units, a 12 in strip). Each value names its source beside it.
 
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { calcJson, expectAllPass, expectWellFormed, floorTo, near, phiMnRect, runTemplate, whitneyAs, type Run } from './helpers';
@@ -15,7 +15,7 @@ const D = (h / 12) * 150 + 15;
 const L = 125;
 // AT of a one-way slab ≤ 1.5 ls² = 1.5·121 = 181.5 ft² < 11·32 = 352 ft² (§4.7.6, from memory).
 const AT = Math.min(ls * lBeam, 1.5 * ls * ls);
-// wu = max(1.4·90 = 126, 1.2·90 + 1.6·125 = 308) = 308 psf (ASCE 7-10 §2.3.2, CONFIRMED).
+// wu = max(1.4·90 = 126, 1.2·90 + 1.6·125 = 308) = 308 psf (ASCE 7-22 §2.3.1; the same factors in ASCE 7-10 §2.3.2).
 const wu = Math.max(1.4 * D, 1.2 * D + 1.6 * L);
 // d = 6 − 0.75 − 0.5/2 = 5.0 in (#4 = 0.500 in, ASTM A615, CONFIRMED).
 const d = h - 0.75 - 0.25;

@@ -1,6 +1,6 @@
 // Punching at an edge or corner column with moment transfer and the drop panel option,
 // run headless and checked against a hand calculation (US units: in, lb, psi).
-// Tags as in /work/shared/reference-values.md.
+// Each value names its source beside it.
 
 import { describe, expect, it } from 'vitest';
 import { calcJson, expectAllPass, expectWellFormed, near, phiMnRect, runTemplate } from './helpers';
@@ -11,7 +11,7 @@ const l1 = 22, l2 = 22, c = 20, h = 10; // ft, ft, in, in
 const fc = 5000, fy = 60000;
 const sqrtFc = Math.sqrt(fc); // 70.71 psi
 // D = 10/12·150 + 20 = 145 psf; qu = max(1.4·145, 1.2·145 + 1.6(50 + 15)) = max(203, 278) = 278 psf
-// (ASCE 7-10 §2.3.2, CONFIRMED; 15 psf partitions ASCE 7-22 §4.3.2, from memory).
+// (ASCE 7-22 §2.3.1, the same factors in ASCE 7-10 §2.3.2; 15 psf partitions ASCE 7-22 §4.3.2, from memory).
 const qu = Math.max(1.4 * 145, 1.2 * 145 + 1.6 * 65);
 const ln = l1 - c / 12; // 20.333 ft both ways (§8.10.3.2.2, CONFIRMED)
 const dSlab = h - 0.75 - 0.625; // 8.625 in, #5 bars (ASTM A615, CONFIRMED)

@@ -1,5 +1,5 @@
 // Spread footing from service loads PD, PL, run headless and checked against a hand
-// calculation (US units: lb, in, psi, psf). Tags as in /work/shared/reference-values.md.
+// calculation (US units: lb, in, psi, psf). Each value names its source beside it.
 
 import { describe, expect, it } from 'vitest';
 import { calcJson, expectAllPass, expectWellFormed, near, phiMnRect, runTemplate, whitneyAs } from './helpers';
@@ -10,11 +10,11 @@ const PD = 180_000, PL = 95_000; // lb
 const B = 108, L = 120, h = 28, c = 18; // in
 const fc = 4000, fy = 60000, fcCol = 5000;
 const sqrtFc = Math.sqrt(fc); // 63.25 psi
-// Service D + L = 275,000 lb (ASCE 7-10 §2.4.1, CONFIRMED).
+// Service D + L = 275,000 lb (ASCE 7-22 §2.4.1; the same combination in ASCE 7-10 §2.4.1).
 const Ps = PD + PL;
 // q_net = 4000 − (28/12)·150 − (4 − 28/12)·120 − 100 = 4000 − 350 − 200 − 100 = 3350 psf (common practice).
 const qNet = 4000 - (h / 12) * 150 - (4 - h / 12) * 120 - 100;
-// Pu = max(1.4·180, 1.2·180 + 1.6·95) = max(252, 368) = 368 kip (ASCE 7-10 §2.3.2, CONFIRMED).
+// Pu = max(1.4·180, 1.2·180 + 1.6·95) = max(252, 368) = 368 kip (ASCE 7-22 §2.3.1; the same factors in ASCE 7-10 §2.3.2).
 const Pu = Math.max(1.4 * PD, 1.2 * PD + 1.6 * PL);
 const qu = Pu / ((B * L) / 144); // 4088.9 psf
 // Depths: #6 bars both ways (0.75 in), long bars at the bottom, 3 in cover

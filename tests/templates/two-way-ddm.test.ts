@@ -1,6 +1,6 @@
 // Two-way panel moments by the Direct Design Method with strip steel, run headless and
-// checked against a hand calculation (US units). Table values tagged as in
-// /work/shared/reference-values.md.
+// checked against a hand calculation (US units). Each table value names its ACI 318-19
+// table beside it, and says from memory where it was recalled.
 
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { calcJson, expectAllPass, expectWellFormed, floorTo, near, phiMnRect, runTemplate, whitneyAs, type Run } from './helpers';
@@ -11,7 +11,7 @@ const l1 = 20, l2 = 18, c = 16; // ft, ft, in
 const h = 8, fc = 4000, fy = 60000; // in, psi, psi
 // D = 8/12·150 + 20 = 120 psf; L = 40 + 15 = 55 psf (ASCE 7-22 Table 4.3-1 classrooms and
 // §4.3.2 partitions, from memory). qu = max(1.4·120 = 168, 1.2·120 + 1.6·55 = 232) = 232 psf
-// (ASCE 7-10 §2.3.2, CONFIRMED).
+// (ASCE 7-22 §2.3.1; the same factors in ASCE 7-10 §2.3.2).
 const D = (h / 12) * 150 + 20;
 const L = 40 + 15;
 const qu = Math.max(1.4 * D, 1.2 * D + 1.6 * L);
