@@ -1,7 +1,7 @@
 // Formulas for property tests of the tokenizer and of rename: names (some written
 // against a number, `2L`), numbers, calls, and quoted texts (both quotes, with escapes)
 // and comments that spell cell names. Every one parses; with the cells of `NAMES` as
-// plain numbers and `pick` below, every one computes.
+// plain numbers and `pick` below, nearly every one computes (a division may meet zero).
 
 import fc from 'fast-check';
 import type { LibFunction } from '../../runtime/library/types';

@@ -81,7 +81,9 @@ describe('rename, for any formula', () => {
         ],
       };
       const before = await values(doc);
-      expect(before.every((v) => typeof v === 'number')).toBe(true);
+      // A drawn formula may divide by zero (a / (edge - pick(a, "a")) with edge = 4 = pick's 2 × 2):
+      // such a draw says nothing about rename, so it is set aside and another drawn.
+      fc.pre(before.every((v) => typeof v === 'number'));
       const renamed = renameCell(doc, `i${NAMES.indexOf(from)}`, to);
       expect(await values(renamed)).toEqual(before);
     }), { numRuns: 150 });
