@@ -1,6 +1,7 @@
 // The page shell: one open sheet with its engine, undo history, view, editors and
 // autosave. Every edit is a pure operation on the sheet, recorded in the history.
 
+import { setTableValue } from '../runtime/edit/table-ops';
 import type { CalcDocument, CellKind, DocMeta } from '../runtime/document';
 import { cellName } from '../runtime/document';
 import {
@@ -45,7 +46,8 @@ export class App {
 
   constructor(private readonly el: AppElements, readonly autosave: Autosave | undefined) {
     this.view = new SheetView(el.sheet, el.summary, {
-      commitValue: (id, value) => this.apply(setInputValueKeepUnit(this.doc, id, value), `value:${id}`),
+      commitValue: (id, value, at) => this.apply(at ? setTableValue(this.doc, id, at.row, at.col, value) : setInputValueKeepUnit(this.doc, id, value),
+        at ? `value:${id}:${at.row}:${at.col}` : `value:${id}`),
       open: (id) => this.openEditor(id),
       select: (id) => this.view.select(id, false),
     });

@@ -20,7 +20,7 @@ import { listenToValueFields } from './value-fields';
 import { WorkingFolds } from './working';
 
 export interface SheetEvents {
-  commitValue(id: string, value: string): void;
+  commitValue(id: string, value: string, at?: { row: number; col: number }): void;
   open(id: string): void;
   select(id: string): void;
 }
@@ -73,9 +73,13 @@ export class SheetView {
     listenToValueFields(host, {
       inputOf: (t) => {
         const cell = this.slots.get(this.cellIdOf(t) ?? '')?.cell;
-        return cell?.kind === 'input' ? cell : undefined;
+        if (cell?.kind === 'input') return cell;
+        const data = (t as HTMLElement | null)?.dataset;
+        if (cell?.kind !== 'table' || data?.row === undefined || data.col === undefined) return undefined;
+        const at = { row: Number(data.row), col: Number(data.col) };
+        return { id: cell.id, value: cell.rows[at.row]?.[at.col] ?? '', at };
       },
-      commitValue: (id, value) => events.commitValue(id, value),
+      commitValue: (place, value) => events.commitValue(place.id, value, place.at),
       restoring: () => this.restoring,
     });
     host.addEventListener('click', (e) => this.onClick(e));

@@ -1,14 +1,21 @@
 // An input's value typed straight into the sheet (its value field): Enter or leaving the
 // field commits what was typed, Escape puts back the stored value and returns to the cell,
 // a choice commits when picked. Nothing typed is lost: a commit that is refused shows its
-// error at the input and keeps the text (runtime/edit, the input kind's view).
+// error at the input and keeps the text (runtime/edit, the input kind's view). A table's
+// values are value fields too, each committed to its row and column.
 
-import type { InputCell } from '../runtime/document';
+/** Where a value field's text goes: an input cell, or one value of a table (row, column 0-based). */
+export interface FieldPlace {
+  id: string;
+  /** The value stored there now. */
+  value: string;
+  at?: { row: number; col: number };
+}
 
 export interface ValueFieldSheet {
-  /** The input cell an element belongs to (undefined for any other cell). */
-  inputOf(target: EventTarget | null): InputCell | undefined;
-  commitValue(id: string, value: string): void;
+  /** The input cell or table value an element stands for (undefined for anything else). */
+  inputOf(target: EventTarget | null): FieldPlace | undefined;
+  commitValue(place: FieldPlace, value: string): void;
   /** True while the sheet swaps a field for another: focus leaving it then is no commit. */
   restoring(): boolean;
 }
@@ -21,7 +28,7 @@ export function listenToValueFields(host: HTMLElement, sheet: ValueFieldSheet): 
   const commit = (field: HTMLInputElement | HTMLSelectElement) => {
     const cell = sheet.inputOf(field);
     const value = field.value.trim();
-    if (cell && value !== cell.value) sheet.commitValue(cell.id, value);
+    if (cell && value !== cell.value) sheet.commitValue(cell, value);
   };
   host.addEventListener('keydown', (e) => {
     const field = e.target;

@@ -99,7 +99,26 @@ export interface SweepCell extends CellBase {
   fixed?: true;
 }
 
-export type Cell = SectionCell | NoteCell | InputCell | FormulaCell | CheckCell | FigureCell | SweepCell;
+/** One column of a table: its name and what its values are (a unit, `text` or `number`). */
+export interface TableColumn {
+  name: string;
+  /** A unit its quantities are in (`ft`, `psf`), `number` for pure numbers, or `text`. */
+  type: string;
+}
+
+/**
+ * Rows of typed values under named columns (storeys, column marks). Each value is kept
+ * exactly as typed; a bare number in a quantity column is in the column's unit.
+ */
+export interface TableCell extends CellBase {
+  kind: 'table';
+  name: string;
+  columns: TableColumn[];
+  /** One array a row, one text a column, as typed. */
+  rows: string[][];
+}
+
+export type Cell = SectionCell | NoteCell | InputCell | FormulaCell | CheckCell | FigureCell | SweepCell | TableCell;
 export type CellKind = Cell['kind'];
 
 export interface CalcDocument {

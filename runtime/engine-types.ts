@@ -6,6 +6,7 @@ import type { CellStatus } from './cell-status';
 import type { CalcDocument } from './document';
 import type { FigureSpec, SweepResult } from './figures/spec';
 import type { LibraryCall } from './library/call';
+import type { TableValue } from './table/types';
 
 export type { CellStatus };
 
@@ -58,6 +59,8 @@ export interface CellState {
   figure?: FigureSpec;
   /** Sweep cells: the points swept and each plotted result. */
   sweep?: SweepResult;
+  /** Table cells: the values read, and any that could not be. */
+  table?: TableValue;
 }
 
 /** One plotted result at one what-if point: a value (a check's ratio or condition) and, for checks, pass. */

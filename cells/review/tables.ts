@@ -6,6 +6,7 @@ import type { Comparison, InputChange, ResultChange } from '../../runtime/review
 import type { IssuedResult } from '../../runtime/review/types';
 import { deltaText } from '../../runtime/review/diff-text';
 import { escapeHtml } from '../../runtime/present/escape';
+import { cellOfKey } from '../../runtime/review/table-inputs';
 
 const VERDICT: Record<IssuedResult['status'], string> = { ok: 'OK', fail: 'NOT OK', error: 'error', pending: 'pending' };
 
@@ -16,8 +17,11 @@ export function resultText(r: IssuedResult | undefined, check: boolean): string 
   return check ? `${r.text ?? ''} ${VERDICT[r.status]}`.trim() : (r.text ?? '');
 }
 
-const link = (id: string, text: string): string =>
-  `<a href="#cell-${escapeHtml(id)}" data-goto="${escapeHtml(id)}">${escapeHtml(text)}</a>`;
+// A table's value goes to its table.
+const link = (key: string, text: string): string => {
+  const id = cellOfKey(key);
+  return `<a href="#cell-${escapeHtml(id)}" data-goto="${escapeHtml(id)}">${escapeHtml(text)}</a>`;
+};
 
 function nameCell(r: { id: string; name?: string }): string {
   return link(r.id, r.name ?? `(${r.id})`);
@@ -71,9 +75,13 @@ export function cellMarks(c: Comparison, revision: string): Map<string, string> 
   const issued = `Rev ${revision}`;
   for (const r of c.inputs) {
     if (!r.changed || r.after === undefined) continue;
-    marks.set(r.id, r.before === undefined
-      ? `<span class="rv-new">New since ${escapeHtml(issued)}</span>`
-      : `<span class="rv-was">${escapeHtml(issued)}: <b>${escapeHtml(r.before)}</b> → now <b>${escapeHtml(r.after)}</b></span>`);
+    const id = cellOfKey(r.id);
+    // A table's changed values are listed on the table, each by its row and column.
+    const what = id === r.id ? '' : `${escapeHtml(r.name)} `;
+    const line = r.before === undefined
+      ? `<span class="rv-new">${what}New since ${escapeHtml(issued)}</span>`
+      : `<span class="rv-was">${what}${escapeHtml(issued)}: <b>${escapeHtml(r.before)}</b> → now <b>${escapeHtml(r.after)}</b></span>`;
+    marks.set(id, (marks.has(id) ? `${marks.get(id)} ` : '') + line);
   }
   for (const [list, check] of [[c.results, false], [c.checks, true]] as const) {
     for (const r of list) {

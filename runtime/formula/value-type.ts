@@ -8,12 +8,15 @@ export type VType =
   | { t: 'text' }
   | { t: 'bool' }
   /** A drawing spec from a figure function (runtime/figures); only a figure cell holds one. */
-  | { t: 'figure' };
+  | { t: 'figure' }
+  /** Rows under typed columns (runtime/table); read by library functions that take a table. */
+  | { t: 'table' };
 
 export const NUMBER: VType = { t: 'num', dims: DIMLESS };
 export const TEXT: VType = { t: 'text' };
 export const BOOL: VType = { t: 'bool' };
 export const FIGURE: VType = { t: 'figure' };
+export const TABLE: VType = { t: 'table' };
 
 export function numType(dims: Dims, hint?: string): VType {
   return hint ? { t: 'num', dims, hint } : { t: 'num', dims };
@@ -29,6 +32,7 @@ export function describeType(v: VType): string {
   if (v.t === 'text') return 'a text';
   if (v.t === 'bool') return 'a true/false value';
   if (v.t === 'figure') return 'a figure';
+  if (v.t === 'table') return 'a table';
   if (isDimless(v.dims)) return 'a pure number';
   const what = describeDims(v.dims);
   const si = siUnitText(v.dims);
@@ -42,5 +46,6 @@ export function typeFromDeclaration(decl: string): VType {
   if (decl === 'text') return TEXT;
   if (decl === 'bool') return BOOL;
   if (decl === 'figure') return FIGURE;
+  if (decl === 'table') return TABLE;
   return numType(unitInfo(decl).dims, decl === '1' ? undefined : decl);
 }

@@ -11,6 +11,7 @@ import { parseInput, type InputValue } from '../formula/input-value';
 import { unitInfo } from '../units/dimension';
 import { unitInSystem } from '../units/preferred';
 import type { UnitSystem } from '../units/systems';
+import type { TableValue } from '../table/types';
 import { BOOL, describeType, NUMBER, numType, sameType, type VType } from '../formula/value-type';
 import { isDimless } from '../units/dimension';
 
@@ -38,6 +39,8 @@ export interface CellProgram {
   inputError?: CellError;
   /** Inputs: the parsed value (for display). */
   input?: InputValue;
+  /** Tables: the values read (the next reading keeps its good values where a new one is bad). */
+  table?: TableValue;
   /** The graph holds a check's result `{ value, pass, ... }`: readers take its `value`. */
   unwrap?: boolean;
 }

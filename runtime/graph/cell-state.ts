@@ -82,6 +82,7 @@ export function sameState(a: CellState, b: CellState): boolean {
     a.clauses.join('\n') === b.clauses.join('\n') &&
     a.reads.join(',') === b.reads.join(',') &&
     a.figure === b.figure &&
-    a.sweep === b.sweep
+    a.sweep === b.sweep &&
+    a.table === b.table
   );
 }

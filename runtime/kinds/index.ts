@@ -10,9 +10,10 @@ import { input } from './input';
 import { note } from './note';
 import { section } from './section';
 import { sweep } from './sweep';
+import { table } from './table';
 import type { KindDescription, KindTable } from './types';
 
-export const KINDS: KindTable = { section, note, input, formula, check, figure, sweep };
+export const KINDS: KindTable = { section, note, input, formula, check, figure, sweep, table };
 
 /** Every kind's word, in the table's order. */
 export const KIND_WORDS = Object.keys(KINDS) as readonly CellKind[];

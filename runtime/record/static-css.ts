@@ -74,6 +74,12 @@ export const STATIC_CSS = `
 .lt-res-none, .lt-res-err { color: var(--lt-soft); font-weight: 400; }
 .lt-ref { font: 11.5px/1.35 system-ui, sans-serif; color: var(--lt-soft); padding-top: .2rem; overflow-wrap: anywhere; }
 .lt-ref span { display: block; }
+.lt-table { border-collapse: collapse; font: 13px system-ui, sans-serif; margin: .3rem 0; }
+.lt-table th, .lt-table td { border: 1px solid var(--lt-rule); padding: .1rem .45rem; text-align: right; vertical-align: top; }
+.lt-table th { font-weight: 600; color: var(--lt-soft); }
+.lt-table .tbl-unit { display: block; font-weight: 400; font-size: 11px; }
+.lt-table td:first-child, .lt-table th:first-child { text-align: left; }
+.lt-tbl-bad { outline: 2px solid var(--lt-fail); }
 .lt-meta, .lt-about { font: 12px system-ui, sans-serif; color: var(--lt-soft); margin: .1rem 0; }
 .lt-verdict { font: 13px system-ui, sans-serif; margin: .1rem 0; }
 .lt-ratio, .lt-dc { color: var(--lt-ink); margin-left: .5rem; }

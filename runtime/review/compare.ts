@@ -3,6 +3,7 @@
 // demand/capacity ratio; and the one action that puts the issued inputs back.
 
 import type { CalcDocument, Cell } from '../document';
+import { tableAtIssue } from './table-inputs';
 import { latestRevision, snapshot, type ResultLookup } from './revision';
 import type { Baseline, IssuedInput, IssuedResult } from './types';
 
@@ -147,6 +148,11 @@ export function returnToBaseline(doc: CalcDocument, baseline?: Baseline): CalcDo
   const values = new Map(issued.inputs.map((i) => [i.id, i.value]));
   let changed = false;
   const cells = doc.cells.map((c): Cell => {
+    if (c.kind === 'table') {
+      const t = tableAtIssue(c, values);
+      if (t !== c) changed = true;
+      return t;
+    }
     if (c.kind !== 'input') return c;
     const v = values.get(c.id);
     if (v === undefined || v === c.value) return c;

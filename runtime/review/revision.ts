@@ -5,6 +5,7 @@
 import { cellName, type CalcDocument } from '../document';
 import { EditError } from '../edit/ops';
 import type { CellState } from '../engine-types';
+import { tableInputs } from './table-inputs';
 import { emptyReview, type Baseline, type InputRevised, type IssuedResult, type Revision, type ReviewState } from './types';
 
 /** Engine results by cell id: `engine.state` fits, so does a map's `get`. */
@@ -18,6 +19,8 @@ export function snapshot(doc: CalcDocument, results: ResultLookup): Baseline {
   for (const cell of doc.cells) {
     if (cell.kind === 'input') {
       baseline.inputs.push({ id: cell.id, name: cell.name, value: cell.value });
+    } else if (cell.kind === 'table') {
+      baseline.inputs.push(...tableInputs(cell));
     } else if (cell.kind === 'formula' || cell.kind === 'check') {
       const s = results(cell.id);
       const r: IssuedResult = { id: cell.id, kind: cell.kind, status: s?.status ?? 'pending' };

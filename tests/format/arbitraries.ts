@@ -99,8 +99,20 @@ const sweep = fc.record(
   { ...opts, requiredKeys: ['kind', 'input', 'from', 'to', 'outputs'] },
 );
 
+/** Values are kept trimmed (a row line is read back value by value, trimmed). */
+const tableValue = anyText.filter((v) => v.trim() === v);
+const table = fc
+  .record({
+    name: cellName,
+    columns: fc.array(fc.record({ name: identifier, type: anyText.filter((t) => t !== '' && t.trim() === t) }, opts), { minLength: 1, maxLength: 4 }),
+    label: anyText,
+    clause: anyText,
+  }, { ...opts, requiredKeys: ['name', 'columns'] })
+  .chain((t) => fc.array(fc.array(tableValue, { minLength: t.columns.length, maxLength: t.columns.length }), { maxLength: 4 })
+    .map((rows) => ({ kind: 'table' as const, ...t, rows })));
+
 /** One generator per kind: a kind added to the Cell union does not compile here until it has one. */
-const KIND_CELLS: { [K in CellKind]: fc.Arbitrary<Omit<CellOf<K>, 'id'>> } = { section, note, input, formula, check, figure, sweep };
+const KIND_CELLS: { [K in CellKind]: fc.Arbitrary<Omit<CellOf<K>, 'id'>> } = { section, note, input, formula, check, figure, sweep, table };
 
 const cellWithoutId = fc.oneof(...Object.values(KIND_CELLS));
 
