@@ -149,3 +149,14 @@ describe('table in the record and in review', () => {
     engine.dispose();
   });
 });
+
+describe('the table example in FORMAT.md', () => {
+  it('reads with no error and is written back byte for byte', async () => {
+    const { readFileSync } = await import('node:fs');
+    const spec = readFileSync(new URL('../../runtime/format/FORMAT.md', import.meta.url), 'utf8');
+    const example = [...spec.matchAll(/```loadtrace\n([\s\S]*?)```/g)].map((m) => m[1]).find((e) => e.startsWith('table '))!;
+    const r = parse(`loadtrace 1\n\n${example}`);
+    expect(r.errors).toEqual([]);
+    expect(serialize(r.doc)).toBe(`loadtrace 1\n\n${example}`);
+  });
+});
