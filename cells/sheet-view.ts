@@ -17,6 +17,7 @@ import { inSummary, writeSummary } from './summary';
 import { writeCellContent } from './step-patch';
 import { LaterBatches } from './later-batches';
 import { listenToValueFields } from './value-fields';
+import { RunTraces } from './run-trace';
 import { WorkingFolds } from './working';
 
 export interface SheetEvents {
@@ -95,7 +96,11 @@ export class SheetView {
     // A printed sheet shows every cell typeset.
     window.addEventListener('beforeprint', () => this.renderAll());
     this.folds = new WorkingFolds(host, () => this.engine, () => this.doc);
+    this.traces = new RunTraces(host, () => this.engine, () => this.doc);
   }
+
+  /** The open row traces of runs (cells/run-trace.ts). */
+  readonly traces: RunTraces;
 
   /** The working folds of library calls (cells/working.ts). */
   private readonly folds: WorkingFolds;
@@ -341,6 +346,7 @@ export class SheetView {
     slot.html = html;
     this.writeContent(slot, html);
     this.folds.restore(slot.el, id);
+    this.traces.restore(slot.el, id);
   }
 
   /**

@@ -118,7 +118,22 @@ export interface TableCell extends CellBase {
   rows: string[][];
 }
 
-export type Cell = SectionCell | NoteCell | InputCell | FormulaCell | CheckCell | FigureCell | SweepCell | TableCell;
+/**
+ * The trace written once in the sheet (the cells of the sections `trace`), run again for
+ * every row of the table `table`: an input of the trace whose name is a column of the
+ * table takes that row's value. Publishes, under `name`, a table of each row's `results`.
+ */
+export interface RunCell extends CellBase {
+  kind: 'run';
+  name: string;
+  table: string;
+  /** Ids of the sections whose cells are the trace. */
+  trace: string[];
+  /** Names of formulas and checks of the trace, shown as the result table's columns. */
+  results: string[];
+}
+
+export type Cell = SectionCell | NoteCell | InputCell | FormulaCell | CheckCell | FigureCell | SweepCell | TableCell | RunCell;
 export type CellKind = Cell['kind'];
 
 export interface CalcDocument {

@@ -6,7 +6,7 @@ import type { CellStatus } from './cell-status';
 import type { CalcDocument } from './document';
 import type { FigureSpec, SweepResult } from './figures/spec';
 import type { LibraryCall } from './library/call';
-import type { TableValue } from './table/types';
+import type { RunValue, TableValue } from './table/types';
 
 export type { CellStatus };
 
@@ -61,6 +61,8 @@ export interface CellState {
   sweep?: SweepResult;
   /** Table cells: the values read, and any that could not be. */
   table?: TableValue;
+  /** Run cells: the result table, and every row's trace. */
+  run?: RunValue;
 }
 
 /** One plotted result at one what-if point: a value (a check's ratio or condition) and, for checks, pass. */
@@ -88,6 +90,11 @@ export interface Engine {
    * showing their working (runtime/working). Computed when asked, never on an edit.
    */
   libraryCalls?(id: string): LibraryCall[];
+  /**
+   * The states of row `row`'s trace of run `runId` (cells outside the trace: the sheet's),
+   * or undefined when there is no such row.
+   */
+  traceStates?(runId: string, row: number): ((id: string) => CellState | undefined) | undefined;
   /** Resolves when every cell has a final state for the current document. */
   settled(): Promise<void>;
   dispose(): void;

@@ -83,6 +83,7 @@ export function sameState(a: CellState, b: CellState): boolean {
     a.reads.join(',') === b.reads.join(',') &&
     a.figure === b.figure &&
     a.sweep === b.sweep &&
-    a.table === b.table
+    a.table === b.table &&
+    a.run === b.run
   );
 }

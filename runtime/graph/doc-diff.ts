@@ -26,9 +26,9 @@ export function sameCell(a: Cell, b: Cell): boolean {
   return JSON.stringify(a) === JSON.stringify(b);
 }
 
-/** An input whose value (not its name or kind) changed cannot change the graph's shape. */
+/** An input or a table whose values (not its name or kind) changed cannot change the graph's shape. */
 export function isInputValueOnly(a: Cell, b: Cell): boolean {
-  return a.kind === 'input' && b.kind === 'input' && a.name === b.name;
+  return (a.kind === 'input' || a.kind === 'table') && b.kind === a.kind && a.name === b.name;
 }
 
 export function sameTypeOrBoth(a: CellProgram['type'], b: CellProgram['type']): boolean {

@@ -27,6 +27,7 @@ import { Pacer } from './pacer';
 import { computeAfterThisTask } from './scheduling';
 import { CellNames, nameOwners } from './cell-names';
 import { upstreamFirst } from './upstream-first';
+import { traceStateLookup } from './trace-states';
 // The working of a cell's library calls, asked for by the view (runtime/working).
 import { captureCalls, type LibraryCall } from '../working/calls';
 
@@ -184,6 +185,7 @@ class DocEngine implements Engine {
       for (const n of namesChanged) for (const id of this.readers.of(n)) affected.add(id);
       for (const n of namesChanged) for (const id of this.owners.get(n) ?? []) affected.add(id);
       for (const id of this.updateCycles()) affected.add(id);
+      for (const slot of this.slots.values()) if (describe(slot.cell.kind).program?.followsSheet) affected.add(slot.cell.id);
     }
     if (structural || this.systemStale) {
       this.systemStale = false;
@@ -297,6 +299,7 @@ class DocEngine implements Engine {
       scope: (source, figures) => names.scopeFor(source, figures ? this.figureFunctions : this.functions),
       functions: this.functions, unitOfNode: (n) => names.unitOfNode(n), unitOfName: (n) => names.unitOfName(n),
       system: this.system ?? sheetSystem(this.doc), sweepInfo: (n) => names.sweepInfo(n), whatIf: this.whatIfGraph, previous: slot.program,
+      cells: () => this.doc.cells,
     };
   }
 
@@ -310,6 +313,10 @@ class DocEngine implements Engine {
 
   whatIf(input: string, values: readonly (number | string | boolean)[], outputs: readonly string[]): Record<string, WhatIfOutcome>[] {
     return whatIfRun(this.whatIfGraph, (n) => this.names.sweepInfo(n), input, values, outputs);
+  }
+
+  traceStates(runId: string, row: number) {
+    return traceStateLookup(this.slots.get(runId)?.state, row, (id) => this.slots.get(id)?.cell, (id) => this.slots.get(id)?.program, (id) => this.state(id));
   }
 
   libraryCalls(id: string): LibraryCall[] {

@@ -2,6 +2,7 @@
 // formula sees, display units of named cells, the sheet's unit system, what a sweep
 // needs of the cells it names, and the cell's previous program.
 
+import type { Cell } from '../document';
 import type { CompileScope } from '../formula/compile';
 import type { MathNode } from '../formula/nodes';
 import type { LibFunction } from '../library/types';
@@ -24,6 +25,8 @@ export interface ProgramEnv {
   sweepInfo(name: string): SweepCellInfo | undefined;
   /** The compiled programs, for evaluating what-if points. */
   whatIf: WhatIfGraph;
+  /** The cells of the sheet, in order (a run finds its trace's sections in them). */
+  cells(): readonly Cell[];
   /** The cell's program before this compile (an input keeps computing with its last good value). */
   previous?: CellProgram;
 }

@@ -11,9 +11,10 @@ import { note } from './note';
 import { section } from './section';
 import { sweep } from './sweep';
 import { table } from './table';
+import { run } from './run';
 import type { KindDescription, KindTable } from './types';
 
-export const KINDS: KindTable = { section, note, input, formula, check, figure, sweep, table };
+export const KINDS: KindTable = { section, note, input, formula, check, figure, sweep, table, run };
 
 /** Every kind's word, in the table's order. */
 export const KIND_WORDS = Object.keys(KINDS) as readonly CellKind[];

@@ -77,6 +77,8 @@ export interface ProgramSpec<C> {
    * system (checks, figures): recompiled when those change.
    */
   followsUnits: boolean;
+  /** Reads cells it does not name (a run's trace): compiled again whenever cells are added, removed or renamed. */
+  followsSheet?: boolean;
 }
 
 /** What the live sheet draws for a cell: its status (for the class name) and its HTML. */
@@ -112,7 +114,7 @@ export interface KindDescription<K extends CellKind> {
   /** How it computes; null for a kind that does not (sections, notes). */
   program: ProgramSpec<CellOf<K>> | null;
   /** Its title in the summary of checks; null for a kind the summary does not list. */
-  summaryTitle: ((cell: CellOf<K>) => string) | null;
+  summaryTitle: ((cell: CellOf<K>, state?: CellState) => string) | null;
   /** The live sheet's drawing of the cell (HTML; math as KaTeX HTML). */
   live(cell: CellOf<K>, ctx: ViewContext): LiveView;
   /** The record's static drawing of the cell (HTML that reads with JavaScript off; math as MathML). */

@@ -38,9 +38,9 @@ export function summaryRows(
 ): SummaryRow[] {
   const rows: (SummaryRow & { order: number })[] = [];
   for (const cell of cells) {
-    const title = describe(cell.kind).summaryTitle?.(cell);
-    if (title === undefined) continue;
     const s = state(cell.id);
+    const title = describe(cell.kind).summaryTitle?.(cell, s);
+    if (title === undefined) continue;
     rows.push({
       id: cell.id, number: numbers.get(cell.id) ?? '', title: title.slice(0, TITLE_LIMIT), status: s?.status ?? 'pending',
       ratio: s?.ratio, reference: cell.clause ?? s?.clauses.join('; ') ?? '', order: rows.length,

@@ -111,8 +111,22 @@ const table = fc
   .chain((t) => fc.array(fc.array(tableValue, { minLength: t.columns.length, maxLength: t.columns.length }), { maxLength: 4 })
     .map((rows) => ({ kind: 'table' as const, ...t, rows })));
 
+const run = fc.record(
+  {
+    kind: fc.constant('run' as const),
+    name: cellName,
+    table: anyText,
+    // Always present; an empty list is written as no lines and reads back as [].
+    trace: fc.array(anyText, { maxLength: 3 }),
+    results: fc.array(cellName, { maxLength: 3 }),
+    label: anyText,
+    clause: anyText,
+  },
+  { ...opts, requiredKeys: ['kind', 'name', 'table', 'trace', 'results'] },
+);
+
 /** One generator per kind: a kind added to the Cell union does not compile here until it has one. */
-const KIND_CELLS: { [K in CellKind]: fc.Arbitrary<Omit<CellOf<K>, 'id'>> } = { section, note, input, formula, check, figure, sweep, table };
+const KIND_CELLS: { [K in CellKind]: fc.Arbitrary<Omit<CellOf<K>, 'id'>> } = { section, note, input, formula, check, figure, sweep, table, run };
 
 const cellWithoutId = fc.oneof(...Object.values(KIND_CELLS));
 
