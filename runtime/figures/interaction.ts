@@ -76,7 +76,7 @@ export function renderInteraction(spec: InteractionSpec): string {
   lines.forEach((t, i) => {
     body += text(lx, PLOT.y + 232 + 15 * i, t, 'small', i === 3 ? { 'data-role': 'demand-label', 'font-weight': 600 } : {});
   });
-  body += sectionSketch(spec, PLOT.x + PLOT.w + 28, PLOT.y + 10, W - (PLOT.x + PLOT.w + 28) - 14);
+  body += sectionSketch(spec, PLOT.x + PLOT.w + 28, PLOT.y + 10, W - (PLOT.x + PLOT.w + 28) - 30);
   // Key.
   const keyY = H - 16;
   body += line(14, keyY, 40, keyY, 'series', { stroke: '#1d4f91' }) + text(44, keyY + 4, 'design φPn, φMn', 'small');

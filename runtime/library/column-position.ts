@@ -13,7 +13,23 @@ import { POSITIONS, boPunch, criticalSection, position, type Position } from './
 import { gammaV, sectionProperties } from './punching-moment-transfer';
 import { kll } from './loads-reduction';
 import { tribArea } from './loads-tributary';
-import { END_CASES, ddmCsFraction, ddmEndCoef, ddmInteriorCoef, type EndCase } from './slab-ddm';
+import { END_CASES, ddmCsFraction, ddmCsWidth, ddmEndCoef, ddmInteriorCoef, type EndCase } from './slab-ddm';
+
+/** Where a column stands on a grid of n1 × n2 spans, lines counted from 0 to n (this library's convention: an edge ⟂ direction 1). */
+export function columnPosition(n1: number, n2: number, line1: number, line2: number): Position | 'edge along direction 1' {
+  const line = (name: string, v: number, n: number) => {
+    if (!Number.isInteger(n) || n < 1) throw new LibraryError(`${name === 'line1' ? 'n1' : 'n2'} must be a whole number of spans, at least 1`);
+    if (!Number.isInteger(v) || v < 0 || v > n) throw new LibraryError(`${name} must be a whole number from 0 (edge line) to ${n} (got ${v})`);
+    return v === 0 || v === n;
+  };
+  const onEdge1 = line('line1', line1, n1);
+  const onEdge2 = line('line2', line2, n2);
+  if (onEdge1 && onEdge2) return 'corner';
+  if (onEdge1) return 'edge';
+  // On a north or south edge line only: the free edge runs along direction 1, which this
+  // convention (c1 ⟂ the edge, the moment from the direction-1 span) does not describe.
+  return onEdge2 ? 'edge along direction 1' : 'interior';
+}
 
 /** KLL of ASCE 7-22 Table 4.7-1: 4 interior and exterior columns without cantilever slabs; 3 edge, 2 corner with them. */
 export function kllColumn(pos: Position, cantilever = false): number {
@@ -35,6 +51,12 @@ export function frameWidth(l2: number, c2: number, pos: Position): number {
   positive('l2', l2);
   positive('c2', c2);
   return pos === 'corner' ? l2 / 2 + c2 / 2 : l2;
+}
+
+/** Column strip width of the direction-1 frame: 0.25·min(ℓ1, ℓ2) each side (§8.4.1.5); at a corner one side plus c2/2 to the edge. */
+export function csWidthColumn(l1: number, l2: number, c2: number, pos: Position): number {
+  const full = ddmCsWidth(l1, l2);
+  return pos === 'corner' ? full / 2 + positive('c2', c2) / 2 : full;
 }
 
 /** Negative moment at the column line as a fraction of Mo: 0.65 interior span (§8.10.4.1), the exterior negative of Table 8.10.4.2 at an edge. */
@@ -117,6 +139,25 @@ const endCase = (v: unknown): EndCase => optional(v, 'no-beams' as EndCase, (x) 
 });
 
 export const functions: LibFunction[] = [
+  defineFunction({
+    name: 'column_position',
+    params: [{ name: 'n1', type: '1', doc: 'spans in direction 1' }, { name: 'n2', type: '1', doc: 'spans in direction 2' },
+      { name: 'line1', type: '1', doc: 'column line in direction 1, 0 at the edge to n1' },
+      { name: 'line2', type: '1', doc: 'column line in direction 2, 0 at the edge to n2' }],
+    returns: 'text',
+    clause: 'Column on an edge line of the grid: edge (lines across direction 1), corner (both), else interior',
+    doc: "Position of a column from its grid lines: 'interior', 'edge', 'corner' (or 'edge along direction 1')",
+    fn: columnPosition,
+  }),
+  defineFunction({
+    name: 'cs_width_col',
+    params: [{ name: 'l1', type: 'm', doc: 'span in direction 1' }, { name: 'l2', type: 'm', doc: 'span in direction 2' },
+      { name: 'c2', type: 'm', doc: 'column side along the edge' }, POS],
+    returns: 'm',
+    clause: 'ACI 318-19 §8.4.1.5: 0.25ℓ1 or 0.25ℓ2 (the smaller) each side of the column line; the edge side of a corner column c2/2 (common practice)',
+    doc: 'Column strip width of the direction-1 frame at the column',
+    fn: (l1: number, l2: number, c2: number, p: string) => csWidthColumn(l1, l2, c2, position(p)),
+  }),
   defineFunction({
     name: 'kll_column',
     params: [POS, { name: 'cantilever', type: 'bool', doc: 'cantilever slab beyond the edge (default false)' }],

@@ -30,6 +30,23 @@ describe('KLL and tributary area by position', () => {
     expect(a('corner')).toBeCloseTo(151.861, 3);
   });
 
+  it('position from the grid lines: an edge line across direction 1 is an edge, both a corner', () => {
+    // 4 × 3 spans, lines 0..4 east–west and 0..3 north–south
+    expect(call('column_position', 4, 3, 2, 1)).toBe('interior');
+    expect(call('column_position', 4, 3, 0, 1)).toBe('edge');
+    expect(call('column_position', 4, 3, 4, 2)).toBe('edge');
+    expect(call('column_position', 4, 3, 4, 3)).toBe('corner');
+    expect(call('column_position', 4, 3, 2, 0)).toBe('edge along direction 1');
+    expect(() => call('column_position', 4, 3, 5, 1)).toThrow(/line1 must be a whole number from 0/);
+  });
+
+  it('column strip of the direction-1 frame (ACI 318-19 §8.4.1.5)', () => {
+    // 0.25·min(24, 22) = 5.5 ft each side → 11 ft; at a corner 5.5 ft + 10 in = 6.333 ft (common practice)
+    expect(num('cs_width_col', 24 * ft, 22 * ft, 20 * i, 'interior') / ft).toBeCloseTo(11, 9);
+    expect(num('cs_width_col', 24 * ft, 22 * ft, 20 * i, 'edge') / ft).toBeCloseTo(11, 9);
+    expect(num('cs_width_col', 24 * ft, 22 * ft, 20 * i, 'corner') / ft).toBeCloseTo(6.3333, 4);
+  });
+
   it('frame width and the design moments at the column line', () => {
     // Corner: edge frame ℓ2/2 + c2/2 = 11 + 0.8333 = 11.833 ft (common practice); interior and edge: ℓ2 = 22 ft
     expect(num('frame_width', 22 * ft, 20 * i, 'corner') / ft).toBeCloseTo(11.8333, 4);
