@@ -349,6 +349,8 @@ describe('the source editor, loaded on first use', () => {
       await p.goto(server.url);
       await ready(p);
       const id = await p.evaluate(() => (window as any).loadtrace.doc.cells.find((c: { kind: string }) => c.kind === 'formula').id as string);
+      // The first formula may sit below the first screen's rendered cells: bring it into view first.
+      await p.locator(`#cell-${id}`).scrollIntoViewIfNeeded();
       await p.locator(`#cell-${id} .cell-no`).click();
       await p.keyboard.press('Enter');
       const plain = p.locator(`#cell-${id} textarea.src-plain`);
