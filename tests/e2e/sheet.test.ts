@@ -63,10 +63,14 @@ describe('the calc sheet in Chromium', () => {
     expect(checks).toBeGreaterThan(0);
     expect(await page.locator('.sum-row').count()).toBe(checks);
     expect(await page.locator('#cells article.cell').count()).toBe(await page.evaluate(() => (window as any).loadtrace.doc.cells.length));
-    // Every formula and check typeset so far reads as a hand calc (how many are near the top depends on the demo's notes).
+    // Every formula and check typeset so far reads as a hand calc. The title block and the check
+    // summary (a row per check) may fill the first screen, so go to the first formula first.
+    await page.locator('#cells article.kind-formula').first().scrollIntoViewIfNeeded();
     const typeset = page.locator('#cells article.kind-formula:not(.unrendered), #cells article.kind-check:not(.unrendered)');
+    await page.waitForFunction(() => document.querySelector('#cells article.kind-formula:not(.unrendered)') !== null, null, { timeout: 10_000 });
     expect(await typeset.count()).toBeGreaterThan(0);
-    expect(await page.locator('#cells article.kind-formula:not(.unrendered):not(:has(.katex)), #cells article.kind-check:not(.unrendered):not(:has(.katex))').count()).toBe(0);
+    await page.waitForFunction(() => document.querySelectorAll('#cells article.kind-formula:not(.unrendered):not(:has(.katex)), #cells article.kind-check:not(.unrendered):not(:has(.katex))').length === 0, null, { timeout: 10_000 });
+    await page.evaluate(() => window.scrollTo(0, 0));
     // cells far below the viewport wait as source text until they come near (or the sheet is printed)
     expect(await page.locator('#cells article.unrendered').count()).toBeGreaterThan(0);
     const caution = page.locator('.caution-bar');
