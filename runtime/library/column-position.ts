@@ -7,6 +7,7 @@
 // functions on SI numbers with the position as an argument, so a building model can call
 // them per column mark.
 
+import { working } from '../working/recorder';
 import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
 import { finite, nonNegative, optional, positive } from './support-args';
 import { POSITIONS, boPunch, criticalSection, position, type Position } from './punching-perimeter';
@@ -24,11 +25,17 @@ export function columnPosition(n1: number, n2: number, line1: number, line2: num
   };
   const onEdge1 = line('line1', line1, n1);
   const onEdge2 = line('line2', line2, n2);
-  if (onEdge1 && onEdge2) return 'corner';
-  if (onEdge1) return 'edge';
   // On a north or south edge line only: the free edge runs along direction 1, which this
   // convention (c1 ⟂ the edge, the moment from the direction-1 span) does not describe.
-  return onEdge2 ? 'edge along direction 1' : 'interior';
+  const pos = onEdge1 && onEdge2 ? 'corner' : onEdge1 ? 'edge' : onEdge2 ? 'edge along direction 1' : 'interior';
+  const w = working();
+  if (w) {
+    const on = (v: number, n: number, name: string) => (v === 0 || v === n ? `${name} = ${v} is an edge line (0 or ${n})` : `${name} = ${v} lies between the edge lines 0 and ${n}`);
+    w.step('edge_1', undefined, onEdge1, '', { note: on(line1, n1, 'line1') });
+    w.step('edge_2', undefined, onEdge2, '', { note: on(line2, n2, 'line2') });
+    w.step('position', undefined, pos, '', { note: 'both edge lines: corner; line1 only: edge; neither: interior', clause: 'common practice' });
+  }
+  return pos;
 }
 
 /** KLL of ASCE 7-22 Table 4.7-1: 4 interior and exterior columns without cantilever slabs; 3 edge, 2 corner with them. */
@@ -56,7 +63,12 @@ export function frameWidth(l2: number, c2: number, pos: Position): number {
 /** Column strip width of the direction-1 frame: 0.25·min(ℓ1, ℓ2) each side (§8.4.1.5); at a corner one side plus c2/2 to the edge. */
 export function csWidthColumn(l1: number, l2: number, c2: number, pos: Position): number {
   const full = ddmCsWidth(l1, l2);
-  return pos === 'corner' ? full / 2 + positive('c2', c2) / 2 : full;
+  if (pos !== 'corner') return full;
+  const width = full / 2 + positive('c2', c2) / 2;
+  working()?.step('b_cs_corner', 'b_cs / 2 + c2 / 2', width, 'ft', {
+    vars: { c2: [c2, 'in'] }, note: 'one side of the column line, and c2/2 to the slab edge', clause: 'ACI 318-19 §8.4.1.5; edge side common practice',
+  });
+  return width;
 }
 
 /** Negative moment at the column line as a fraction of Mo: 0.65 interior span (§8.10.4.1), the exterior negative of Table 8.10.4.2 at an edge. */
