@@ -13,6 +13,7 @@ import { sizeFooting, checkFooting, type FootingResult, type SizingOutcome, type
 import { groupFootings, type GroupRules, type Grouping, type SizedMark } from './footing-group';
 import type { FootingDesign, FootingSite } from './footing-checks';
 import type { ScheduleRow } from './schedule-csv';
+import type { AsceEdition } from '../library/loads-combinations';
 
 export interface BuildingInput {
   xLines: GridLine[];
@@ -22,6 +23,8 @@ export interface BuildingInput {
   /** The column schedule: marks, grid positions, sizes, loads that override. */
   columns: ScheduleRow[];
   storeys: StoreyInput[];
+  /** ASCE 7 edition of the load combinations ('7-22' when not given). */
+  asce?: AsceEdition;
   /** Slab cover and bar, for the slab's effective depth d = h − cover − bar (as the template). */
   slabCover: number;
   slabBar: string;
@@ -77,8 +80,9 @@ export function computeMark(b: PreparedBuilding, mark: string): MarkResult {
   const AT = b.trib.marks[k].area;
   const bar = barDia(b.input.slabBar);
   const punching = b.input.storeys.map((s) => punchingPosition(b.plan, position, col.c1, col.c2, s.slab - b.input.slabCover - bar));
-  const rows = takedown(b.storeys, { AT, KLL: kll.KLL, c1: col.c1, c2: col.c2 }, b.input.site.wc);
-  const base = baseWithOverride(rows[rows.length - 1], col.loads);
+  const asce = b.input.asce ?? '7-22';
+  const rows = takedown(b.storeys, { AT, KLL: kll.KLL, c1: col.c1, c2: col.c2 }, b.input.site.wc, asce);
+  const base = baseWithOverride(rows[rows.length - 1], col.loads, asce);
   const demand = { Pu: base.Pu, Ps: base.Ps, c1: col.c1, c2: col.c2 };
   const fixed = b.input.fixed?.get(mark);
   const footing = fixed

@@ -18,7 +18,7 @@
 // level; the per-level numbers every mark shares come prepared (storeys.ts).
 
 import { liveReduced, type Occupancy } from '../library/loads-reduction';
-import { comboAsd, comboUGoverning, STRENGTH_COMBOS } from '../library/loads-combinations';
+import { comboAsd, comboUGoverning, strengthCombos, type AsceEdition } from '../library/loads-combinations';
 import { LibraryError } from '../library/types';
 import { psf } from '../units/si';
 import type { PreparedStoreys, StoreyInput } from './storeys';
@@ -88,7 +88,7 @@ function addFloor(g: Group, s: StoreyInput): void {
 const newGroup = (): Group => ({ n: 0, sumLo: 0, repLo: 0, repOcc: 'general' });
 
 /** The takedown of one mark, a row per level, roof first (see the header). */
-export function takedown(st: PreparedStoreys, col: ColumnOnPlan, wc: number): TakedownRow[] {
+export function takedown(st: PreparedStoreys, col: ColumnOnPlan, wc: number, asce: AsceEdition = '7-22'): TakedownRow[] {
   const { AT, KLL, c1, c2 } = col;
   if (!(AT > 0) || !(KLL > 0) || !(c1 > 0) || !(c2 > 0)) throw new LibraryError('AT, KLL, c1 and c2 must be greater than 0');
   const wCol = c1 * c2 * wc;
@@ -108,8 +108,8 @@ export function takedown(st: PreparedStoreys, col: ColumnOnPlan, wc: number): Ta
     const L = groupLive(groups.equation, AT, KLL, true) + groupLive(groups.limited, AT, KLL, true)
       + groupLive(groups.none, AT, KLL, false);
     const Lo = AT * (groups.equation.sumLo + groups.limited.sumLo + groups.none.sumLo);
-    const u = comboUGoverning(D, L, Lr, S);
-    rows.push({ level: s.level, floors: k, D, L, Lr, S, Lo, Pu: u.value, combo: STRENGTH_COMBOS[u.index], Ps: comboAsd(D, L, Lr, S) });
+    const u = comboUGoverning(D, L, Lr, S, 0, asce);
+    rows.push({ level: s.level, floors: k, D, L, Lr, S, Lo, Pu: u.value, combo: strengthCombos(asce)[u.index], Ps: comboAsd(D, L, Lr, S, 0, asce) });
   });
   return rows;
 }
@@ -123,12 +123,12 @@ export interface LoadOverride {
 }
 
 /** The base row with the engineer's loads put in, Pu and Ps combined again. */
-export function baseWithOverride(base: TakedownRow, o: LoadOverride | undefined): TakedownRow {
+export function baseWithOverride(base: TakedownRow, o: LoadOverride | undefined, asce: AsceEdition = '7-22'): TakedownRow {
   if (!o || (o.D === undefined && o.L === undefined && o.Lr === undefined && o.S === undefined)) return base;
   const D = o.D ?? base.D;
   const L = o.L ?? base.L;
   const Lr = o.Lr ?? base.Lr;
   const S = o.S ?? base.S;
-  const u = comboUGoverning(D, L, Lr, S);
-  return { ...base, D, L, Lr, S, Pu: u.value, combo: STRENGTH_COMBOS[u.index], Ps: comboAsd(D, L, Lr, S) };
+  const u = comboUGoverning(D, L, Lr, S, 0, asce);
+  return { ...base, D, L, Lr, S, Pu: u.value, combo: strengthCombos(asce)[u.index], Ps: comboAsd(D, L, Lr, S, 0, asce) };
 }

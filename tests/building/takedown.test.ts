@@ -101,7 +101,7 @@ describe('a whole takedown by hand: roof and two floors', () => {
     // 1.4D = 80,033; 1.2D + 0.5Lr = 72,600; 1.2D + 1.6Lr = 68,600 + 12,800 = 81,400 lb
     expect(lb(rows[0].D)).toBeCloseTo(57166.67, 1);
     expect(lb(rows[0].Pu)).toBeCloseTo(81400, 1);
-    expect(rows[0].combo).toBe('1.2D + 1.6(Lr or S or R) + L');
+    expect(rows[0].combo).toBe('1.2D + (1.6Lr or 1.0S or 1.6R) + L'); // ASCE 7-22 §2.3.1 comb. 3, in 7-22's words
     // service: D + Lr = 65,166.7 lb (ASCE 7-22 §2.4.1)
     expect(lb(rows[0].Ps)).toBeCloseTo(65166.67, 1);
   });
@@ -113,7 +113,7 @@ describe('a whole takedown by hand: roof and two floors', () => {
     expect(lb(rows[1].D)).toBeCloseTo(116333.33, 1);
     expect(lb(rows[1].L)).toBeCloseTo(20000, 1);
     expect(lb(rows[1].Pu)).toBeCloseTo(175600, 1);
-    expect(rows[1].combo).toBe('1.2D + 1.6L + 0.5(Lr or S or R)');
+    expect(rows[1].combo).toBe('1.2D + 1.6L + (0.5Lr or 0.3S or 0.5R)'); // ASCE 7-22 §2.3.1 comb. 2
   });
 
   it('at the footing: two floors', () => {
@@ -143,6 +143,34 @@ describe('a whole takedown by hand: roof and two floors', () => {
     const o = baseWithOverride(rows[2], { D: 200000 * lbf, L: 40000 * lbf });
     expect(lb(o.Pu)).toBeCloseTo(308000, 3);
     expect(baseWithOverride(rows[2], {})).toBe(rows[2]);
+  });
+});
+
+describe('the ASCE 7 edition of the combinations (snow at the roof is where they differ)', () => {
+  // AT = 400 ft², roof only: D = 400 × 132.5 + 4,166.7 = 57,166.7 lb; Lr = 8,000 lb; S = 400 × 30 = 12,000 lb
+  const st = prepareStoreys([roof({ snow: 30 * psf })], wc);
+  const lb = (v: number) => v / lbf;
+
+  it('ASCE 7-22 §2.3.1: 1.2D + 1.0S (strength-level snow, from memory) against 1.2D + 1.6Lr; §2.4.1: D + 0.7S', () => {
+    // 1.4D = 80,033.3; comb. 3 leading roof load max(1.6 × 8,000, 1.0 × 12,000) = 12,800 → 68,600 + 12,800 = 81,400 lb
+    const [r] = takedown(st, col(400 * ft2), wc, '7-22');
+    expect(lb(r.Pu)).toBeCloseTo(81400, 1);
+    expect(r.combo).toBe('1.2D + (1.6Lr or 1.0S or 1.6R) + L');
+    // ASD: roof load max(Lr, 0.7S) = max(8,000, 8,400) = 8,400 → D + 8,400 = 65,566.7 lb
+    expect(lb(r.Ps)).toBeCloseTo(65566.67, 1);
+  });
+
+  it('ASCE 7-16 §2.3.2: 1.2D + 1.6S (service-level snow); §2.4.1: D + S', () => {
+    // comb. 3: max(1.6 × 8,000, 1.6 × 12,000) = 19,200 → 68,600 + 19,200 = 87,800 lb
+    const [r] = takedown(st, col(400 * ft2), wc, '7-16');
+    expect(lb(r.Pu)).toBeCloseTo(87800, 1);
+    expect(r.combo).toBe('1.2D + 1.6(Lr or S or R) + L');
+    // ASD: D + S = 57,166.7 + 12,000 = 69,166.7 lb
+    expect(lb(r.Ps)).toBeCloseTo(69166.67, 1);
+    // an override at the base is combined again in the same edition: D = 50 kip,
+    // 1.2 × 50 + 1.6 × 12 = 79.2 kip > 1.4 × 50 = 70 kip (7-22 would give 60 + max(12.8, 12) = 72.8)
+    expect(lb(baseWithOverride(r, { D: 50000 * lbf, L: 0 }, '7-16').Pu)).toBeCloseTo(79200, 1);
+    expect(lb(baseWithOverride(r, { D: 50000 * lbf, L: 0 }, '7-22').Pu)).toBeCloseTo(72800, 1);
   });
 });
 
