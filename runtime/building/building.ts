@@ -9,7 +9,7 @@ import { tributary, type Tributary } from './tributary';
 import { kllClass, planPosition, punchingPosition, type KllClass, type PlanPosition, type PunchingPosition } from './position';
 import { prepareStoreys, type PreparedStoreys, type StoreyInput } from './storeys';
 import { baseWithOverride, takedown, type TakedownRow } from './takedown';
-import { sizeFooting, checkFooting, type FootingResult, type SizingOutcome, type SizingRules } from './footing-size';
+import { sizeFooting, checkFooting, type FootingResult, type FootingShape, type SizingOutcome, type SizingRules } from './footing-size';
 import { groupFootings, type GroupRules, type Grouping, type SizedMark } from './footing-group';
 import type { FootingDesign, FootingSite } from './footing-checks';
 import type { ScheduleRow } from './schedule-csv';
@@ -30,6 +30,8 @@ export interface BuildingInput {
   slabBar: string;
   site: FootingSite;
   rules: GroupRules;
+  /** Plan shape sought for a mark's footing, by mark (rules.shape, or square, for the rest). */
+  footingShape?: ReadonlyMap<string, FootingShape>;
   /** Footings the engineer fixed, by mark: checked, not sized. */
   fixed?: ReadonlyMap<string, Omit<FootingDesign, 'bar' | 'nx' | 'ny'> & Partial<FootingDesign>>;
 }
@@ -86,8 +88,8 @@ export function computeMark(b: PreparedBuilding, mark: string): MarkResult {
   const demand = { Pu: base.Pu, Ps: base.Ps, c1: col.c1, c2: col.c2 };
   const fixed = b.input.fixed?.get(mark);
   const footing = fixed
-    ? { sized: false as const, checked: true as const, ...checkFooting(b.input.site, demand, fixed, b.input.rules.bars) }
-    : sizeFooting(b.input.site, demand, b.input.rules as SizingRules);
+    ? { sized: false as const, checked: true as const, ...checkFooting(b.input.site, demand, fixed, b.input.rules.bars, b.input.rules.dowelBar) }
+    : sizeFooting(b.input.site, demand, { ...(b.input.rules as SizingRules), shape: b.input.footingShape?.get(mark) ?? b.input.rules.shape });
   return { mark, placed, AT, position, kll, punching, takedown: rows, base, footing };
 }
 

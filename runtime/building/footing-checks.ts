@@ -1,18 +1,25 @@
 // Every check of a spread footing under one column, as the single-column template makes
 // them (docs-templates/load-path.lt, section "Spread footing"), through the same library
 // functions, for a footing L (along x, the column side c1) × B (along y, c2) × h with one
-// bar size each way. Moment and one-way shear are checked in both directions. Each check
-// is demand ≤ capacity with its ratio, so a sizing search can say which one fails.
+// bar size each way. Moment at the column face and one-way shear at d from it are checked
+// in both directions (ACI 318-19 §13.2.7.1–2), for a rectangular column with its own side
+// each way; the steel of a rectangular footing's short direction goes partly in a central
+// band (§13.3.3.3, footing-bars.ts). Bearing beyond φBn goes to the dowels (§16.3.1.2(a),
+// as_dowel_req), which must also develop in the footing (ℓdc, §25.4.9). Each check is
+// demand ≤ capacity with its ratio, so a sizing search can say which one fails.
 
 import { qNetAllow, aReqFooting } from '../library/footing-area';
 import { vuPunchFooting, vuOnewayFooting, onewayShear } from '../library/footing-shear';
-import { muFooting, asMinFooting } from '../library/footing-flexure';
+import { muFooting, asMinFooting, asFooting } from '../library/footing-flexure';
 import { ldBottom, ldAvailFooting } from '../library/footing-development';
 import { a2Frustum, phiBnBearing } from '../library/footing-bearing';
 import { punchingStrength } from '../library/punching-stress';
 import { boPunch } from '../library/punching-perimeter';
 import { phiMn } from '../library/flexure';
-import { sMaxSlab } from '../library/reinforcement-limits';
+import { footingSMax, layout, spanOf, type Axis } from './footing-bars';
+import { dowelDemand } from '../library/footing-bearing';
+import { ldc, ldcAvailFooting } from '../library/footing-dowels';
+import { epsT } from '../library/flexure';
 import { phiAction } from '../library/resistance-factors';
 import { barData } from '../library/rebar';
 import { LibraryError } from '../library/types';
@@ -57,6 +64,11 @@ export interface FootingDesign {
   bar: string;
   nx: number;
   ny: number;
+  /** Short-direction bars in the central band of a rectangular footing (§13.3.3.3); the least that holds γs of them when absent. */
+  nBand?: number;
+  /** Dowels into the column; when absent the dowel checks wait until they are chosen. */
+  dowelBar?: string;
+  nDowel?: number;
 }
 
 export interface FootingCheck {
@@ -101,23 +113,59 @@ class Checks {
   }
 }
 
-/** One direction: bars along `span` (cantilever from column side c), spread across `width`. */
-function direction(axis: 'x' | 'y', site: FootingSite, dem: FootingDemand, f: FootingDesign, d: number, out: Checks): boolean {
-  const [span, width, c, n] = axis === 'x' ? [f.L, f.B, dem.c1, f.nx] : [f.B, f.L, dem.c2, f.ny];
+/** One direction: bars along `axis` (cantilever from column side c), spread across the other side. */
+function direction(axis: Axis, site: FootingSite, dem: FootingDemand, f: FootingDesign, d: number, out: Checks): boolean {
+  const { span, width } = spanOf(f, axis);
+  const [c, n] = axis === 'x' ? [dem.c1, f.nx] : [dem.c2, f.ny];
   const bar = barData(f.bar);
   const ed = site.edition;
   const As = n * bar.area;
-  const s = n > 1 ? (width - 2 * site.cover - bar.dia) / (n - 1) : Infinity;
+  const lay = layout(site, f, axis, n, f.nBand);
   const rhoW = As / (width * d);
+  const phiMnV = phiMn(As, width, d, site.fcFooting, site.fy, ed);
   return out.add(`one-way shear ${axis}`, 'ACI 318-19 §22.5.5.1, §13.2.7.2', vuOnewayFooting(dem.Pu, width, span, c, d),
     phiAction('shear') * onewayShear(site.fcFooting, width, d, rhoW, 1, ed).vc)
-    && out.add(`flexure ${axis}`, 'ACI 318-19 §13.2.7.1, §22.2', muFooting(dem.Pu, width, span, c), phiMn(As, width, d, site.fcFooting, site.fy, ed))
+    && out.add(`flexure ${axis}`, 'ACI 318-19 §13.2.7.1, §22.2', muFooting(dem.Pu, width, span, c), phiMnV)
+    // εt ≥ 0.004 (ACI 318-19 §7.3.3.1 / §8.3.3.1 for slabs, applied to footings as the template does; from memory)
+    && out.add(`tension-controlled ${axis}`, 'ACI 318-19 §7.3.3.1, §21.2.2 (from memory)', 0.004, epsT(As, width, d, site.fcFooting, site.fy, ed))
     && out.add(`minimum steel ${axis}`, 'ACI 318-19 §13.3.3.1 (from memory)', asMinFooting(width, f.h, site.fy, ed), As)
-    && out.add(`bar spacing ${axis}`, 'ACI 318-19 §8.7.2.2, §13.3.3 (as the template)', s, sMaxSlab(f.h, 'two-way'))
+    && (lay.gammaS === 1 || out.add(`central band ${axis}`, 'ACI 318-19 §13.3.3.3, Eq. 13.3.3.3', lay.gammaS * steelNeeded(site, dem, f, axis, d), lay.nBand * bar.area))
+    && out.add(`bar spacing ${axis}`, 'ACI 318-19 §8.7.2.2, §13.3.3, Table 24.3.2 (fs = 2/3 fy)', lay.sMax, footingSMax(site, f.h))
     // clear spacing at least max(db, 1 in) (ACI 318-19 §25.2.1, from memory; aggregate not checked)
-    && out.add(`clear spacing ${axis}`, 'ACI 318-19 §25.2.1 (from memory)', Math.max(bar.dia, 1 * inch), s - bar.dia)
+    && out.add(`clear spacing ${axis}`, 'ACI 318-19 §25.2.1 (from memory)', Math.max(bar.dia, 1 * inch), lay.sMin - bar.dia)
     && out.add(`development ${axis}`, 'ACI 318-19 §25.4.2, §13.2.8.1', ldBottom(bar.dia, site.fy, site.fcFooting, true, 1, 1, site.edition),
       (span - c) / 2 > site.cover ? ldAvailFooting(span, c, site.cover) : 0);
+}
+
+/** Steel the moment at the face needs along `axis`, at least the minimum (as_footing); Infinity when the section is too shallow. */
+export function steelNeeded(site: FootingSite, dem: FootingDemand, f: FootingDesign, axis: Axis, d: number): number {
+  const { span, width } = spanOf(f, axis);
+  try {
+    return asFooting(muFooting(dem.Pu, width, span, axis === 'x' ? dem.c1 : dem.c2), width, d, f.h, site.fcFooting, site.fy, 0.9, site.edition);
+  } catch (e) {
+    if (e instanceof LibraryError) return Infinity;
+    throw e;
+  }
+}
+
+/** Bearing at the column–footing interface, the lesser of column and footing (ACI 318-19 Table 22.8.3.2). */
+export function bearingStrength(site: FootingSite, dem: FootingDemand, f: Pick<FootingDesign, 'L' | 'B' | 'h'>): number {
+  const Ag = dem.c1 * dem.c2;
+  return Math.min(phiBnBearing(site.fcColumn, Ag), phiBnBearing(site.fcFooting, Ag, a2Frustum(dem.c1, dem.c2, f.L, f.B, f.h)));
+}
+
+/** Dowel area needed: the bearing excess over φBn and 0.005 Ag, the larger (as_dowel_req). */
+export function dowelAreaRequired(site: FootingSite, dem: FootingDemand, f: Pick<FootingDesign, 'L' | 'B' | 'h'>): number {
+  return dowelDemand(dem.Pu, bearingStrength(site, dem, f), site.fy, dem.c1 * dem.c2).asReq;
+}
+
+function dowels(site: FootingSite, dem: FootingDemand, f: FootingDesign, out: Checks): boolean {
+  if (f.dowelBar === undefined || f.nDowel === undefined) return true;
+  const db = barData(f.dowelBar);
+  const avail = f.h - site.cover - 2 * barData(f.bar).dia - db.dia;
+  return out.add('dowels', 'ACI 318-19 §16.3.1.2(a), §16.3.4.1, Table 22.8.3.2', dowelAreaRequired(site, dem, f), f.nDowel * db.area)
+    && out.add('dowel embedment', 'ACI 318-19 §25.4.9.2 (ℓdc, from memory)', ldc(db.dia, site.fy, site.fcFooting),
+      avail > 0 ? ldcAvailFooting(f.h, site.cover, barData(f.bar).dia, db.dia) : 0);
 }
 
 /**
@@ -146,11 +194,9 @@ export function footingChecks(site: FootingSite, dem: FootingDemand, f: FootingD
   }
   const bo = boPunch(dem.c1, dem.c2, d, 'interior');
   const vc2 = punchingStrength(site.fcFooting, dem.c1, dem.c2, d, 'interior', 1, site.edition).vc;
-  const Ag = dem.c1 * dem.c2;
   void (out.add('two-way shear', 'ACI 318-19 §22.6.1.2, §13.2.7.2', vuPunchFooting(dem.Pu, f.B, f.L, dem.c1, dem.c2, d), phiAction('shear') * vc2 * bo * d)
     && direction('x', site, dem, f, d, out) && direction('y', site, dem, f, d, out)
-    && out.add('bearing on the footing', 'ACI 318-19 §22.8.3.2', dem.Pu, phiBnBearing(site.fcFooting, Ag, a2Frustum(dem.c1, dem.c2, f.L, f.B, f.h)))
-    && out.add('bearing on the column', 'ACI 318-19 §22.8.3.2', dem.Pu, phiBnBearing(site.fcColumn, Ag)));
+    && dowels(site, dem, f, out));
   return out.list;
 }
 

@@ -1,22 +1,23 @@
-// Sizing a square spread footing: the smallest plan side in the engineer's step for which
-// some thickness passes every check, then the smallest thickness in its own step at that
-// side, then the bars: of the bar sizes allowed, the one with the least steel (ties: fewer
-// bars) that passes every check. So one step smaller in plan fails a check at every
-// thickness, and one step thinner fails a check with every bar (the property the tests hold
-// it to). A footing of fixed size is only checked (bars chosen when not given).
+// Sizing a spread footing: the smallest plan in the engineer's step (square by default; or
+// L/B held to a ratio, or B held to a width the site allows, L growing) for which some
+// thickness passes every check, then the smallest thickness in its own step at that plan,
+// then the bars: of the bar sizes allowed, the one with the least steel (ties: fewer bars)
+// that passes every check, with the dowels the bearing excess needs. So one step smaller in
+// plan fails a check at every thickness, and one step thinner fails a check with every bar
+// (the property the tests hold it to). A footing of fixed size is only checked (bars chosen
+// when not given).
 //
 // Thickness starts where the depth above the bars can reach 6 in (ACI 318-19 §13.3.1.2) and
 // stops at the base depth Df (the footing cannot rise above grade).
 
 import { asFooting, muFooting } from '../library/footing-flexure';
-import { sMaxSlab } from '../library/reinforcement-limits';
 import { barData } from '../library/rebar';
 import { LibraryError } from '../library/types';
 import { aReqFooting } from '../library/footing-area';
-import { phiBnBearing } from '../library/footing-bearing';
+import { barsNeeded, footingSMax } from './footing-bars';
 import { inch } from '../units/si';
 import {
-  firstFailure, footingChecks, footingDepth, governing, netPressure, passes,
+  dowelAreaRequired, firstFailure, footingChecks, footingDepth, governing, netPressure, passes,
   type FootingCheck, type FootingDemand, type FootingDesign, type FootingSite,
 } from './footing-checks';
 
@@ -27,6 +28,24 @@ export interface SizingRules {
   thicknessStep: number;
   /** Bar sizes allowed, e.g. ["#5", "#6", "#7", "#8"]. */
   bars: readonly string[];
+  /** Plan shape sought (square when absent). */
+  shape?: FootingShape;
+  /** Dowel bar size (#7 when absent, as the template). */
+  dowelBar?: string;
+}
+
+/** The plans a search walks through: square; L = ratio·B (rounded up to the step); or B fixed, L sized. */
+export type FootingShape = { kind: 'square' } | { kind: 'aspect'; ratio: number } | { kind: 'width'; B: number };
+
+export const DEFAULT_DOWEL = '#7';
+/** At least four dowels, one at each corner of the column (common practice). */
+export const MIN_DOWELS = 4;
+
+/** Plan number k of a shape (L along x, B along y). */
+export function planAt(shape: FootingShape | undefined, k: number, step: number): { L: number; B: number } {
+  if (!shape || shape.kind === 'square') return { L: k * step, B: k * step };
+  if (shape.kind === 'aspect') return { L: Math.ceil((shape.ratio * k * step) / step - 1e-9) * step, B: k * step };
+  return { L: k * step, B: shape.B };
 }
 
 export const DEFAULT_STEPS = { planStep: 3 * inch, thicknessStep: 1 * inch } as const;
@@ -40,13 +59,12 @@ export interface FootingResult {
 
 export type SizingOutcome = ({ sized: true } & FootingResult) | { sized: false; reason: string; check?: FootingCheck };
 
-/** Bars each way for a footing of given size: `bar`, enough for the moment, the minimum and the greatest spacing. */
-export function barsFor(site: FootingSite, dem: FootingDemand, L: number, B: number, h: number, bar: string): FootingDesign | undefined {
-  const { area, dia } = barData(bar);
+/** Bars each way for a footing of given size: `bar`, enough for the moment, the minimum and the greatest spacing; dowels for the bearing excess. */
+export function barsFor(site: FootingSite, dem: FootingDemand, L: number, B: number, h: number, bar: string, dowelBar = DEFAULT_DOWEL): FootingDesign | undefined {
   const d = footingDepth(site, h, bar);
   if (d <= 0 || L <= dem.c1 || B <= dem.c2) return undefined;
-  const sMax = sMaxSlab(h, 'two-way');
-  const count = (span: number, width: number, c: number) => {
+  const sMax = footingSMax(site, h);
+  const count = (axis: 'x' | 'y', span: number, width: number, c: number) => {
     let As: number;
     try {
       As = asFooting(muFooting(dem.Pu, width, span, c), width, d, h, site.fcFooting, site.fy, 0.9, site.edition);
@@ -54,22 +72,26 @@ export function barsFor(site: FootingSite, dem: FootingDemand, L: number, B: num
       if (e instanceof LibraryError) return undefined; // too shallow for the moment: flexure fails
       throw e;
     }
-    const bySpacing = Math.ceil((width - 2 * site.cover - dia) / sMax - 1e-9) + 1;
-    return Math.max(Math.ceil(As / area - 1e-9), bySpacing, 2);
+    return barsNeeded(site, { L, B, bar }, axis, As, sMax);
   };
-  const nx = count(L, B, dem.c1);
-  const ny = count(B, L, dem.c2);
+  const nx = count('x', L, B, dem.c1);
+  const ny = count('y', B, L, dem.c2);
   if (nx === undefined || ny === undefined) return undefined;
-  return { L, B, h, bar, nx, ny };
+  const nDowel = Math.max(MIN_DOWELS, Math.ceil(dowelAreaRequired(site, dem, { L, B, h }) / barData(dowelBar).area - 1e-9));
+  const design: FootingDesign = { L, B, h, bar, nx: nx.n, ny: ny.n, dowelBar, nDowel };
+  // the short-direction bars of a rectangular footing say how many lie in the band
+  if (nx.nBand !== nx.n) design.nBand = nx.nBand;
+  if (ny.nBand !== ny.n) design.nBand = ny.nBand;
+  return design;
 }
 
 /** The passing design with the least steel at this size, or the least-bad failure. */
-export function chooseBars(site: FootingSite, dem: FootingDemand, L: number, B: number, h: number, bars: readonly string[]): FootingResult {
+export function chooseBars(site: FootingSite, dem: FootingDemand, L: number, B: number, h: number, bars: readonly string[], dowelBar = DEFAULT_DOWEL): FootingResult {
   let best: FootingResult | undefined;
   let leastBad: FootingResult | undefined;
   const steel = (f: FootingDesign) => (f.nx * f.B + f.ny * f.L) * barData(f.bar).area;
   for (const bar of bars) {
-    const design = barsFor(site, dem, L, B, h, bar) ?? { L, B, h, bar, nx: 2, ny: 2 };
+    const design = barsFor(site, dem, L, B, h, bar, dowelBar) ?? { L, B, h, bar, nx: 2, ny: 2 };
     const checks = footingChecks(site, dem, design);
     const r: FootingResult = { design, checks, governing: governing(checks), ok: passes(checks) };
     if (r.ok) {
@@ -84,9 +106,9 @@ export function chooseBars(site: FootingSite, dem: FootingDemand, L: number, B: 
 }
 
 /** Does some allowed bar pass every check at this size? (stops at the first that does) */
-function anyBarPasses(site: FootingSite, dem: FootingDemand, L: number, B: number, h: number, bars: readonly string[]): boolean {
+function anyBarPasses(site: FootingSite, dem: FootingDemand, L: number, B: number, h: number, bars: readonly string[], dowelBar: string): boolean {
   for (const bar of bars) {
-    const design = barsFor(site, dem, L, B, h, bar);
+    const design = barsFor(site, dem, L, B, h, bar, dowelBar);
     if (design && !firstFailure(footingChecks(site, dem, design, true))) return true;
   }
   return false;
@@ -102,10 +124,32 @@ function thicknesses(site: FootingSite, rules: SizingRules): number[] {
   return out;
 }
 
-/** Size a square footing for one column (see the header). */
+/** The first plan number k whose plan is no smaller than `area` and wider than the column both ways. */
+function firstPlan(shape: FootingShape | undefined, step: number, area: number, dem: FootingDemand): number | undefined {
+  if (shape?.kind === 'width' && shape.B <= dem.c2) return undefined;
+  const fits = (k: number) => {
+    const p = planAt(shape, k, step);
+    return p.L * p.B >= area * (1 - 1e-12) && p.L > dem.c1 && p.B > dem.c2;
+  };
+  // plans grow with k: find a k that fits by doubling, then the least by bisection
+  let hi = 1;
+  while (!fits(hi)) if ((hi *= 2) > 1e7) return undefined;
+  let lo = 0;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (fits(mid)) hi = mid;
+    else lo = mid;
+  }
+  return hi;
+}
+
+/** Size a footing for one column (see the header). */
 export function sizeFooting(site: FootingSite, dem: FootingDemand, rules: SizingRules): SizingOutcome {
   if (rules.bars.length === 0) return { sized: false, reason: 'no bar sizes allowed' };
   if (!(rules.planStep > 0) || !(rules.thicknessStep > 0)) return { sized: false, reason: 'the plan and thickness steps must be greater than 0' };
+  const shape = rules.shape;
+  if (shape?.kind === 'aspect' && !(shape.ratio > 0)) return { sized: false, reason: 'the ratio L/B must be greater than 0' };
+  const dowelBar = rules.dowelBar ?? DEFAULT_DOWEL;
   const hs = thicknesses(site, rules);
   if (hs.length === 0) return { sized: false, reason: 'the base is too shallow for any footing with 6 in above its bars' };
   // The least plan any thickness could need: area at the lightest footing, and wider than the column.
@@ -114,36 +158,36 @@ export function sizeFooting(site: FootingSite, dem: FootingDemand, rules: Sizing
   const q0 = netPressure(site, areaFallsWithH ? hs[0] : hs[hs.length - 1]);
   if (q0 === undefined) return { sized: false, reason: 'no soil pressure is left for the column at the thinnest footing' };
   const step = rules.planStep;
-  const first = Math.max(Math.ceil(Math.sqrt(aReqFooting(dem.Ps, q0)) / step - 1e-9), Math.ceil((Math.max(dem.c1, dem.c2) + 1e-6) / step));
-  // Bearing on the column does not depend on the footing: no size can mend it.
-  const colBearing = phiBnBearing(site.fcColumn, dem.c1 * dem.c2);
-  if (dem.Pu > colBearing * (1 + 1e-9)) {
-    return { sized: false, reason: 'bearing on the column fails whatever the footing (dowels must carry the excess)', check: { name: 'bearing on the column', clause: 'ACI 318-19 §22.8.3.2', demand: dem.Pu, capacity: colBearing, ratio: dem.Pu / colBearing } };
-  }
+  const first = firstPlan(shape, step, aReqFooting(dem.Ps, q0), dem);
+  if (first === undefined) return { sized: false, reason: 'the fixed width is no wider than the column' };
   // Past 10 ft wider than the area needs, a spread footing is no longer the answer.
   const lastK = first + Math.ceil((10 * 12 * inch) / step);
   for (let k = first; k <= lastK; k++) {
-    const B = k * step;
+    const { L, B } = planAt(shape, k, step);
     for (const h of hs) {
       const q = netPressure(site, h);
-      if (q === undefined || aReqFooting(dem.Ps, q) > B * B * (1 + 1e-9)) {
+      if (q === undefined || aReqFooting(dem.Ps, q) > L * B * (1 + 1e-9)) {
         if (areaFallsWithH) break;
         continue;
       }
-      if (anyBarPasses(site, dem, B, B, h, rules.bars)) return { sized: true, ...chooseBars(site, dem, B, B, h, rules.bars) };
+      if (anyBarPasses(site, dem, L, B, h, rules.bars, dowelBar)) return { sized: true, ...chooseBars(site, dem, L, B, h, rules.bars, dowelBar) };
     }
   }
-  const limit = lastK * step;
-  const last = chooseBars(site, dem, limit, limit, hs[hs.length - 1], rules.bars);
-  return { sized: false, reason: `no footing up to ${(limit / inch / 12).toFixed(1)} ft square and ${(site.Df / inch).toFixed(0)} in thick passes ${last.governing.name}`, check: last.governing };
+  const limit = planAt(shape, lastK, step);
+  const last = chooseBars(site, dem, limit.L, limit.B, hs[hs.length - 1], rules.bars, dowelBar);
+  const ftIn = (v: number) => (v / inch / 12).toFixed(1);
+  return { sized: false, reason: `no footing up to ${ftIn(limit.L)} × ${ftIn(limit.B)} ft and ${(site.Df / inch).toFixed(0)} in thick passes ${last.governing.name}`, check: last.governing };
 }
 
 /** Check a footing of fixed size; bars chosen from `bars` when the design gives none. */
-export function checkFooting(site: FootingSite, dem: FootingDemand, f: Omit<FootingDesign, 'bar' | 'nx' | 'ny'> & Partial<FootingDesign>, bars: readonly string[]): FootingResult {
+export function checkFooting(site: FootingSite, dem: FootingDemand, f: Omit<FootingDesign, 'bar' | 'nx' | 'ny'> & Partial<FootingDesign>, bars: readonly string[], dowelBar = DEFAULT_DOWEL): FootingResult {
   if (f.bar !== undefined && f.nx !== undefined && f.ny !== undefined) {
-    const design = f as FootingDesign;
+    const given = f as FootingDesign;
+    // dowels the engineer did not give are chosen as for a sized footing
+    const design = given.nDowel !== undefined ? given : { ...given, dowelBar: given.dowelBar ?? dowelBar,
+      nDowel: Math.max(MIN_DOWELS, Math.ceil(dowelAreaRequired(site, dem, given) / barData(given.dowelBar ?? dowelBar).area - 1e-9)) };
     const checks = footingChecks(site, dem, design);
     return { design, checks, governing: governing(checks), ok: passes(checks) };
   }
-  return chooseBars(site, dem, f.L, f.B, f.h, f.bar !== undefined ? [f.bar] : bars);
+  return chooseBars(site, dem, f.L, f.B, f.h, f.bar !== undefined ? [f.bar] : bars, f.dowelBar ?? dowelBar);
 }
