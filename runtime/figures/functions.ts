@@ -10,18 +10,22 @@ import { criticalSection, boPunch, POSITIONS, position } from '../library/punchi
 import { BARS, barDia } from '../library/rebar';
 import { choice, finite, nonNegative, positive } from '../library/support-args';
 import { SECTION_PARAMS, interactionCurve, momentStrengthAt, pmRatio, sectionOf } from '../library/column-interaction';
-import { LibraryError, type LibFunction, type LibParam } from '../library/types';
+import { LibraryError, type ArgsOf, type LibFunction, type LibParam, type SameCount } from '../library/types';
 import { EDGE_DOC } from '../plate/edges';
 import type { FigureSpec, FootingSpec, InteractionSpec, LoadPathSpec, PlateField, PlateSpec, PunchingSpec } from './spec';
 
 /** A figure function: typed like a library function, returning a spec (units filled in by the engine). */
-export interface FigureFunction {
-  name: string;
-  params: LibParam[];
-  optional?: number;
-  clause: string;
-  doc: string;
-  build: (...args: any[]) => FigureSpec;
+export type FigureFunction = LibFunction<FigureSpec>;
+
+/**
+ * A figure function with its params and its builder kept in step, as defineFunction keeps
+ * a library function's: one argument per param, of the param's type; its result is a figure.
+ */
+export function defineFigure<const Ps extends readonly LibParam[], F extends (...args: ArgsOf<Ps>) => FigureSpec>(
+  def: Omit<FigureFunction, 'params' | 'fn' | 'returns'> & { params: Ps; build: F & SameCount<Ps, F> },
+): FigureFunction {
+  const { build, ...rest } = def;
+  return { ...rest, params: [...def.params], returns: 'figure', fn: build };
 }
 
 const BLANK = { units: {}, system: 'US' as const };
@@ -111,11 +115,12 @@ export function interactionDiagram(pu: number, mu: number, fc: number, fy: numbe
   };
 }
 
-const P = (name: string, type: string, doc: string, choices?: readonly string[]): LibParam =>
+/** A param, its type kept as written ('m', 'text') so defineFigure can check the builder against it. */
+const P = <const T extends string>(name: string, type: T, doc: string, choices?: readonly string[]): { name: string; type: T; doc: string; choices?: readonly string[] } =>
   choices ? { name, type, doc, choices } : { name, type, doc };
 
 export const FIGURE_FUNCTIONS: readonly FigureFunction[] = [
-  {
+  defineFigure({
     name: 'punching_plan',
     params: [
       P('c1', 'm', 'column side perpendicular to the slab edge'), P('c2', 'm', 'column side parallel to the slab edge'),
@@ -128,8 +133,8 @@ export const FIGURE_FUNCTIONS: readonly FigureFunction[] = [
     clause: 'ACI 318-19 §22.6.4.1 (critical sections at d/2)',
     doc: 'Plan of the column with the punching critical section at d/2 (and outside the drop panel)',
     build: punchingPlan,
-  },
-  {
+  }),
+  defineFigure({
     name: 'footing_drawing',
     params: [
       P('B', 'm', 'footing width (drawn vertical)'), P('L', 'm', 'footing length (drawn horizontal, the section cut)'),
@@ -140,8 +145,8 @@ export const FIGURE_FUNCTIONS: readonly FigureFunction[] = [
     clause: 'ACI 318-19 §13.2.7 (critical sections), §22.6.4.1',
     doc: 'Plan and section of a spread footing to scale: column, shear sections, bars, soil pressure',
     build: footingDrawing,
-  },
-  {
+  }),
+  defineFigure({
     name: 'plate_map',
     params: [
       P('a', 'm', 'span along x'), P('b', 'm', 'span along y'), P('edges', 'text', EDGE_DOC),
@@ -153,8 +158,8 @@ export const FIGURE_FUNCTIONS: readonly FigureFunction[] = [
     clause: 'Kirchhoff plate, conforming finite elements (Loadtrace), cf. Timoshenko & Woinowsky-Krieger Tables 8 and 35',
     doc: 'Shaded map with contours of deflection or moment over a panel, with the load share of each edge',
     build: plateMap,
-  },
-  {
+  }),
+  defineFigure({
     name: 'load_path',
     params: [
       P('floors', '1', 'floor levels supported above the lowest storey’s foot (roof not counted)'),
@@ -170,19 +175,16 @@ export const FIGURE_FUNCTIONS: readonly FigureFunction[] = [
     clause: "ASCE 7-22 §2.3.1, §2.4.1 (edition '7-16': ASCE 7-16) on loads accumulated per ASCE 7-22 §4.7",
     doc: 'Elevation of the column from roof to footing with the axial load accumulated at each level',
     build: loadPath,
-  },
-  {
+  }),
+  defineFigure({
     name: 'interaction_diagram',
     params: [P('Pu', 'N', 'factored axial load (compression positive)'), P('Mu', 'N*m', 'factored moment about the same axis'), ...SECTION_PARAMS],
     optional: 1,
     clause: 'ACI 318-19 §22.2 (strain compatibility), Table 21.2.2 (φ from εt), §22.4.2.1 (φPn,max)',
     doc: 'P–M interaction diagram of a tied rectangular column, nominal and design, with the factored demand',
     build: interactionDiagram,
-  },
+  }),
 ];
 
-/** The figure functions in the form the formula compiler checks (result type 'figure'). */
-export const figureLibrary: readonly LibFunction[] = FIGURE_FUNCTIONS.map((f) => ({
-  name: f.name, params: f.params, optional: f.optional, returns: 'figure', clause: f.clause, doc: f.doc,
-  fn: f.build as unknown as LibFunction['fn'],
-}));
+/** The figure functions as the formula compiler takes them (result type 'figure'). */
+export const figureLibrary: readonly FigureFunction[] = FIGURE_FUNCTIONS;

@@ -13,7 +13,7 @@ import { describeType, NUMBER, sameType, type VType } from './value-type';
  * Syntax and forbidden constructs only, with every name taken as a pure number:
  * used where a full compile cannot run (a cell inside a loop).
  */
-export function structuralProblem(source: string, functions: ReadonlyMap<string, LibFunction>): CellError | undefined {
+export function structuralProblem(source: string, functions: ReadonlyMap<string, LibFunction<unknown>>): CellError | undefined {
   const scope: CompileScope = {
     lookup: (name) => ({ key: name, type: NUMBER }),
     isCell: () => true,

@@ -32,12 +32,12 @@ export interface CompileScope {
   names(): Iterable<string>;
   /** What a suggested name is ("the input d, Effective depth"), so a look-alike is not taken for the one meant. */
   describe?(name: string): string | undefined;
-  functions: ReadonlyMap<string, LibFunction>;
+  functions: ReadonlyMap<string, LibFunction<unknown>>;
   /**
    * Only when the working of a cell's calls is asked for: the function a library call
    * runs, given the function and the types of its arguments (their units as written).
    */
-  wrapLibrary?(lib: LibFunction, argTypes: readonly VType[]): LibFunction['fn'];
+  wrapLibrary?(lib: LibFunction<unknown>, argTypes: readonly VType[]): LibFunction<unknown>['fn'];
 }
 
 
@@ -64,7 +64,7 @@ const NOT_FORMULA_WORDS: Record<string, string> = {
 };
 
 /** "there is no function sum": with the nearest name, or what exists. */
-function unknownFunction(name: string, functions: ReadonlyMap<string, LibFunction>): string {
+function unknownFunction(name: string, functions: ReadonlyMap<string, LibFunction<unknown>>): string {
   if (NOT_FORMULA_WORDS[name]) return `"${name}" is not part of the formula language: ${NOT_FORMULA_WORDS[name]}`;
   if (name === 'sum') return 'there is no function "sum": add the terms with +, e.g. PD + PL';
   const near = nearestName(name, [...BUILTINS.keys(), ...functions.keys()]);
@@ -333,7 +333,7 @@ export class Compiler {
     return this.library(lib, args, name);
   }
 
-  private library(lib: LibFunction, args: CNode[], name: string): CNode {
+  private library(lib: LibFunction<unknown>, args: CNode[], name: string): CNode {
     const max = lib.params.length;
     const min = max - (lib.optional ?? 0);
     if (args.length < min || args.length > max) {
@@ -376,7 +376,7 @@ export class Compiler {
   }
 }
 
-export function signatureOf(lib: LibFunction): string {
+export function signatureOf(lib: LibFunction<unknown>): string {
   const req = lib.params.length - (lib.optional ?? 0);
   return `${lib.name}(${lib.params.map((p, i) => (i >= req ? `[${p.name}]` : p.name)).join(', ')})`;
 }

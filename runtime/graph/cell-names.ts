@@ -53,7 +53,7 @@ export class CellNames {
   }
 
   /** The scope a formula in `source` compiles in. */
-  scopeFor(source: string, functions: ReadonlyMap<string, LibFunction>): CompileScope {
+  scopeFor(source: string, functions: ReadonlyMap<string, LibFunction<unknown>>): CompileScope {
     return {
       functions,
       isCell: (name) => this.owners().has(name),

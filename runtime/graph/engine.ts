@@ -63,7 +63,7 @@ class DocEngine implements Engine {
   private readonly functions: ReadonlyMap<string, LibFunction>;
   private readonly functionNames: ReadonlySet<string>;
   /** The library plus the figure functions, which only figure cells may call. */
-  private readonly figureFunctions: ReadonlyMap<string, LibFunction>;
+  private readonly figureFunctions: ReadonlyMap<string, LibFunction<unknown>>;
   private readonly notifier = new Notifier((changed) => this.addReaders(changed));
   private cycleMembers = new Map<string, string>();
   /** name → ids of the cells whose source mentions it. */
@@ -76,7 +76,7 @@ class DocEngine implements Engine {
   constructor(doc: CalcDocument, options: EngineOptions) {
     const fns = options.functions ?? [];
     this.functions = new Map(fns.map((f) => [f.name, f]));
-    this.figureFunctions = new Map([...this.functions, ...figureLibrary.map((f) => [f.name, f] as const)]);
+    this.figureFunctions = new Map<string, LibFunction<unknown>>([...this.functions, ...figureLibrary.map((f) => [f.name, f] as const)]);
     this.functionNames = new Set([...BUILTINS.keys(), ...this.figureFunctions.keys()]);
     this.doc = { meta: doc.meta, cells: [] };
     this.update(doc);

@@ -14,7 +14,7 @@ export interface ProgramEnv {
   /** The scope a formula in `source` compiles in: the library, and with `figures` the figure functions too. */
   scope(source: string, figures?: boolean): CompileScope;
   /** The library, for a formula's faults of its own. */
-  functions: ReadonlyMap<string, LibFunction>;
+  functions: ReadonlyMap<string, LibFunction<unknown>>;
   /** Display unit of the cell a (mathjs) node names, if it is a bare name; '' otherwise. */
   unitOfNode(node: MathNode): string;
   /** Display unit of the cell of this name ('' when none). */

@@ -5,7 +5,7 @@
 import type { LibFunction, LibValue } from './types';
 
 export interface LibraryCall {
-  lib: LibFunction;
+  lib: LibFunction<unknown>;
   args: LibValue[];
   /** The unit each argument was written in, when the formula says (`5000 psi`, a cell's unit). */
   units: (string | undefined)[];

@@ -23,7 +23,12 @@ export interface LibParam {
 
 export type LibValue = number | string | boolean;
 
-export interface LibFunction {
+/**
+ * A function a formula calls. Its result is a value (LibValue) for the structural library;
+ * a figure function's is a figure spec (runtime/figures/functions.ts), and code that takes
+ * either (the formula compiler, the working) reads LibFunction<unknown>.
+ */
+export interface LibFunction<R = LibValue> {
   /** Name as called in formulas: a short trade symbol, lower_snake (e.g. `beta1`, `punch_bo`). */
   name: string;
   params: LibParam[];
@@ -39,7 +44,7 @@ export interface LibFunction {
    * formula compiles; undefined for a left-out optional one). Method syntax: each
    * function declares its own argument types, kept in step by defineFunction.
    */
-  fn(...args: unknown[]): LibValue;
+  fn(...args: unknown[]): R;
 }
 
 /** An error a library function raises about its arguments; shown at the calling cell. */
@@ -58,11 +63,11 @@ type ArgOf<P> = P extends { type: infer T }
       : T extends 'bool' ? boolean : number
   : never;
 /** One argument per param; params built from an array of unknown length are not checked. */
-type ArgsOf<Ps extends readonly LibParam[]> = number extends Ps['length'] ? never[] : { -readonly [I in keyof Ps]: ArgOf<Ps[I]> };
+export type ArgsOf<Ps extends readonly LibParam[]> = number extends Ps['length'] ? never[] : { -readonly [I in keyof Ps]: ArgOf<Ps[I]> };
 
 /** The function takes exactly as many arguments as there are params (optional ones included). */
 type ArgCount<F> = F extends (...args: infer A) => unknown ? Required<A>['length'] : never;
-type SameCount<Ps extends readonly LibParam[], F> =
+export type SameCount<Ps extends readonly LibParam[], F> =
   number extends Ps['length'] ? unknown
     : ArgCount<F> extends Ps['length'] ? unknown
       : { error: 'the function takes another number of arguments than there are params' };

@@ -5,7 +5,7 @@
 // so in words, not by colour alone; its clause stands in the margin.
 
 import { figureLibrary } from '../figures/functions';
-import { renderFigure, type FigureSpec } from '../figures/render';
+import { renderFigure } from '../figures/render';
 import type { LibValue } from '../library/types';
 import { escapeHtml } from '../record/escape';
 import type { UnitSystem } from '../units/systems';
@@ -29,7 +29,7 @@ function figureHtml(fn: string, args: readonly LibValue[]): string {
   const f = figureLibrary.find((x) => x.name === fn);
   if (!f) return '';
   try {
-    return `<figure class="lt-wk-fig">${renderFigure(f.fn(...args) as unknown as FigureSpec)}</figure>`;
+    return `<figure class="lt-wk-fig">${renderFigure(f.fn(...args))}</figure>`;
   } catch {
     return ''; // a figure that cannot be drawn for these values is left out; the steps stand
   }

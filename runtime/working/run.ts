@@ -49,12 +49,14 @@ export function shownArg(type: ValueType, v: LibValue, unit?: string): Shown {
  * Runs `lib` on `args` under a recorder. `units` are the US (or SI) units the formula wrote
  * each argument in, when known. The function's own result is the working's value.
  */
-export function workingOf(lib: LibFunction, args: readonly LibValue[], units: readonly (string | undefined)[] = []): Working {
+export function workingOf(lib: LibFunction<unknown>, args: readonly LibValue[], units: readonly (string | undefined)[] = []): Working {
   const inputs = lib.params.slice(0, args.length).map((p, i) => ({ name: p.name, value: shownArg(p.type, args[i], units[i]) }));
   const root: Group = { kind: 'group', fn: lib.name, inputs, entries: [], clause: lib.clause };
   const rec = new Recorder(root, new Map(inputs.map((i) => [i.name, i.value])));
   try {
     const value = withRecorder(rec, () => lib.fn(...args));
+    // A figure function (LibFunction<FigureSpec>) gives a drawing: it has no working of values.
+    if (typeof value !== 'number' && typeof value !== 'string' && typeof value !== 'boolean') throw new Error(`${lib.name} gives no value`);
     root.value = value;
     const last = lastEntry(root);
     root.unit = last?.unit

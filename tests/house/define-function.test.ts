@@ -1,9 +1,13 @@
-// defineFunction keeps a library function's params and its arguments in step: each
-// `@ts-expect-error` below is a definition the compiler refuses (npm test's typecheck
-// fails if one of them compiles), and the last is one it accepts.
+// defineFunction keeps a library function's params and its arguments in step, and
+// defineFigure a figure function's: each `@ts-expect-error` below is a definition the
+// compiler refuses (npm test's typecheck fails if one of them compiles), and the last of
+// each is one it accepts.
 
 import { describe, expect, it } from 'vitest';
+import { defineFigure } from '../../runtime/figures/functions';
+import type { FigureSpec } from '../../runtime/figures/spec';
 import { defineFunction } from '../../runtime/library/types';
+import { workingOf } from '../../runtime/working/run';
 
 const base = { returns: 'm', clause: 'test', doc: 'test' };
 
@@ -32,5 +36,29 @@ describe('defineFunction', () => {
     });
     expect(f.fn(2, 'edge', true)).toBe(2);
     expect(f.params.map((p) => p.name)).toEqual(['x', 'p', 'b']);
+  });
+});
+
+describe('defineFigure', () => {
+  const figure = { clause: 'test', doc: 'test' };
+  const spec = (b: number): FigureSpec => ({ figure: 'footing', units: {}, system: 'US', B: b, L: b, h: 1, c1: 0.1, c2: 0.1, d: 0.5, bar: '#5', db: 0.016, s: 0.3, qu: 1 });
+
+  it('refuses a builder out of step with its params, or one that gives no figure, at compile time', () => {
+    const wrong = [
+      // @ts-expect-error a 'text' param hands the builder a string, not a number
+      defineFigure({ ...figure, name: 'a', params: [{ name: 'x', type: 'text' }], build: (x: number) => spec(x) }),
+      // @ts-expect-error one argument more than there are params
+      defineFigure({ ...figure, name: 'b', params: [{ name: 'x', type: 'm' }], build: (x: number, y: number) => spec(x + y) }),
+      // @ts-expect-error a figure function gives a figure spec, not a number
+      defineFigure({ ...figure, name: 'c', params: [{ name: 'x', type: 'm' }], build: (x: number) => x }),
+    ];
+    expect(wrong).toHaveLength(3);
+  });
+
+  it('accepts one in step, and marks its result a figure for the compiler', () => {
+    const f = defineFigure({ ...figure, name: 'ok', params: [{ name: 'B', type: 'm' }], build: (b: number) => spec(b) });
+    expect(f.returns).toBe('figure');
+    expect(f.fn(2)).toMatchObject({ figure: 'footing', B: 2 });
+    expect(workingOf(f, [2]).error).toBe('ok gives no value'); // a drawing has no working of values
   });
 });
