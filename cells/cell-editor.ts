@@ -8,7 +8,6 @@ import type { Cell } from '../runtime/document';
 import { cellSource, type CellFields } from '../runtime/edit/index';
 import type { CellState } from '../runtime/engine-types';
 import { describe, type FieldSpec } from '../runtime/kinds/index';
-import { exprOffset } from '../runtime/kinds/shared';
 import { escapeHtml } from '../runtime/present/escape';
 import type { SourceEditor, SourceMark } from './source-editor';
 import { loadSourceEditor } from './source-editor-load';
@@ -154,10 +153,8 @@ export class CellEditor {
       return;
     }
     this.setMessage(e.message);
-    if (e.column !== undefined && this.titleField === undefined) {
-      const from = exprOffset(source) + e.column - 1;
-      this.setMarks([{ from, to: from + 1, message: e.message }]);
-    }
+    const from = e.column === undefined ? undefined : describe(this.cell.kind).source.errorAt(source, e.column);
+    if (from !== undefined) this.setMarks([{ from, to: from + 1, message: e.message }]);
   }
 
   /** After undo/redo the cell may read differently: show its current source. */

@@ -19,7 +19,7 @@ import { unitText } from '../present/units-text';
 import { ratioBarPercent, STATUS_WORDS, statusText } from '../present/words';
 import { HANDCALC_LIMIT, texHtml as mathml } from '../record/tex';
 import { foldedWorkingsHtml } from '../working/sheet';
-import { assignedName, CLAUSE_FIELD, exprRefs, LABEL_FIELD, liveView, renameInCellExpr } from './shared';
+import { assignedName, CLAUSE_FIELD, exprRefs, LABEL_FIELD, liveView, renameInCellExpr, errorInExpr } from './shared';
 import type { KindDescription } from './types';
 
 export interface CheckView extends CellViewBase {
@@ -129,6 +129,7 @@ export const check: KindDescription<'check'> = {
       return { ok: true, value: head ? { name: head.name, expr } : { expr } };
     },
     owns: ['name', 'expr'],
+    errorAt: errorInExpr,
   },
   numbering: 'item',
   program: {

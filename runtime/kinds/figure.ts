@@ -10,7 +10,7 @@ import { liveFrame, renderLabel, statusOf, type CellViewBase, type ViewContext }
 import { recordDrawing } from '../present/drawing';
 import { errorOf, renderError } from '../present/error-line';
 import { marginRefs } from '../present/margin';
-import { CLAUSE_FIELD, exprRefs, LABEL_FIELD, liveView, renameInCellExpr } from './shared';
+import { CLAUSE_FIELD, exprRefs, LABEL_FIELD, liveView, renameInCellExpr, errorInExpr } from './shared';
 import type { KindDescription } from './types';
 
 export interface FigureView extends CellViewBase {
@@ -50,6 +50,7 @@ export const figure: KindDescription<'figure'> = {
       return { ok: true, value: { expr } };
     },
     owns: ['expr'],
+    errorAt: errorInExpr,
   },
   numbering: 'item',
   program: {

@@ -15,7 +15,7 @@ import { longText, resultHtml } from '../present/result';
 import { handCalcHtml } from '../present/tex-live';
 import { HANDCALC_LIMIT, texHtml as mathml } from '../record/tex';
 import { foldedWorkingsHtml } from '../working/sheet';
-import { CLAUSE_FIELD, exprRefs, LABEL_FIELD, liveView, parseAssignment, renameInCellExpr } from './shared';
+import { CLAUSE_FIELD, exprRefs, LABEL_FIELD, liveView, parseAssignment, renameInCellExpr, errorInExpr } from './shared';
 import type { KindDescription } from './types';
 
 /** Record: beyond this many characters of formula the hand calc is set one step a row (a printed line is narrow). */
@@ -97,6 +97,7 @@ export const formula: KindDescription<'formula'> = {
       return p.ok ? { ok: true, value: { name: p.value.name, expr: p.value.rest } } : p;
     },
     owns: ['name', 'expr'],
+    errorAt: errorInExpr,
   },
   numbering: 'item',
   program: {

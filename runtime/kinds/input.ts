@@ -15,7 +15,7 @@ import { done, resultHtml } from '../present/result';
 import { texHtml } from '../present/tex-live';
 import { unitText } from '../present/units-text';
 import { texHtml as mathml } from '../record/tex';
-import { CLAUSE_FIELD, LABEL_FIELD, liveView, parseAssignment } from './shared';
+import { CLAUSE_FIELD, LABEL_FIELD, liveView, parseAssignment, errorInExpr } from './shared';
 import type { KindDescription } from './types';
 
 export interface InputView extends CellViewBase {
@@ -110,6 +110,7 @@ export const input: KindDescription<'input'> = {
       return p.ok ? { ok: true, value: { name: p.value.name, value: p.value.rest } } : p;
     },
     owns: ['name', 'value'],
+    errorAt: errorInExpr,
   },
   numbering: 'item',
   program: {

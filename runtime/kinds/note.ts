@@ -8,7 +8,7 @@ import { escapeHtml } from '../present/escape';
 import { markdownRenderer } from '../present/markdown';
 import { texHtml } from '../present/tex-live';
 import { texHtml as mathml } from '../record/tex';
-import { CLAUSE_FIELD, liveView } from './shared';
+import { CLAUSE_FIELD, liveView, NO_ERROR_COLUMN } from './shared';
 import type { KindDescription } from './types';
 
 export interface NoteView extends CellViewBase {
@@ -53,6 +53,7 @@ export const note: KindDescription<'note'> = {
     // Any text is a note; trailing blank lines are not kept.
     read: (source) => ({ ok: true, value: { text: source.replace(/\s+$/, '') } }),
     owns: ['text'],
+    errorAt: NO_ERROR_COLUMN,
   },
   numbering: 'none',
   program: null,

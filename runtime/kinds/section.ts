@@ -5,7 +5,7 @@ import { sectionFormat } from '../format/kinds/section';
 import { renderLabel, type CellViewBase, type ViewContext } from '../present/cell-frame';
 import { escapeHtml } from '../present/escape';
 import { marginRefs, refsHtml } from '../present/margin';
-import { CLAUSE_FIELD, liveView } from './shared';
+import { CLAUSE_FIELD, liveView, NO_ERROR_COLUMN } from './shared';
 import type { KindDescription } from './types';
 
 export interface SectionView extends CellViewBase {
@@ -43,6 +43,7 @@ export const section: KindDescription<'section'> = {
       return { ok: true, value: { title } };
     },
     owns: ['title'],
+    errorAt: NO_ERROR_COLUMN,
   },
   numbering: 'section',
   program: null,

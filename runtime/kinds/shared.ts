@@ -35,6 +35,14 @@ export function exprOffset(source: string): number {
   return assignedName(source)?.end ?? 0;
 }
 
+/** An engine error's column in the expression (or value) of a `[name =] expr` source, as an offset in the source. */
+export function errorInExpr(source: string, column: number): number {
+  return exprOffset(source) + column - 1;
+}
+
+/** For a kind whose errors point at no column. */
+export const NO_ERROR_COLUMN = (): undefined => undefined;
+
 /** Reads `name = rest`; `what` names the right-hand side in messages. */
 export function parseAssignment(source: string, what: string): ParsedSource<{ name: string; rest: string }> {
   const m = HEAD.exec(source)!;

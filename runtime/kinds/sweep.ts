@@ -14,7 +14,7 @@ import { recordDrawing } from '../present/drawing';
 import { errorOf, renderError } from '../present/error-line';
 import { escapeHtml } from '../present/escape';
 import { marginRefs } from '../present/margin';
-import { CLAUSE_FIELD, LABEL_FIELD, liveView } from './shared';
+import { CLAUSE_FIELD, LABEL_FIELD, liveView, NO_ERROR_COLUMN } from './shared';
 import type { KindDescription, ParsedSource } from './types';
 
 export type SweepFields = Pick<SweepCell, 'input' | 'from' | 'to' | 'outputs'> & { steps?: number };
@@ -84,7 +84,7 @@ export const sweep: KindDescription<'sweep'> = {
   rename: (cell, from, to) => (cell.input !== from && !cell.outputs.includes(from) ? cell
     : { ...cell, input: cell.input === from ? to : cell.input, outputs: cell.outputs.map((o) => (o === from ? to : o)) }),
   format: sweepFormat,
-  source: { mode: 'formula', write: sweepSource, read: parseSweepSource, owns: ['input', 'from', 'to', 'steps', 'outputs'] },
+  source: { mode: 'formula', write: sweepSource, read: parseSweepSource, owns: ['input', 'from', 'to', 'steps', 'outputs'], errorAt: NO_ERROR_COLUMN },
   numbering: 'item',
   program: {
     compile: (cell, env) => sweepProgram(cell, (n) => env.sweepInfo(n), env.whatIf),

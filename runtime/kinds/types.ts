@@ -63,6 +63,12 @@ export interface SourceSpec<C> {
   /** The fields the source sets; `owns` those it may set, and one it leaves out is removed. */
   read(source: string): ParsedSource<Partial<C>>;
   owns: readonly (keyof C)[];
+  /**
+   * Where in the source text (0-based offset) an error the engine found at `column` of the
+   * cell (CellError.column: in its expression or value) is to be marked; undefined for a
+   * kind whose errors point at no column.
+   */
+  errorAt(source: string, column: number): number | undefined;
 }
 
 /** How a kind computes: its program for the reactive graph, and its state from a value. */

@@ -153,6 +153,22 @@ describe('formula', () => {
     expect(renderFormula(v)).toMatch(/<mark class="err-at"/);
   });
 
+  it("marks an engine error in the editor's source where the expression has it", async () => {
+    // The error's column counts in the expression; the editor's source starts with `name = `.
+    const f: Cell = { id: 'f1', kind: 'formula', name: 'M_u', expr: '2 * no_such' };
+    const d: CalcDocument = { meta: emptyMeta(), cells: [f] };
+    const e = createEngine(d);
+    await e.settled();
+    const error = e.state('f1')!.error!;
+    e.dispose();
+    const source = formulaKind.source.write(f);
+    expect(source).toBe('M_u = 2 * no_such');
+    expect(source.slice(formulaKind.source.errorAt(source, error.column!))).toBe('no_such');
+    // A check without a name: the source is the condition itself.
+    expect(checkKind.source.errorAt('w_u <= q', 8)).toBe(7);
+    expect(sectionKind.source.errorAt('Floor loads', 1)).toBeUndefined();
+  });
+
   it('edits expression and name', () => {
     const d = applySource(sheet, 'f1', 'w = 1.4 D');
     expect(d.cells[4]).toMatchObject({ name: 'w', expr: '1.4 D' });
