@@ -7,7 +7,7 @@
 import { figureLibrary } from '../figures/functions';
 import { renderFigure } from '../figures/render';
 import type { LibValue } from '../library/types';
-import { escapeHtml } from '../record/escape';
+import { escapeHtml } from '../present/escape';
 import type { UnitSystem } from '../units/systems';
 import type { LibraryCall } from './calls';
 import { presentWorking, type CallBlock, type WorkingLine } from './present';
