@@ -13,7 +13,7 @@ import { escapeHtml } from '../present/escape';
 import { marginRefs } from '../present/margin';
 import { runTableHtml, runSummaryText } from '../present/run-html';
 import type { RunValue } from '../table/types';
-import { CLAUSE_FIELD, LABEL_FIELD, liveView } from './shared';
+import { CLAUSE_FIELD, LABEL_FIELD, liveView, NO_ERROR_COLUMN } from './shared';
 import type { KindDescription, ParsedSource } from './types';
 
 type RunFields = Pick<RunCell, 'name' | 'table' | 'trace' | 'results'>;
@@ -67,7 +67,7 @@ export const run: KindDescription<'run'> = {
   rename: (cell, from, to) => (cell.table !== from && !cell.results.includes(from) ? cell
     : { ...cell, table: cell.table === from ? to : cell.table, results: cell.results.map((r) => (r === from ? to : r)) }),
   format: runFormat,
-  source: { mode: 'formula', write: runSource, read: parseRunSource, owns: ['name', 'table', 'trace', 'results'] },
+  source: { mode: 'formula', write: runSource, read: parseRunSource, owns: ['name', 'table', 'trace', 'results'], errorAt: NO_ERROR_COLUMN },
   numbering: 'item',
   program: {
     compile: (cell, env) => runProgram(cell, { cells: () => env.cells(), named: (n) => env.sweepInfo(n), graph: env.whatIf }),

@@ -12,7 +12,7 @@ import { escapeHtml } from '../present/escape';
 import { marginRefs } from '../present/margin';
 import { liveTableHtml, recordTableHtml } from '../present/table-html';
 import type { TableProblem } from '../table/types';
-import { CLAUSE_FIELD, LABEL_FIELD, liveView } from './shared';
+import { CLAUSE_FIELD, LABEL_FIELD, liveView, NO_ERROR_COLUMN } from './shared';
 import type { KindDescription, ParsedSource } from './types';
 
 /** The table's source: `name`, then `column NAME TYPE` lines, then `| a | b` rows. */
@@ -69,7 +69,7 @@ export const table: KindDescription<'table'> = {
   refs: () => [],
   rename: (cell) => cell,
   format: tableFormat,
-  source: { mode: 'note', write: tableSource, read: parseTableSource, owns: ['name', 'columns', 'rows'] },
+  source: { mode: 'note', write: tableSource, read: parseTableSource, owns: ['name', 'columns', 'rows'], errorAt: NO_ERROR_COLUMN },
   numbering: 'item',
   program: {
     compile: (cell, env) => tableProgram(cell, env.previous),
