@@ -26,7 +26,16 @@ type Wrapped = 'open' | 'apply' | 'undo' | 'redo';
  * change of sheet goes through (open, apply, undo, redo) are wrapped on this one
  * instance, and each new engine is followed for its results.
  */
+const hosts = new WeakMap<App, ReviewHost>();
+
+/** The one host of an App (the review and the record line both follow it; its methods are wrapped once). */
 export function appHost(app: App): ReviewHost {
+  let host = hosts.get(app);
+  if (!host) hosts.set(app, (host = makeHost(app)));
+  return host;
+}
+
+function makeHost(app: App): ReviewHost {
   const listeners: (() => void)[] = [];
   let queued = false;
   const notify = (): void => {

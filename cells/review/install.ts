@@ -6,13 +6,15 @@
 import './review.css';
 import type { CalcDocument } from '../../runtime/document';
 import {
-  addComment, compare, latestRevision, reply, resolve, returnToBaseline, signOff, withdrawSignOff,
+  addComment, compare, latestRevision, reply, resolve, returnToBaseline, withdrawSignOff, type ResultLookup,
 } from '../../runtime/review/index';
 import type { App } from '../app';
 import { nowStamp, openCompareDialog, openIssueDialog, today } from './dialogs';
 import { appHost, type ReviewHost } from './host';
 import { logHtml, panelHtml, signoffLine, threadHtml, titleExtrasHtml } from './render';
 import { cellMarks } from './tables';
+import { reviewMode } from './mode';
+import { openSignoffDialog } from './signoff-dialog';
 
 const NAME_KEY = 'loadtrace-reviewer';
 
@@ -109,11 +111,14 @@ export function installOn(host: ReviewHost): ReviewHooks {
     const engine = host.engine();
     const latest = latestRevision(doc);
     const cmp = reviewing && latest && engine ? compare(doc, (id) => engine.state(id)) : undefined;
+    // Results only once every cell has one: a sign-off is not called stale mid-recompute.
+    const results: ResultLookup | undefined = engine && !doc.cells.some((c) => engine.state(c.id)?.status === 'pending')
+      ? (id) => engine.state(id) : undefined;
     document.body.classList.toggle('rv-reviewing', reviewing);
     document.body.classList.toggle('rv-only-changed', reviewing && onlyChanged && !!cmp);
-    put(panel, reviewing ? panelHtml({ doc, latest, comparison: cmp, onlyChanged, userName, today: today() }) : '');
+    put(panel, reviewing ? panelHtml({ doc, latest, comparison: cmp, onlyChanged, userName, today: today(), results }) : '');
     put(log, logHtml(doc));
-    put(titleLine, titleExtrasHtml(doc));
+    put(titleLine, titleExtrasHtml(doc, results));
 
     const diffs = cmp && latest ? cellMarks(cmp, latest.label) : new Map<string, string>();
     const changed = new Set(diffs.keys());
@@ -122,7 +127,7 @@ export function installOn(host: ReviewHost): ReviewHooks {
     for (const cell of doc.cells) {
       let diff = diffs.get(cell.id) ?? '';
       if (cell.kind === 'section') {
-        diff += signoffs.filter((s) => s.scope === cell.id).map((s) => signoffLine(doc, s, false)).join(' ');
+        diff += signoffs.filter((s) => s.scope === cell.id).map((s) => signoffLine(doc, s, false, results)).join(' ');
       }
       const own = comments.filter((c) => c.cellId === cell.id);
       const talk = threadHtml(cell.id, own, expanded.has(cell.id), reviewing, userName);
@@ -186,10 +191,9 @@ export function installOn(host: ReviewHost): ReviewHooks {
         case 'reply':
           if (!get('text')) return;
           return apply(reply(doc, form.dataset.comment!, { author, time: nowStamp(), text: get('text') }), 'Reply added');
-        case 'signoff': {
-          const scope = get('scope');
-          return apply(signOff(doc, { scope, by: author, date: get('date') || today() }).doc, 'Signed off');
-        }
+        case 'signoff':
+          // Says what is signed and what is not in order before anything is recorded.
+          return void openSignoffDialog(host, { scope: get('scope'), by: author, date: get('date') || today() });
       }
     } catch (e) {
       host.status((e as Error).message);
@@ -235,6 +239,7 @@ export function installOn(host: ReviewHost): ReviewHooks {
 
   function setReviewing(on: boolean): void {
     reviewing = on;
+    reviewMode.set(on);
     reviewButton.setAttribute('aria-pressed', String(on));
     reviewButton.classList.toggle('rv-on', on);
     render();

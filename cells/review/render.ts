@@ -3,8 +3,8 @@
 // sheet. Strings from escaped text; the page (install.ts) places them.
 
 import type { CalcDocument } from '../../runtime/document';
-import type { Comparison } from '../../runtime/review/index';
-import { isStale } from '../../runtime/review/index';
+import type { Comparison, ResultLookup } from '../../runtime/review/index';
+import { findingsCount, isStale, signedStateText } from '../../runtime/review/index';
 import type { Comment, Revision, SignOff } from '../../runtime/review/types';
 import { escapeHtml } from '../../runtime/present/escape';
 import { changeCount, comparisonHtml } from './tables';
@@ -21,10 +21,15 @@ export function scopeText(doc: CalcDocument, s: SignOff): string {
   return s.scope === 'document' ? 'the whole record' : `section “${sectionTitle(doc, s.scope)}”`;
 }
 
-/** One sign-off as a line: who, when, and whether what it covers changed since. */
-export function signoffLine(doc: CalcDocument, s: SignOff, withScope: boolean): string {
-  const stale = isStale(s, doc);
-  const who = `${escapeHtml(s.by)}, ${escapeHtml(s.date)}${s.revision !== undefined ? ` (Rev ${escapeHtml(s.revision)})` : ''}`;
+/**
+ * One sign-off as a line: who, when, the state it signed (Rev 0, or Rev 0 + unissued
+ * changes), what it was given with, and whether what it covers changed since.
+ */
+export function signoffLine(doc: CalcDocument, s: SignOff, withScope: boolean, results?: ResultLookup): string {
+  const stale = isStale(s, doc, results);
+  const signed = s.revision !== undefined ? ` (${escapeHtml(signedStateText(s))})` : '';
+  const given = s.exceptions?.length ? ` — with ${escapeHtml(findingsCount(s.exceptions))}` : '';
+  const who = `${escapeHtml(s.by)}, ${escapeHtml(s.date)}${signed}${given}`;
   const scope = withScope ? escapeHtml(scopeText(doc, s)) : '';
   return stale
     ? `<span class="rv-signoff rv-stale" data-signoff="${escapeHtml(s.id)}"><span aria-hidden="true">⚠</span> Sign-off${scope ? ` of ${scope}` : ''} STALE: ${who} — changed since signed</span>`
@@ -43,11 +48,12 @@ export interface PanelModel {
   onlyChanged: boolean;
   userName: string;
   today: string;
+  results?: ResultLookup;
 }
 
 function signoffSection(m: PanelModel): string {
   const list = m.doc.review?.signoffs ?? [];
-  const rows = list.map((s) => `<li>${signoffLine(m.doc, s, true)} <button type="button" class="rv-small" data-rv="withdraw" data-signoff="${
+  const rows = list.map((s) => `<li>${signoffLine(m.doc, s, true, m.results)} <button type="button" class="rv-small" data-rv="withdraw" data-signoff="${
     escapeHtml(s.id)}">Withdraw</button></li>`).join('');
   const sections = m.doc.cells.filter((c) => c.kind === 'section');
   const options = ['<option value="document">The whole record</option>', ...sections.map((c) =>
@@ -101,12 +107,12 @@ ${nameField(userName)} <button type="submit">Add comment</button></form></div>`;
 }
 
 /** Line under the title block: open comments, and the whole-record sign-offs. */
-export function titleExtrasHtml(doc: CalcDocument): string {
+export function titleExtrasHtml(doc: CalcDocument, results?: ResultLookup): string {
   const comments = doc.review?.comments ?? [];
   const open = comments.filter((c) => c.status === 'open').length;
   const parts: string[] = [];
   if (comments.length) parts.push(`<span class="rv-open-count${open ? ' rv-has-open' : ''}">Open comments: <b>${open}</b> of ${comments.length}</span>`);
-  for (const s of doc.review?.signoffs ?? []) if (s.scope === 'document') parts.push(signoffLine(doc, s, true));
+  for (const s of doc.review?.signoffs ?? []) if (s.scope === 'document') parts.push(signoffLine(doc, s, true, results));
   return parts.join(' ');
 }
 

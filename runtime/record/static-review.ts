@@ -4,7 +4,7 @@
 // printed when the document has no review.
 
 import type { CalcDocument } from '../document';
-import { isStale, type SignOff } from '../review/index';
+import { isStale, type ResultLookup, type SignOff } from '../review/index';
 import { escapeHtml } from './escape';
 
 type Obj = Record<string, unknown>;
@@ -47,30 +47,43 @@ function commentsHtml(comments: Obj[]): string {
 }
 
 /** Whether what a sign-off covers changed since it was given; undefined when that cannot be told. */
-function stale(s: Obj, doc: CalcDocument): boolean | undefined {
+function stale(s: Obj, doc: CalcDocument, results?: ResultLookup): boolean | undefined {
   if (typeof s.scope !== 'string' || typeof s.covered !== 'string') return undefined;
   try {
-    return isStale(s as unknown as SignOff, doc);
+    return isStale(s as unknown as SignOff, doc, results);
   } catch {
     return undefined;
   }
 }
 
-function signoffsHtml(signoffs: Obj[], doc: CalcDocument): string {
+/** The state a sign-off names: "Rev 0", "Rev 0 + unissued changes", or a draft never issued. */
+function signedText(s: Obj): string {
+  if (typeof s.revision !== 'string') return 'draft never issued';
+  return `Rev ${text(s.revision)}${s.unissued === true ? ' + unissued changes' : ''}`;
+}
+
+/** The NOT OK checks, errors and open comments it was given with, as a short list. */
+function exceptionsText(s: Obj): string {
+  const words: Record<string, string> = { 'not-ok': 'NOT OK', error: 'error', 'open-comment': 'open comment' };
+  const list = Array.isArray(s.exceptions) ? s.exceptions.filter(isObj) : [];
+  return list.map((x) => `${words[String(x.kind)] ?? text(x.kind)} ${text(x.id)}${x.text ? ` (${text(x.text, 120)})` : ''}`).join('; ') || 'none';
+}
+
+function signoffsHtml(signoffs: Obj[], doc: CalcDocument, results?: ResultLookup): string {
   if (signoffs.length === 0) return '';
   const rows = signoffs.map((s) => {
-    const st = stale(s, doc);
-    return `<tr><td>${s.scope === 'document' ? 'whole record' : `section ${text(s.scope)}`}</td><td>${text(s.by)}</td><td>${
-      text(s.date)}</td><td>${st === undefined ? '—' : st ? '⚠ stale: changed since signed' : '✓ current'}</td></tr>`;
+    const st = stale(s, doc, results);
+    return `<tr><td>${s.scope === 'document' ? 'whole record' : `section ${text(s.scope)}`}</td><td>${signedText(s)}</td><td>${text(s.by)}</td><td>${
+      text(s.date)}</td><td>${exceptionsText(s)}</td><td>${st === undefined ? '—' : st ? '⚠ stale: changed since signed' : '✓ current'}</td></tr>`;
   });
-  return `<h3>Sign-offs</h3><table class="lt-signoffs"><thead><tr><th>Covers</th><th>By</th><th>Date</th><th>State</th></tr></thead><tbody>${
+  return `<h3>Sign-offs</h3><table class="lt-signoffs"><thead><tr><th>Covers</th><th>Signed state</th><th>By</th><th>Date</th><th>Signed with</th><th>Now</th></tr></thead><tbody>${
     rows.join('')}</tbody></table>`;
 }
 
 /** HTML for the document's review state, or '' when it has none. */
-export function reviewHtml(doc: CalcDocument): string {
+export function reviewHtml(doc: CalcDocument, results?: ResultLookup): string {
   const review = (doc as { review?: unknown }).review;
   if (!isObj(review)) return '';
-  const body = revisionsHtml(list(review.revisions)) + signoffsHtml(list(review.signoffs), doc) + commentsHtml(list(review.comments));
+  const body = revisionsHtml(list(review.revisions)) + signoffsHtml(list(review.signoffs), doc, results) + commentsHtml(list(review.comments));
   return body ? `<section class="lt-review" aria-label="Review">${body}</section>` : '';
 }

@@ -25,7 +25,7 @@ export function fingerprint(text: string): string {
 }
 
 /** JSON with keys sorted, so the same cell always gives the same text. */
-function canonical(value: unknown): string {
+export function canonical(value: unknown): string {
   if (Array.isArray(value)) return `[${value.map(canonical).join(',')}]`;
   if (value && typeof value === 'object') {
     const obj = value as Record<string, unknown>;
@@ -94,4 +94,13 @@ export function coverFingerprint(doc: CalcDocument, scope: 'document' | string):
   if (!own) return undefined;
   const upstream = whole ? [] : upstreamCells(doc, own);
   return fingerprint(canonical({ own, upstream: upstream.map(engineeringPart) }));
+}
+
+/**
+ * Fingerprint of the sheet itself: title block and every cell, every field (not the
+ * review: comments and sign-offs do not change what was issued). Frozen with a
+ * revision when it is issued, so any later edit shows (runtime/review/state.ts).
+ */
+export function sheetFingerprint(doc: CalcDocument): string {
+  return fingerprint(canonical({ meta: doc.meta, cells: doc.cells }));
 }

@@ -6,6 +6,7 @@ import { cellName, type CalcDocument } from '../document';
 import { EditError } from '../edit/ops';
 import type { CellState } from '../engine-types';
 import { tableInputs } from './table-inputs';
+import { sheetFingerprint } from './fingerprint';
 import { emptyReview, type Baseline, type InputRevised, type IssuedResult, type Revision, type ReviewState } from './types';
 
 /** Engine results by cell id: `engine.state` fits, so does a map's `get`. */
@@ -105,9 +106,7 @@ export function issueRevision(
     changedInputs: changedInputs(latestRevision(doc)?.baseline, baseline),
     baseline,
   };
-  return {
-    ...doc,
-    meta: { ...doc.meta, revision: label, date: when },
-    review: { ...review, revisions: [...review.revisions, revision] },
-  };
+  const meta = { ...doc.meta, revision: label, date: when };
+  revision.sheet = sheetFingerprint({ meta, cells: doc.cells });
+  return { ...doc, meta, review: { ...review, revisions: [...review.revisions, revision] } };
 }

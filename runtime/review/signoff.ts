@@ -1,11 +1,15 @@
 // Sign-off of a section or of the whole record by the checker. Each records a
-// fingerprint of what it covers; when that no longer matches the sheet, the
-// sign-off is stale and the section needs checking again.
+// fingerprint of the cells it covers and, when the engine's results are given, of the
+// inputs and results the checker saw, whether the sheet then differed from the latest
+// revision (the working state was signed, not the revision), and the NOT OK checks,
+// errors and open comments signed with. When what it covers changes, it is stale.
 
 import type { CalcDocument } from '../document';
 import { EditError } from '../edit/ops';
+import { signoffFindings, seenFingerprint } from './findings';
 import { coverFingerprint } from './fingerprint';
-import { latestRevision } from './revision';
+import { latestRevision, type ResultLookup } from './revision';
+import { changedSinceIssue } from './state';
 import { emptyReview, type SignOff } from './types';
 
 export interface SignOffRequest {
@@ -13,6 +17,8 @@ export interface SignOffRequest {
   scope: 'document' | string;
   by: string;
   date: string;
+  /** The engine's results as the checker sees them (let it settle first). */
+  results?: ResultLookup;
 }
 
 export function signOff(doc: CalcDocument, request: SignOffRequest): { doc: CalcDocument; id: string } {
@@ -27,12 +33,28 @@ export function signOff(doc: CalcDocument, request: SignOffRequest): { doc: Calc
   const s: SignOff = { id, scope: request.scope, by: request.by, date: request.date, covered };
   const rev = latestRevision(doc)?.label;
   if (rev !== undefined) s.revision = rev;
+  if (rev !== undefined && changedSinceIssue(doc, request.results)) s.unissued = true;
+  if (request.results) {
+    s.seen = seenFingerprint(doc, request.results, request.scope);
+    const found = signoffFindings(doc, request.results, request.scope);
+    if (found.length) s.exceptions = found;
+  }
   return { doc: { ...doc, review: { ...review, signoffs: [...review.signoffs, s] } }, id };
 }
 
-/** True when anything the sign-off covers changed since it was signed (or its section is gone). */
-export function isStale(s: SignOff, doc: CalcDocument): boolean {
-  return coverFingerprint(doc, s.scope) !== s.covered;
+/**
+ * True when anything the sign-off covers changed since it was signed (or its section
+ * is gone); with `results`, also when the inputs and results it saw differ now.
+ */
+export function isStale(s: SignOff, doc: CalcDocument, results?: ResultLookup): boolean {
+  if (coverFingerprint(doc, s.scope) !== s.covered) return true;
+  return results !== undefined && s.seen !== undefined && seenFingerprint(doc, results, s.scope) !== s.seen;
+}
+
+/** What the sign-off names as signed: "Rev 0", "Rev 0 + unissued changes", or "a draft never issued". */
+export function signedStateText(s: SignOff): string {
+  if (s.revision === undefined) return 'a draft never issued';
+  return s.unissued ? `Rev ${s.revision} + unissued changes` : `Rev ${s.revision}`;
 }
 
 /** Withdraws a sign-off (e.g. a stale one before signing again). */

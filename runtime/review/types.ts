@@ -50,6 +50,8 @@ export interface Revision {
   /** Inputs changed, added or removed since the previous issue ([] for the first). */
   changedInputs: InputRevised[];
   baseline: Baseline;
+  /** Fingerprint of the sheet as issued (sheetFingerprint); absent in revisions written before it was kept. */
+  sheet?: string;
 }
 
 /** One line of the revision log: an input's value at the previous issue and at this one. */
@@ -92,6 +94,21 @@ export interface SignOff {
   covered: string;
   /** The latest issued revision when signed, if any. */
   revision?: string;
+  /** The sheet differed from that revision when signed: the working state was signed, not the revision. */
+  unissued?: boolean;
+  /** Fingerprint of the inputs and results the checker saw (seenFingerprint); absent in older sign-offs. */
+  seen?: string;
+  /** NOT OK checks, cells in error and open comments the checker signed with, knowingly. */
+  exceptions?: SignOffException[];
+}
+
+/** Something within a sign-off's scope that was not in order when it was given. */
+export interface SignOffException {
+  kind: 'not-ok' | 'error' | 'open-comment';
+  /** The cell id (a check or a cell in error) or the comment id. */
+  id: string;
+  /** Name and label, or the comment's opening words, as they were. */
+  text: string;
 }
 
 export interface ReviewState {

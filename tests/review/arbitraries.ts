@@ -47,8 +47,9 @@ export function reviewStates(text: fc.Arbitrary<string>): fc.Arbitrary<ReviewSta
         },
         opts,
       ),
+      sheet: fc.stringMatching(/^[0-9a-f]{16}$/),
     },
-    opts,
+    { ...opts, requiredKeys: ['label', 'date', 'by', 'checkedBy', 'description', 'changedInputs', 'baseline'] },
   );
   const reply = fc.record({ author: text, time: text, text: lines }, opts);
   const comment: fc.Arbitrary<Comment> = fc.record(
@@ -71,6 +72,13 @@ export function reviewStates(text: fc.Arbitrary<string>): fc.Arbitrary<ReviewSta
       date: text,
       covered: fc.oneof(text, fc.stringMatching(/^[0-9a-f]{16}$/)),
       revision: reviewId,
+      unissued: fc.constant(true as const),
+      seen: fc.stringMatching(/^[0-9a-f]{16}$/),
+      exceptions: fc.array(fc.record({
+        kind: fc.constantFrom('not-ok' as const, 'error' as const, 'open-comment' as const),
+        id: reviewId,
+        text,
+      }, opts), { minLength: 1, maxLength: 3 }),
     },
     { ...opts, requiredKeys: ['id', 'scope', 'by', 'date', 'covered'] },
   );

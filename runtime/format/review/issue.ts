@@ -1,5 +1,6 @@
 // `issue <label>`: one issued revision with its frozen baseline.
 //   date / by / checker        who and when ('' fields have no line)
+//   sheet    9f3c…              fingerprint of the sheet as issued (later edits show)
 //   changed  i11 fc from="4000 psi" to="5000 psi"     one per input changed since the last issue
 //   input    i11 fc = 5000 psi                        one per input, as typed
 //   formula  f1 qu ok value=200 unit=psf text="200 psf"
@@ -134,6 +135,7 @@ const lines = (key: string, read: (rev: Revision, line: string) => string | unde
 const date = textLine<Revision>('date', (r) => r.date, (r, v) => (r.date = v));
 const by = textLine<Revision>('by', (r) => r.by, (r, v) => (r.by = v));
 const checker = textLine<Revision>('checker', (r) => r.checkedBy, (r, v) => (r.checkedBy = v));
+const sheet = textLine<Revision>('sheet', (r) => r.sheet ?? '', (r, v) => (r.sheet = v));
 
 export const issueFormat: ReviewBlockFormat<Revision> = {
   keyword: 'issue',
@@ -142,12 +144,13 @@ export const issueFormat: ReviewBlockFormat<Revision> = {
     ...date.write(r),
     ...by.write(r),
     ...checker.write(r),
+    ...sheet.write(r),
     ...r.changedInputs.map((c): [string, string] => ['changed', writeChanged(c)]),
     ...r.baseline.inputs.map((i): [string, string] => ['input', writeInput(i)]),
     ...r.baseline.results.map((x): [string, string] => [x.kind, writeResult(x)]),
   ],
   attrs: [
-    date, by, checker,
+    date, by, checker, sheet,
     lines('changed', readChanged),
     lines('input', readInput),
     lines('formula', readResult('formula')),

@@ -1,0 +1,79 @@
+// What a sheet is, as a record: a draft never issued, a draft changed since its last
+// revision, an issued revision as it was issued, or a checker's working copy from
+// review. The record says so in the static page, in the live app and in its file
+// name, so a changed copy never passes for the issued one.
+
+import type { CalcDocument } from '../document';
+import { compare } from './compare';
+import { sheetFingerprint } from './fingerprint';
+import { latestRevision, snapshot, type ResultLookup } from './revision';
+
+export type RecordStateKind = 'draft' | 'changed' | 'issued' | 'review-copy';
+
+export interface RecordState {
+  kind: RecordStateKind;
+  /** The latest issued revision, when there is one. */
+  revision?: { label: string; date: string };
+}
+
+/**
+ * Does the sheet differ from its latest revision? By the sheet fingerprint frozen
+ * with the revision; a revision written before it had one is compared by its inputs
+ * (and its results, when `results` is given).
+ */
+export function changedSinceIssue(doc: CalcDocument, results?: ResultLookup): boolean {
+  const latest = latestRevision(doc);
+  if (!latest) return false;
+  if (latest.sheet !== undefined) return latest.sheet !== sheetFingerprint(doc);
+  const values = new Map(latest.baseline.inputs.map((i) => [i.id, i.value]));
+  const inputs = snapshot(doc, () => undefined).inputs; // inputs and table values, as a revision freezes them
+  if (inputs.length !== values.size || inputs.some((i) => values.get(i.id) !== i.value)) return true;
+  const cmp = results ? compare(doc, results) : undefined;
+  return !!cmp && [...cmp.results, ...cmp.checks].some((r) => r.changed);
+}
+
+export interface StateOptions {
+  results?: ResultLookup;
+  /** The sheet is being changed in review (the checker's side): a changed sheet is a working copy. */
+  reviewing?: boolean;
+}
+
+export function recordState(doc: CalcDocument, options: StateOptions = {}): RecordState {
+  const latest = latestRevision(doc);
+  if (!latest) return { kind: 'draft' };
+  const revision = { label: latest.label, date: latest.date };
+  if (!changedSinceIssue(doc, options.results)) return { kind: 'issued', revision };
+  return { kind: options.reviewing ? 'review-copy' : 'changed', revision };
+}
+
+const rev = (s: RecordState): string => `Rev ${s.revision!.label}${s.revision!.date ? ` (issued ${s.revision!.date})` : ''}`;
+
+/** The state in a few words, e.g. "Issued: Rev 0, 2026-12-01". */
+export function stateTitle(s: RecordState): string {
+  switch (s.kind) {
+    case 'draft': return 'Draft: never issued';
+    case 'issued': return `Issued: Rev ${s.revision!.label}${s.revision!.date ? `, ${s.revision!.date}` : ''}`;
+    case 'changed': return `Draft: changed since Rev ${s.revision!.label}`;
+    case 'review-copy': return `Working copy from review of Rev ${s.revision!.label}`;
+  }
+}
+
+/** One plain sentence saying what the record is and is not. */
+export function stateSentence(s: RecordState): string {
+  switch (s.kind) {
+    case 'draft': return 'This sheet has never been issued: its values are a draft, not an issued calculation.';
+    case 'issued': return `This is ${rev(s)} exactly as issued: inputs and results unchanged since.`;
+    case 'changed': return `This sheet was changed after ${rev(s)}; the changes are not issued, so this is a draft, not ${rev(s)}.`;
+    case 'review-copy': return `This is a checker's working copy: ${rev(s)} with changes made in review that are not issued. It is not the issued record.`;
+  }
+}
+
+/** A file-name part for the state: a changed copy never takes the issued file's name. */
+export function stateFileTag(s: RecordState): string {
+  switch (s.kind) {
+    case 'draft': return 'draft';
+    case 'issued': return `rev${s.revision!.label}`;
+    case 'changed': return `draft-after-rev${s.revision!.label}`;
+    case 'review-copy': return `review-copy-of-rev${s.revision!.label}`;
+  }
+}
