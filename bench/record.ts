@@ -16,7 +16,7 @@ import { join } from 'node:path';
 import { chromium } from 'playwright-core';
 import { recordShellFile, ROOT } from '../runtime/cli/record-shell';
 import { parse } from '../runtime/format/index';
-import { exportComputed } from '../runtime/record/index';
+import { exportComputed } from '../runtime/record/node';
 
 const RUNS = Number(process.env.RUNS ?? 9);
 const TEMPLATE = join(ROOT, 'docs-templates/load-path.lt');

@@ -1,19 +1,27 @@
 // Calc records in the app: Export (button, Ctrl+S), Open a record or .lt file (button,
-// Ctrl+O, drag and drop), a record page opening its own embedded document (seal
-// checked), and printing a record as calc sheets from the live values.
+// Ctrl+O, drag and drop), a record page opening its own embedded document and checking
+// the whole file against its seal, the record line (what the sheet is, what is known of
+// its file), and printing a record as calc sheets from the live values.
 // Hooked into the page with one call from cells/main.ts.
 
+import './record.css';
 import type { CalcDocument } from '../../runtime/document';
 import { startHistory } from '../../runtime/edit/index';
-import { parse } from '../../runtime/format/index';
+import { parse, serialize } from '../../runtime/format/index';
 import {
-  DOC_ID, STATIC_CSS, checkEmbedded, exportRecord, pageCss, readDocumentSource, staticHtml,
+  DOC_ID, RECORD_LINES_CSS, STATIC_CSS, checkEmbedded, exportRecord, pageCss, readDocumentSource, staticHtml, type RecordCheck,
 } from '../../runtime/record/index';
+import { recordState, stateFileTag, type RecordState } from '../../runtime/review/index';
 import type { App } from '../app';
 import { escapeHtml } from '../../runtime/present/escape';
-import { sheetTitle } from '../templates';
-import { recordShell } from './shell';
 import { callsOf } from '../../runtime/working/calls';
+import { appHost } from '../review/host';
+import { reviewMode } from '../review/mode';
+import { sheetTitle } from '../templates';
+import { parseWithDom } from './dom-reader';
+import { lineElement, lineHtml } from './record-line';
+import { checkLoadedPage, shellProblem } from './seal-check';
+import { pageIsShell, recordShell } from './shell';
 
 export interface RecordHooks {
   /** On a record page: opens the embedded document and returns true; elsewhere false. */
@@ -24,15 +32,21 @@ export interface RecordHooks {
   exportHtml(): Promise<string>;
   /** Opens the text of a record or .lt file as a new sheet. */
   openText(text: string, name: string): Promise<void>;
+  /** On a record page: the check of the whole file against its seal, once done. */
+  pageCheck(): Promise<RecordCheck | undefined>;
 }
 
-/** A file name from the title block, e.g. "LT-26-101-interior-column-C-4-rev0.html". */
-export function recordFileName(doc: CalcDocument): string {
+/**
+ * A file name from the title block and the record's state, e.g.
+ * "LT-26-101-interior-column-C-4-rev0.html"; a draft or a working copy from review
+ * never takes the issued file's name ("…-review-copy-of-rev0.html").
+ */
+export function recordFileName(doc: CalcDocument, state: RecordState): string {
   const m = doc.meta;
-  const base = [m.job, m.subject || m.project, m.revision && `rev${m.revision}`]
+  const base = [m.job, m.subject || m.project, stateFileTag(state)]
     .filter(Boolean).join('-')
     .normalize('NFKD').replace(/[^\w.-]+/g, '-').replace(/-+/g, '-').replace(/^-|-$/g, '')
-    .slice(0, 100);
+    .slice(0, 120);
   return `${base || 'calc-record'}.html`;
 }
 
@@ -60,15 +74,54 @@ function showProblems(title: string, problems: string[]): void {
     : '';
 }
 
+const linesDropped = (n: number, name: string) =>
+  `${n} line${n === 1 ? '' : 's'} of ${name} could not be read and are not in this sheet; a record written now would leave them out. Fix the file and open it again.`;
+
 export function installRecord(app: App): RecordHooks {
   const isRecordPage = document.getElementById(DOC_ID) !== null;
-  let sealWarning: string | undefined;
+  // The app runs: the static page's "the app did not start" message goes (a class on the page, not an edit of the static rendering).
+  document.documentElement.classList.add('lt-app-running');
+  const host = appHost(app);
+  /** Sheets opened from files with lines that could not be read: key → message. */
+  const dropped = new Map<string, string>();
+  /** Sheets opened from a working copy from review stay one. */
+  const reviewCopies = new Set<string>();
+  /** The record page's own sheet: its key, the document text as opened, and the check of its file. */
+  let opened: { key: string; text: string } | undefined;
+  let check: Promise<RecordCheck> | undefined;
+  let checked: RecordCheck | undefined;
+
+  const results = () => {
+    const engine = app.engine;
+    return engine && !app.doc.cells.some((c) => engine.state(c.id)?.status === 'pending') ? (id: string) => engine.state(id) : undefined;
+  };
+  const currentState = (): RecordState =>
+    recordState(app.doc, { results: results(), reviewing: reviewMode.on || reviewCopies.has(app.key) });
+  const changedSinceOpen = () => !!opened && (app.key !== opened.key || serialize(app.doc) !== opened.text);
+
+  function drawLine(): void {
+    const onRecord = !!opened && app.key === opened.key;
+    lineElement().innerHTML = lineHtml({
+      state: currentState(),
+      seal: onRecord ? (checked ? { kind: 'done', check: checked } : { kind: 'checking' }) : undefined,
+      changedSinceOpen: changedSinceOpen(),
+    });
+  }
+  host.onChange(drawLine);
+  reviewMode.onChange(drawLine);
 
   async function exportHtml(): Promise<string> {
+    const problem = dropped.get(app.key);
+    if (problem) throw new Error(problem);
     const engine = app.engine!;
     await engine.settled();
+    // A record page's own code is written into the new record only if the file was checked as written.
+    if (isRecordPage && pageIsShell()) {
+      const why = shellProblem(await (check ?? checkLoadedPage()));
+      if (why) throw new Error(why);
+    }
     const shell = await recordShell();
-    return (await exportRecord(app.doc, (id) => engine.state(id), shell, undefined, callsOf(engine))).html;
+    return (await exportRecord(app.doc, (id) => engine.state(id), shell, { parseHtml: parseWithDom, reviewing: currentState().kind === 'review-copy', calls: callsOf(engine) })).html;
   }
 
   async function exportNow(): Promise<void> {
@@ -78,15 +131,15 @@ export function installRecord(app: App): RecordHooks {
       const url = URL.createObjectURL(new Blob([html], { type: 'text/html' }));
       const a = document.createElement('a');
       a.href = url;
-      a.download = recordFileName(app.doc);
+      a.download = recordFileName(app.doc, currentState());
       document.body.append(a);
       a.click();
       a.remove();
       setTimeout(() => URL.revokeObjectURL(url), 60_000);
       app.setStatus(`Record exported: ${a.download} (${(html.length / 1e6).toFixed(2)} MB)`);
     } catch (e) {
-      app.setStatus('');
-      showProblems('The record could not be exported.', [(e as Error).message]);
+      app.setStatus('Not exported (see the message above)');
+      showProblems('The record was not exported.', [(e as Error).message]);
     }
   }
 
@@ -99,7 +152,7 @@ export function installRecord(app: App): RecordHooks {
   }
 
   async function openText(text: string, name: string): Promise<void> {
-    const source = await readDocumentSource(text);
+    const source = await readDocumentSource(text, parseWithDom);
     if (source.record && source.docText === '') {
       showProblems(`${name}: nothing could be opened.`, source.problems);
       return;
@@ -108,20 +161,26 @@ export function installRecord(app: App): RecordHooks {
     const problems = [...source.problems, ...errors.slice(0, 8).map((e) => `line ${e.line}: ${e.message}`)];
     if (errors.length > 8) problems.push(`…and ${errors.length - 8} more lines that could not be read`);
     const stem = name.replace(/\.[^.]*$/, '').replace(/[^A-Za-z0-9_.-]+/g, '-').slice(0, 40) || 'file';
-    openDoc(doc, `${stem}-${Date.now().toString(36)}`, true);
+    const key = `${stem}-${Date.now().toString(36)}`;
+    if (errors.length) dropped.set(key, linesDropped(errors.length, name));
+    if (source.check?.manifest?.state.kind === 'review-copy') reviewCopies.add(key);
+    openDoc(doc, key, true);
     showProblems(`${name} was opened, with problems:`, problems);
-    app.setStatus(`Opened ${name}${source.record ? (source.sealOk ? ' (record, seal intact)' : ' (record, seal broken)') : ''}`);
+    const what = !source.record ? '' : source.check?.verified ? ' (record: every part verified)' : ' (record: NOT verified, see the message above)';
+    app.setStatus(`Opened ${name}${what}`);
   }
 
   async function openEmbedded(): Promise<boolean> {
     const el = document.getElementById(DOC_ID);
     if (!el) return false;
     performance.mark('loadtrace:record-open');
-    const checked = await checkEmbedded(el.textContent ?? '', el.dataset.sha256);
-    const { doc, errors } = parse(checked.docText ?? '');
-    const problems = [...checked.problems, ...errors.slice(0, 8).map((e) => `line ${e.line}: ${e.message}`)];
-    sealWarning = checked.sealOk ? undefined : checked.problems[0];
-    openDoc(doc, `record-${(checked.actualDigest ?? '').slice(0, 12)}-${Date.now().toString(36)}`, false);
+    const sealed = await checkEmbedded(el.textContent ?? '', el.dataset.sha256);
+    const { doc, errors } = parse(sealed.docText ?? '');
+    const problems = [...sealed.problems, ...errors.slice(0, 8).map((e) => `line ${e.line}: ${e.message}`)];
+    const key = `record-${(sealed.actualDigest ?? '').slice(0, 12)}-${Date.now().toString(36)}`;
+    if (errors.length) dropped.set(key, linesDropped(errors.length, 'this record'));
+    opened = { key, text: serialize(doc) };
+    openDoc(doc, key, false);
     performance.mark('loadtrace:record-shown');
     await app.engine!.settled();
     performance.mark('loadtrace:record-computed');
@@ -129,20 +188,36 @@ export function installRecord(app: App): RecordHooks {
     document.documentElement.classList.add('lt-live');
     performance.mark('loadtrace:record-live'); // every cell computed, those on screen typeset (read by bench:record)
     showProblems('This record may not be what was issued.', problems);
-    app.setStatus(checked.sealOk ? 'Record opened as issued: seal intact' : 'Record opened: seal broken (see the message above)');
+    app.setStatus('Record opened: checking the whole file against its seal…');
+    // The whole file is checked once the page is live (it reads every part: ~1.3 MB).
+    check = new Promise((done) => setTimeout(done, 0)).then(checkLoadedPage);
+    checked = await check;
+    performance.mark('loadtrace:record-checked');
+    if (checked.manifest?.state.kind === 'review-copy') reviewCopies.add(key);
+    if (!checked.verified) showProblems('This record is not as Loadtrace wrote it.', [...problems, ...checked.problems.filter((p) => !problems.includes(p))]);
+    app.setStatus(checked.verified ? 'Record opened: every part of the file verified against its seal' : 'Record opened: NOT verified (see the message above)');
+    drawLine();
     return true;
   }
 
-  /** Before printing a record page: the static sheets, redrawn from the live values. */
+  /** Before printing a record page: the static sheets, redrawn from the live values, saying what they are. */
   function refreshStatic(): void {
     const old = document.getElementById('lt-static');
     const engine = app.engine;
     if (!old || !engine) return;
     const fresh = document.createElement('div');
-    fresh.innerHTML = staticHtml(app.doc, (id) => engine.state(id), { warning: sealWarning, calls: callsOf(engine) });
+    fresh.innerHTML = staticHtml(app.doc, (id) => engine.state(id), {
+      calls: callsOf(engine),
+      warning: checked && !checked.verified ? checked.problems[0] : undefined,
+      record: {
+        state: currentState(),
+        recordDigest: checked?.recordDigest,
+        known: checked ? { kind: 'checked', verified: checked.verified, problem: checked.problems[0], changedSince: changedSinceOpen() } : { kind: 'unchecked' },
+      },
+    });
     old.replaceWith(fresh.firstElementChild!);
     const style = document.getElementById('lt-static-style');
-    if (style) style.textContent = `${STATIC_CSS}\n${pageCss(app.doc.meta)}`;
+    if (style) style.textContent = `${STATIC_CSS}\n${RECORD_LINES_CSS}\n${pageCss(app.doc.meta)}`;
   }
   if (isRecordPage) window.addEventListener('beforeprint', refreshStatic);
 
@@ -199,7 +274,7 @@ export function installRecord(app: App): RecordHooks {
     void file.text().then((t) => openText(t, file.name));
   });
 
-  const hooks: RecordHooks = { openEmbedded, exportNow, exportHtml, openText };
+  const hooks: RecordHooks = { openEmbedded, exportNow, exportHtml, openText, pageCheck: async () => (check ? check : undefined) };
   (window as unknown as { loadtraceRecord: RecordHooks }).loadtraceRecord = hooks; // for the end-to-end tests and the benchmark
   return hooks;
 }

@@ -1,7 +1,8 @@
 // The loader in a record shell: unpacks the app code (gzip + base64, see
 // runtime/record/app-payload.ts) with DecompressionStream, a web standard, and runs it
 // as an inline classic script (KaTeX is unpacked too, and run by the app when first
-// needed); on failure the static rendering stays in view.
+// needed); on failure the static rendering stays in view, with the static page's own
+// "the app did not start" message.
 
 import { APP_ID, KATEX_CODE, KATEX_ID, PART_OF, RUN_ID } from '../../runtime/record/app-payload';
 
@@ -9,6 +10,9 @@ import { APP_ID, KATEX_CODE, KATEX_ID, PART_OF, RUN_ID } from '../../runtime/rec
 export const LOADER = `
 try {
   performance.mark('loadtrace:loader');
+  // A refresh element put into the file would send the reader elsewhere once the page
+  // loads (no policy stops it): stop that before it starts; the app reports it.
+  if (document.querySelector('meta[http-equiv="refresh" i]')) window.stop();
   // Native base64 where the browser has it; else a loop in a function (top-level code is not optimised).
   const decode = (text) => {
     const bin = atob(text);
@@ -46,7 +50,7 @@ try {
   const p = document.createElement('p');
   p.setAttribute('role', 'alert');
   p.className = 'lt-load-failed';
-  p.textContent = 'The app in this record could not start: ' + (e && e.message ? e.message : e) + '. The record below is the issued, static copy.';
+  p.textContent = 'The app in this record could not start: ' + (e && e.message ? e.message : e) + '. What follows is the static copy written into the file; it has not been checked.';
   document.body.prepend(p);
 }
 `.trim();

@@ -6,6 +6,7 @@ import { gzipSync } from 'node:zlib';
 import { build, type Plugin, type Rolldown } from 'vite';
 import { APP_CSS_ID, APP_ID, APP_TYPE, EDITOR_GLOBAL, EDITOR_ID, KATEX_GLOBAL, KATEX_ID, packedElements } from '../../runtime/record/app-payload';
 import { LOADER } from './loader';
+import { LOADER_ID } from '../../runtime/record/seal-parts';
 
 /** KaTeX's CSS lists woff2, woff and ttf for every font; browsers all take woff2, so the others go. */
 export function katexWoff2Only(): Plugin {
@@ -101,7 +102,7 @@ export function inlineAll(): Plugin {
           scripts.push(packedElements(APP_ID, APP_TYPE, packCode(classic)));
           scripts.push(packedElements(EDITOR_ID, APP_TYPE, packCode(await iifeCode(root, 'cells/source-editor.ts', EDITOR_GLOBAL))));
           scripts.push(packedElements(KATEX_ID, APP_TYPE, packCode(await iifeCode(root, 'cells/record/katex-entry.ts', KATEX_GLOBAL))));
-          scripts.push(`<script type="module">${LOADER}</script>`);
+          scripts.push(`<script type="module" id="${LOADER_ID}">${LOADER}</script>`);
           delete bundle[name];
         } else if (name.endsWith('.css')) {
           // In an inert template at the end of the body, not in the head: the static rendering

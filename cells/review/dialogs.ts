@@ -8,6 +8,7 @@ import { parse } from '../../runtime/format/index';
 import { readDocumentSource } from '../../runtime/record/index';
 import { compare, diffRecords, issueRevision, latestRevision, nextRevisionLabel } from '../../runtime/review/index';
 import { escapeHtml } from '../../runtime/present/escape';
+import { parseWithDom } from '../record/dom-reader';
 import type { ReviewHost } from './host';
 import { changeCount, comparisonHtml } from './tables';
 
@@ -96,7 +97,7 @@ function inErrorHtml(list: CellInError[]): string {
 /** Reads another record (.html or .lt) and shows it beside the open sheet. */
 export async function openCompareDialog(host: ReviewHost, text: string, fileName: string): Promise<void> {
   const d = dialog('rv-compare', 'Compare two records');
-  const source = await readDocumentSource(text);
+  const source = await readDocumentSource(text, parseWithDom);
   const { doc: other, errors } = parse(source.docText);
   const problems = [...source.problems, ...errors.slice(0, 5).map((e) => `${fileName} line ${e.line}: ${e.message}`)];
   const mine = host.doc();
@@ -111,7 +112,7 @@ export async function openCompareDialog(host: ReviewHost, text: string, fileName
     const render = (all: boolean) => comparisonHtml(cmp, 'Open now', fileName, !all);
     d.innerHTML = `<h2>Compare two records</h2>
 <p class="rv-note">Open now: <b>${escapeHtml(sheetName(mine, 'this sheet'))}</b>. ${escapeHtml(fileName)}: <b>${escapeHtml(sheetName(other, 'no title'))}</b>${
-      source.record ? (source.sealOk ? ', seal intact' : ', seal BROKEN') : ''}. ${escapeHtml(changeCount(cmp))}.</p>
+      source.record ? (source.check?.verified ? ', every part verified against its seal' : ', NOT verified (see below)') : ''}. ${escapeHtml(changeCount(cmp))}.</p>
 ${problems.length ? `<ul class="rv-problems">${problems.map((p) => `<li>${escapeHtml(p)}</li>`).join('')}</ul>` : ''}
 <label><input type="checkbox" data-all> Show unchanged rows too</label>
 <div class="rv-compare-body">${render(false)}</div>

@@ -11,7 +11,7 @@
 import {
   changedSinceIssue, compare, findingsCount, latestRevision, signOff, signoffFindings, type SignOffException,
 } from '../../runtime/review/index';
-import { escapeHtml } from '../kind';
+import { escapeHtml } from '../../runtime/present/escape';
 import type { ReviewHost } from './host';
 import { scopeText } from './render';
 import { changeCount } from './tables';

@@ -22,6 +22,8 @@ export interface CalcArgs {
   outDir?: string;
   /** record when absent. */
   batchAs?: BatchOutput;
+  /** Check a record file against its seal, part by part, and print the result. */
+  verify?: boolean;
 }
 
 export class UsageError extends Error {}
@@ -29,6 +31,7 @@ export class UsageError extends Error {}
 export const USAGE = `usage: npm run calc -- FILE [--set NAME=VALUE]... [--meta KEY=VALUE]... [--json]
                       [--export OUT.html] [--pdf OUT.pdf [--paper letter|a4]] [--diff OTHER]
        npm run calc -- FILE --batch RUNS.csv --out DIR [--as record|pdf|both] [--paper letter|a4]
+       npm run calc -- RECORD.html --verify
   FILE              a template or record (.lt text, or an exported .html record)
   --set NAME=VALUE  override an input, e.g. --set fc="5000 psi"
   --meta KEY=VALUE  set a title-block field of what is written, e.g. --meta job=LT-26-301;
@@ -37,7 +40,12 @@ export const USAGE = `usage: npm run calc -- FILE [--set NAME=VALUE]... [--meta 
   --diff OTHER      compare with a second record (e.g. another revision): the title block,
                     inputs, results, checks, comments and sign-offs that differ; exit 0 (2 if unreadable)
   --export OUT.html write the calc record: one self-contained, sealed HTML file
-                    (builds the app shell first if dist-record/ is missing or stale)
+                    (builds the app shell first if dist-record/ is missing or stale);
+                    refused (exit 2) when the document has lines that cannot be read
+                    or is an altered record
+  --verify          check every part of a record file against its seal (read with a
+                    real HTML parser) and say what it is; exit 0 when every part is as
+                    written, 2 naming the first part that differs
   --pdf OUT.pdf     print the record's calc sheets to PDF through Chromium (/usr/bin/chromium)
   --paper SIZE      letter (default) or a4
   --batch RUNS.csv  run FILE once per row of a CSV whose header names inputs (values with
@@ -63,6 +71,7 @@ export function parseArgs(argv: string[]): CalcArgs {
     const a = argv[i];
     let v: string;
     if (a === '--json') out.json = true;
+    else if (a === '--verify') out.verify = true;
     else if (is(a, '--set')) {
       [v, i] = value(a, '--set', i, 'NAME=VALUE');
       const eq = v.indexOf('=');

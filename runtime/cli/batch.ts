@@ -12,6 +12,7 @@ import { createEngine } from '../engine';
 import type { Engine } from '../engine-types';
 import { ratioText } from '../handcalc/index';
 import { exportRecord } from '../record/index';
+import { parseWithParse5 } from '../record/node';
 import type { CalcArgs } from './args';
 import { readBatchCsv, type BatchRun } from './batch-csv';
 import { withMeta } from './meta';
@@ -120,7 +121,7 @@ export async function runBatch(doc: CalcDocument, args: CalcArgs, out: (s: strin
       const state = (id: string) => engine.state(id);
       if (shell !== undefined) {
         files.push(`${name}.html`);
-        writeFileSync(join(dir, `${name}.html`), (await exportRecord(d, state, shell, undefined, callsOf(engine))).html);
+        writeFileSync(join(dir, `${name}.html`), (await exportRecord(d, state, shell, { parseHtml: parseWithParse5, calls: callsOf(engine) })).html);
       }
       if (printer) {
         files.push(`${name}.pdf`);

@@ -11,15 +11,26 @@ import { parseArgs, UsageError, type CalcArgs } from './args';
 import { printDiff } from './diff';
 import { exitCode, resultRows, table } from './report';
 import { exportRecord, readDocumentSource } from '../record/index';
+import { parseWithParse5 } from '../record/node';
+import { OLDER_RECORD } from '../record/verify';
 import { recordShellFile } from './record-shell';
 import { runBatch } from './batch';
 import { withMeta } from './meta';
 import { openPrinter, sheetsPage } from './pdf';
 import type { Engine } from '../engine-types';
 import { callsOf } from '../working/calls';
+import { verifyReport } from './verify-report';
+
+interface Loaded {
+  doc: CalcDocument;
+  /** Anything wrong: lines that could not be read, a record altered or not whole. */
+  broken: boolean;
+  /** Lines of the document that could not be read (their blocks are not in `doc`). */
+  parseErrors: number;
+}
 
 /** A file's document, its faults reported through `err`; undefined when it cannot be read at all. */
-async function loadDocument(file: string, err: (s: string) => void): Promise<{ doc: CalcDocument; broken: boolean } | undefined> {
+async function loadDocument(file: string, err: (s: string) => void): Promise<Loaded | undefined> {
   let text: string;
   try {
     text = readFileSync(file, 'utf8');
@@ -27,12 +38,15 @@ async function loadDocument(file: string, err: (s: string) => void): Promise<{ d
     err(`cannot read ${file}: ${(e as Error).message}`);
     return undefined;
   }
-  // An exported .html record: its embedded document, checked against its seal.
-  const source = await readDocumentSource(text);
+  // An exported .html record: its embedded document checked against its seal, and the
+  // whole file against the record's seal (read with a real HTML parser).
+  const source = await readDocumentSource(text, parseWithParse5);
   for (const p of source.problems) err(`${file}: ${p}`);
+  // A record written before whole-file seals is said to be so, and still runs as before.
+  const altered = source.problems.some((p) => p !== OLDER_RECORD);
   const { doc, errors } = parse(source.docText);
   for (const e of errors) err(`${file}:${e.line}:${e.column}: ${e.message}`);
-  return { doc, broken: errors.length > 0 || source.problems.length > 0 };
+  return { doc, broken: errors.length > 0 || altered || (source.record && source.docText === ''), parseErrors: errors.length };
 }
 
 /**
@@ -66,8 +80,18 @@ function notAnInput(doc: CalcDocument, name: string): string {
 }
 
 async function calc(args: CalcArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
+  if (args.verify) return verifyReport(args.file, out, err);
   const loaded = await loadDocument(args.file, err);
   if (!loaded) return 2;
+  const writes = args.exportTo !== undefined ? `--export ${args.exportTo}` : args.batch !== undefined ? `--batch ${args.batch}` : undefined;
+  if (writes && loaded.broken) {
+    // A record is never written from a document with lines dropped or from an altered record:
+    // the new file's seal would vouch for what was lost or changed.
+    err(`${writes}: not written: ${loaded.parseErrors
+      ? `${loaded.parseErrors} line${loaded.parseErrors === 1 ? '' : 's'} of ${args.file} could not be read (above) and would be missing from the record`
+      : `${args.file} is not as Loadtrace wrote it (above)`}`);
+    return 2;
+  }
   let doc: CalcDocument = withMeta(loaded.doc, args.metas ?? []);
   for (const { name, value } of args.sets) {
     const cell = doc.cells.find((c) => c.kind === 'input' && c.name === name);
@@ -101,7 +125,7 @@ async function calc(args: CalcArgs, out: (s: string) => void, err: (s: string) =
   }
   if (args.exportTo !== undefined) {
     try {
-      const record = await exportRecord(doc, (id) => engine.state(id), recordShellFile(err), undefined, callsOf(engine));
+      const record = await exportRecord(doc, (id) => engine.state(id), recordShellFile(err), { parseHtml: parseWithParse5, calls: callsOf(engine) });
       writeFileSync(args.exportTo, record.html);
       err(`record written: ${args.exportTo} (${(record.html.length / 1e6).toFixed(2)} MB, SHA-256 ${record.digest})`);
     } catch (e) {

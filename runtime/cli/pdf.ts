@@ -12,7 +12,8 @@ import type { CalcDocument } from '../document';
 import type { CellState } from '../engine-types';
 import type { LibraryCall } from '../working/calls';
 import { serialize } from '../format/index';
-import { pack, sha256Hex, staticHtml } from '../record/index';
+import { sha256Hex } from '../record/index';
+import { printPageHtml } from '../record/print-page';
 import type { Paper } from './args';
 
 /** Flags for a headless Chromium with nothing running in the background (the e2e tests use them too). */
@@ -28,16 +29,13 @@ export function chromiumPath(): string {
 
 export class PrintError extends Error {}
 
-/** An app shell with no app: packing into it leaves the record's own parts only. */
-const NO_APP = '<!doctype html><html lang="en"><head></head><body></body></html>';
-
 /** The record's static page for a computed document (what a record shows with JavaScript off). */
 export async function sheetsPage(
   doc: CalcDocument, state: (id: string) => CellState | undefined, exportedAt = new Date().toISOString(), calls?: (id: string) => LibraryCall[],
 ): Promise<string> {
   const docText = serialize(doc);
   const digest = await sha256Hex(docText);
-  return pack({ shell: NO_APP, docText, digest, meta: doc.meta, staticHtml: staticHtml(doc, state, { digest, exportedAt, calls }) });
+  return printPageHtml(doc, state, digest, exportedAt, calls);
 }
 
 export interface Printer {

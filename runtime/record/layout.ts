@@ -3,7 +3,8 @@
 // be recovered from a record (for exporting again) by cutting the fences out.
 // Nothing inside a fence can contain "<!--": all document text in it is escaped.
 
-export const RECORD_VERSION = '1';
+/** 2: the whole file is sealed (verify.ts); 1: only the embedded document was. */
+export const RECORD_VERSION = '2';
 /** The element id and type of the embedded document. */
 export const DOC_ID = 'lt-doc';
 export const DOC_TYPE = 'application/x-loadtrace';
@@ -35,9 +36,12 @@ export function recordCsp(scriptHashes: string[]): string {
   ].join('; ');
 }
 
+/** The policy at the very top of a record's head, just before its head fence. */
+const POLICY_BEFORE_FENCE = new RegExp(`<meta http-equiv="Content-Security-Policy" content="[^"]*">(?=${FENCES.head[0]})`, 'i');
+
 /** The app shell inside a record (or a shell as it is): every fenced record part cut out. */
 export function shellOf(html: string): string {
-  let out = html;
+  let out = html.replace(POLICY_BEFORE_FENCE, '');
   for (const [open, close] of Object.values(FENCES)) {
     for (;;) {
       const a = out.indexOf(open);
@@ -49,7 +53,7 @@ export function shellOf(html: string): string {
   return out;
 }
 
-/** Inline scripts the browser would run: no src, and a JavaScript type (or none). */
+/** Inline scripts the browser would run: no src, and a JavaScript type (or none). Read from Loadtrace's own shell. */
 export function runnableScripts(html: string): { attrs: string; code: string }[] {
   const out: { attrs: string; code: string }[] = [];
   const re = /<script\b([^>]*)>([\s\S]*?)<\/script\s*>/gi;

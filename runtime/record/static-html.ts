@@ -16,6 +16,7 @@ import type { LibraryCall } from '../working/calls';
 import { cellWorkingsHtml, recordOpen } from '../working/sheet';
 import { escapeHtml } from './escape';
 import { reviewHtml } from './static-review';
+import { staticRecordLines, type RecordLines } from './record-lines';
 import { texHtml } from './tex';
 
 export const CAUTION = "Results are an aid to, not a substitute for, a licensed engineer's judgement; local codes govern.";
@@ -29,6 +30,8 @@ export interface StaticOptions {
   warning?: string;
   /** The library calls of a formula or check (Engine.libraryCalls), to print their working. */
   calls?: (id: string) => LibraryCall[];
+  /** What the record is and what is known of its file (runtime/record/record-lines.ts). */
+  record?: RecordLines;
 }
 
 /** The working of each library call, open or folded by the sheet's setting (runtime/working). */
@@ -76,8 +79,8 @@ export function staticHtml(
   ].filter(Boolean).join(' ');
   return `<div id="lt-static" class="lt-static" lang="en">${warning}${titleBlockHtml(doc.meta)}
 <p class="lt-caution" role="note">△ ${CAUTION}</p>
-<p class="lt-howto">This is the issued calc record. Open the file in a web browser with JavaScript on to edit and recompute it; the document it was computed from is kept inside the file.</p>
+${staticRecordLines(doc, state, options.record)}
 ${calcHtml(doc, state, options.calls)}
-${reviewHtml(doc)}
+${reviewHtml(doc, state)}
 <footer class="lt-foot">${foot}</footer></div>`;
 }

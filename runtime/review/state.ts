@@ -14,6 +14,8 @@ export interface RecordState {
   kind: RecordStateKind;
   /** The latest issued revision, when there is one. */
   revision?: { label: string; date: string };
+  /** A draft's title block names a revision that was typed, never issued. */
+  typed?: string;
 }
 
 /**
@@ -40,7 +42,7 @@ export interface StateOptions {
 
 export function recordState(doc: CalcDocument, options: StateOptions = {}): RecordState {
   const latest = latestRevision(doc);
-  if (!latest) return { kind: 'draft' };
+  if (!latest) return doc.meta.revision.trim() ? { kind: 'draft', typed: doc.meta.revision.trim().slice(0, 40) } : { kind: 'draft' };
   const revision = { label: latest.label, date: latest.date };
   if (!changedSinceIssue(doc, options.results)) return { kind: 'issued', revision };
   return { kind: options.reviewing ? 'review-copy' : 'changed', revision };
@@ -61,7 +63,7 @@ export function stateTitle(s: RecordState): string {
 /** One plain sentence saying what the record is and is not. */
 export function stateSentence(s: RecordState): string {
   switch (s.kind) {
-    case 'draft': return 'This sheet has never been issued: its values are a draft, not an issued calculation.';
+    case 'draft': return `This sheet has never been issued${s.typed ? ` (the title block's revision “${s.typed}” was typed, not issued)` : ''}: its values are a draft, not an issued calculation.`;
     case 'issued': return `This is ${rev(s)} exactly as issued: inputs and results unchanged since.`;
     case 'changed': return `This sheet was changed after ${rev(s)}; the changes are not issued, so this is a draft, not ${rev(s)}.`;
     case 'review-copy': return `This is a checker's working copy: ${rev(s)} with changes made in review that are not issued. It is not the issued record.`;

@@ -14,7 +14,8 @@ import type { CalcDocument } from '../../runtime/document';
 import { setInputValue } from '../../runtime/edit/index';
 import { createEngine } from '../../runtime/engine';
 import { parse } from '../../runtime/format/index';
-import { exportComputed, unpack } from '../../runtime/record/index';
+import { unpack } from '../../runtime/record/index';
+import { exportComputed } from '../../runtime/record/node';
 import { unitText as resultText } from '../../runtime/present/units-text';
 import { hostileDocument } from '../record/fixtures';
 import { ARTIFACTS, CHROMIUM_ARGS, ROOT, artifactsDir } from './harness';
@@ -108,7 +109,10 @@ describe('the exported main template in Chromium, offline', () => {
     const cells = await page.$$eval('#cells article', (els) => els.map((e) => ({ id: (e as HTMLElement).dataset.id, cls: e.className })));
     expect(cells.map((c) => c.id)).toEqual(doc.cells.map((c) => c.id));
     expect(cells.filter((c) => /unrendered|st-pending|st-error/.test(c.cls))).toEqual([]);
-    expect(await page.locator('#status').textContent()).toContain('seal intact');
+    // The whole file is checked against its seal once the page is live; only then is it called verified.
+    await page.waitForFunction(() => performance.getEntriesByName('loadtrace:record-checked').length > 0, null, { timeout: 30_000 });
+    expect(await page.locator('#status').textContent()).toBe('Record opened: every part of the file verified against its seal');
+    expect(await page.locator('#lt-record-line .lt-rl-verified').isVisible()).toBe(true);
     expect(await page.locator('#help-body').textContent()).toContain('Export the calc record'); // the shortcut is listed
     expect(await page.locator('.toolbar [data-record="export"]').isVisible()).toBe(true);
     await page.screenshot({ path: join(ARTIFACTS, 'record-opened.png') });
@@ -317,7 +321,7 @@ describe('hostile and damaged records', () => {
     const alert = page.locator('body > p[role="alert"]');
     await alert.waitFor({ timeout: 30_000 });
     expect(await alert.isVisible()).toBe(true);
-    expect(await alert.textContent()).toBe('The app in this record could not start: its packed code (lt-app) is damaged. The record below is the issued, static copy.');
+    expect(await alert.textContent()).toBe('The app in this record could not start: its packed code (lt-app) is damaged. What follows is the static copy written into the file; it has not been checked.');
     expect(await page.locator('#lt-static .lt-summary').isVisible()).toBe(true);
     expect(await page.locator('.toolbar').isVisible()).toBe(false);
     expect(blocked).toEqual([]);

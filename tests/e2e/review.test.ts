@@ -144,6 +144,12 @@ describe('checker review in Chromium', () => {
     await form.locator('input[name="date"]').fill('2026-12-03');
     expect(await form.locator('input[name="author"]').inputValue()).toBe('B. Checker'); // remembered from the comment
     await form.locator('button[type="submit"]').click();
+    // The sign-off dialog says what is signed; nothing within s2 is NOT OK, in error or open.
+    const dialog = page.locator('#rv-signoff');
+    await dialog.waitFor({ state: 'visible' });
+    expect(await text('#rv-signoff .rv-note')).toContain('You sign Rev 0 as issued on 2026-12-01.');
+    expect(await dialog.locator('.rv-findings').count()).toBe(0);
+    await dialog.locator('button[type="submit"]').click();
     await settle();
     expect(await text('#cell-s2 .rv-diff')).toBe('✓ Signed off: B. Checker, 2026-12-03 (Rev 0)');
     await shot('05-signed', '#cell-s2');
@@ -208,7 +214,7 @@ describe('checker review in Chromium', () => {
     const dialog = page.locator('#rv-compare');
     await dialog.waitFor({ state: 'visible' });
     await page.waitForSelector('#rv-compare table.rv-table');
-    expect(await text('#rv-compare .rv-note')).toContain('seal intact');
+    expect(await text('#rv-compare .rv-note')).toContain('every part verified against its seal');
     const rows = (await dialog.locator('tbody tr').allInnerTexts()).map((r) => r.replace(/\s+/g, ' ').trim());
     // The sheet now has q_cap = 260 psf; Rev 0 had 250 psf: 200/260 = 0.769 against 0.8
     expect(rows).toEqual(['q_cap 260 psf → 250 psf', 'q_ok 0.769 OK → 0.8 OK +0.031']);

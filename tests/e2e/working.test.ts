@@ -14,7 +14,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openPrinter, sheetsPage } from '../../runtime/cli/pdf';
 import { createEngine } from '../../runtime/engine';
 import { parse } from '../../runtime/format/index';
-import { exportComputed } from '../../runtime/record/index';
+import { exportComputed } from '../../runtime/record/node';
 import { callsOf } from '../../runtime/working/calls';
 import { appDist, openApp, type AppSession } from './app-session';
 import { CHROMIUM_ARGS, artifactsDir } from './harness';

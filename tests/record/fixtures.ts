@@ -3,7 +3,7 @@
 
 import type { CalcDocument } from '../../runtime/document';
 /** A minimal app shell: one inline script, as a single-file build has. */
-export const STUB_SHELL = '<!doctype html><html lang="en"><head><meta charset="utf-8"><title>shell</title></head><body><p id="app">app</p><script type="module">document.getElementById("app").textContent = "ran";</script></body></html>';
+export const STUB_SHELL = '<!doctype html><html lang="en"><head><meta charset="utf-8"><title>shell</title></head><body><p id="app">app</p><script type="module" id="lt-loader">document.getElementById("app").textContent = "ran";</script></body></html>';
 
 export const ATTACKS = [
   '<script>window.__pwned = 1</script>',
@@ -39,3 +39,29 @@ export function hostileDocument(): CalcDocument {
   };
 }
 
+
+/**
+ * A shell with every part a real one has (tests/record/seal.test.ts): head markup,
+ * toolbar, the app's styles in a template, the app, editor and KaTeX as packed blocks
+ * (tiny programs, gzip + base64 as the build writes them) and the loader.
+ */
+export function partsShell(pack: (code: string) => string): string {
+  const block = (id: string, code: string) => `<script type="application/x-loadtrace-app" id="${id}" data-encoding="gzip base64">${pack(code)}</script>`;
+  return `<!doctype html>
+<html lang="en">
+<head>
+  <meta charset="utf-8">
+  <meta name="viewport" content="width=device-width, initial-scale=1">
+  <title>Loadtrace</title>
+</head>
+<body>
+  <header class="toolbar" role="toolbar"><span class="brand">Loadtrace</span> <button type="button" data-cmd="print">Print</button><span id="status"></span></header>
+  <main class="paper"><section id="summary"></section><div id="cells"></div></main>
+<template id="lt-app-css"><style>.toolbar{display:flex}</style><style>.paper{margin:0 auto}</style></template>
+${block('lt-app', 'globalThis.appRan = "app";')}
+${block('lt-editor', 'var __loadtraceEditor = { editor: "editor" };')}
+${block('lt-katex', 'var __loadtraceKatex = { katex: "katex" };')}
+<script type="module" id="lt-loader">document.getElementById("lt-app");</script>
+</body>
+</html>`;
+}

@@ -5,7 +5,8 @@
 import { describe, expect, it } from 'vitest';
 import type { CalcDocument } from '../../runtime/document';
 import { serialize } from '../../runtime/format/index';
-import { exportComputed, looksLikeRecord, readDocumentSource, unpack } from '../../runtime/record/index';
+import { looksLikeRecord, readDocumentSource, unpack } from '../../runtime/record/index';
+import { exportComputed } from '../../runtime/record/node';
 import { STUB_SHELL, hostileDocument } from './fixtures';
 
 /** Every start tag in the HTML, with its name and attribute text. */
@@ -20,8 +21,9 @@ describe('hostile text in every field', () => {
     const doc = hostileDocument();
     const { html, docText } = await exportComputed(doc, STUB_SHELL, '2026-12-01T00:00:00Z');
     const all = tags(html);
-    // The stub shell has one script; the record adds exactly one data block (common practice: HTML §4.12.1.2 data blocks do not run).
-    expect(all.filter((t) => t.name === 'script').map((t) => /type="([^"]*)"/.exec(t.attrs)?.[1])).toEqual(['application/x-loadtrace', 'module']);
+    // The stub shell has one script; the record adds exactly two data blocks, the seal and the document
+    // (common practice: HTML §4.12.1.2 data blocks do not run).
+    expect(all.filter((t) => t.name === 'script').map((t) => /type="([^"]*)"/.exec(t.attrs)?.[1])).toEqual(['application/x-loadtrace-seal', 'application/x-loadtrace', 'module']);
     expect(all.filter((t) => /\son[a-z]+\s*=/i.test(t.attrs))).toEqual([]);
     expect(all.filter((t) => /javascript:/i.test(t.attrs))).toEqual([]);
     expect(all.filter((t) => ['img', 'svg', 'iframe', 'object', 'embed', 'link', 'base', 'form'].includes(t.name))).toEqual([]);
@@ -107,6 +109,6 @@ describe('1 MB strings', () => {
     expect(performance.now() - t0).toBeLessThan(90_000); // a hang guard, not a speed target
     expect(back.ok).toBe(true);
     expect(back.docText).toBe(docText);
-    expect(tags(html).filter((t) => t.name === 'script')).toHaveLength(2);
+    expect(tags(html).filter((t) => t.name === 'script')).toHaveLength(3); // the seal, the document, the stub's loader
   }, 180_000);
 });

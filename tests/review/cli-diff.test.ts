@@ -10,7 +10,7 @@ import { parseArgs } from '../../runtime/cli/args';
 import { runCalc } from '../../runtime/cli/main';
 import { setInputValue } from '../../runtime/edit/index';
 import { parse, serialize } from '../../runtime/format/index';
-import { exportComputed } from '../../runtime/record/index';
+import { exportComputed } from '../../runtime/record/node';
 import { issueRevision } from '../../runtime/review/index';
 import { STUB_SHELL } from '../record/fixtures';
 import { resultsOf, sheet } from './fixture';

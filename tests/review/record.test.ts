@@ -6,7 +6,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parse } from '../../runtime/format/index';
-import { DOC_ID, exportComputed, unpack } from '../../runtime/record/index';
+import { DOC_ID, unpack } from '../../runtime/record/index';
+import { exportComputed } from '../../runtime/record/node';
 import { setInputValue } from '../../runtime/edit/index';
 import { addComment, compare, isStale, issueRevision, onlyChanged, reply, signOff } from '../../runtime/review/index';
 import { anyText } from '../format/arbitraries';
