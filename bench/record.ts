@@ -8,6 +8,7 @@
 // BENCH_BASE=DIR (another checkout with node_modules) exports the same template with that
 // checkout too and opens the two records in turn, printing both side by side: before and
 // after a change, in one run under the same load.
+// - and when the app has checked the whole file against the record's seal (after live).
 
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -31,7 +32,7 @@ if (errors.length) throw new Error(`${TEMPLATE}: ${errors[0].message}`);
 const record = await exportComputed(doc, shell);
 const dir = mkdtempSync(join(tmpdir(), 'loadtrace-bench-record-'));
 interface Rec { label: string; file: string; bytes: number; times: number[]; rendered: number[]; firstPaint: number[]; phases: Map<string, number[]> }
-const PHASES = ['static-parsed', 'static-painted', 'loader', 'unpacked', 'app-started', 'record-open', 'record-shown', 'record-computed', 'record-live', 'live-painted'];
+const PHASES = ['static-parsed', 'static-painted', 'loader', 'unpacked', 'app-started', 'record-open', 'record-shown', 'record-computed', 'record-live', 'live-painted', 'record-checked'];
 const rec = (label: string, file: string, html: string): Rec => {
   writeFileSync(file, html);
   return { label, file, bytes: Buffer.byteLength(html), times: [], rendered: [], firstPaint: [], phases: new Map(PHASES.map((p) => [p, []])) };
@@ -87,6 +88,8 @@ async function openOnce(r: Rec, keep: boolean): Promise<void> {
   const page = await context.newPage();
   await page.goto(`file://${r.file}`);
   await page.waitForFunction(() => performance.getEntriesByName('loadtrace:live-painted').length > 0, null, { timeout: 60_000 });
+  // A record that checks its file: wait for the check too (an older one has none).
+  if (await page.$('#lt-seal')) await page.waitForFunction(() => performance.getEntriesByName('loadtrace:record-checked').length > 0, null, { timeout: 60_000 });
   const ms = await page.evaluate(() => performance.getEntriesByName('loadtrace:record-live')[0].startTime);
   const [painted, fcp, staticCells] = await page.evaluate(() => [
     performance.getEntriesByName('loadtrace:static-painted')[0]?.startTime ?? NaN,
@@ -119,6 +122,7 @@ try {
 }
 
 const spread = (xs: number[]) => `median ${median(xs).toFixed(0)} ms (min ${Math.min(...xs).toFixed(0)}, max ${Math.max(...xs).toFixed(0)}, ${xs.length} runs)`;
+const fmt = (x: number) => (Number.isFinite(x) ? x.toFixed(0) : '—');
 console.log(`record of ${TEMPLATE.replace(`${ROOT}/`, '')}: ${doc.cells.length} cells`);
 for (const r of records) {
   const who = r.label ? `[${r.label}] ` : '';
@@ -126,11 +130,12 @@ for (const r of records) {
   console.log(`${who}open → every cell rendered (static rendering: all ${doc.cells.length} cells in the page, the screen painted): ${spread(r.rendered)}   target ≤ 400 ms`);
   console.log(`${who}  first paint of the page: median ${median(r.firstPaint).toFixed(0)} ms`);
   console.log(`${who}open → live app (all cells recomputed, on-screen ones typeset, editable): ${spread(r.times)}   target ≤ 400 ms (if read as the live app)`);
-  console.log(`${who}  the live app first painted: median ${median(r.phases.get('live-painted')!).toFixed(0)} ms`);
-  console.log(`${who}  phases (median ms from navigation start): ${PHASES.map((p) => `${p} ${median(r.phases.get(p)!).toFixed(0)}`).join(', ')}`);
+  console.log(`${who}  the live app first painted: median ${median(r.phases.get('live-painted')!).toFixed(0)} ms; the whole file checked against its seal: ${fmt(median(r.phases.get('record-checked')!))} ms`);
+  console.log(`${who}  phases (median ms from navigation start): ${PHASES.map((p) => `${p} ${fmt(median(r.phases.get(p)!))}`).join(', ')}`);
 }
 if (records.length > 1) {
   const [a, b] = records;
   console.log(`this checkout / base: size ${(a.bytes / b.bytes).toFixed(3)}, every cell rendered ${(median(a.rendered) / median(b.rendered)).toFixed(2)}, live ${(median(a.times) / median(b.times)).toFixed(2)}`);
+  console.log(`  live app painted, this checkout / base: ${(median(a.phases.get('live-painted')!) / median(b.phases.get('live-painted')!)).toFixed(2)}`);
 }
 console.log(`requests blocked: ${requests}; machine load (1 min): ${loadavg()[0].toFixed(1)} on ${(await import('node:os')).cpus().length} cores`);

@@ -74,8 +74,9 @@ function showProblems(title: string, problems: string[]): void {
     : '';
 }
 
-const linesDropped = (n: number, name: string) =>
-  `${n} line${n === 1 ? '' : 's'} of ${name} could not be read and are not in this sheet; a record written now would leave them out. Fix the file and open it again.`;
+const linesDropped = (n: number, name: string) => (n === 1
+  ? `1 line of ${name} could not be read; it is not in this sheet, and a record written now would leave it out. Fix the file and open it again.`
+  : `${n} lines of ${name} could not be read; they are not in this sheet, and a record written now would leave them out. Fix the file and open it again.`);
 
 export function installRecord(app: App): RecordHooks {
   const isRecordPage = document.getElementById(DOC_ID) !== null;
@@ -189,8 +190,12 @@ export function installRecord(app: App): RecordHooks {
     performance.mark('loadtrace:record-live'); // every cell computed, those on screen typeset (read by bench:record)
     showProblems('This record may not be what was issued.', problems);
     app.setStatus('Record opened: checking the whole file against its seal…');
-    // The whole file is checked once the page is live (it reads every part: ~1.3 MB).
-    check = new Promise((done) => setTimeout(done, 0)).then(checkLoadedPage);
+    // The whole file is checked once the live app has painted (it reads every part, ~1.3 MB:
+    // done first, it held the live app's first frame back). A frame, or 100 ms with none (a hidden tab).
+    check = new Promise<void>((done) => {
+      requestAnimationFrame(() => setTimeout(done));
+      setTimeout(done, 100);
+    }).then(checkLoadedPage);
     checked = await check;
     performance.mark('loadtrace:record-checked');
     if (checked.manifest?.state.kind === 'review-copy') reviewCopies.add(key);

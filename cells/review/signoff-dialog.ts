@@ -26,8 +26,7 @@ const WORDS: Record<SignOffException['kind'], string> = { 'not-ok': 'NOT OK', er
 
 function findingsHtml(list: SignOffException[]): string {
   if (list.length === 0) return '<p class="rv-none">No check is NOT OK, no cell is in error and no comment is open within what you sign.</p>';
-  const items = list.map((x) => `<li data-finding="${escapeHtml(x.kind)}"><b>${WORDS[x.kind]}</b> <a href="#cell-${escapeHtml(x.id)}" data-goto="${
-    escapeHtml(x.kind === 'open-comment' ? '' : x.id)}">${escapeHtml(x.id)}</a> ${escapeHtml(x.text)}</li>`).join('');
+  const items = list.map((x) => `<li data-finding="${escapeHtml(x.kind)}"><b>${WORDS[x.kind]}</b> <code>${escapeHtml(x.id)}</code> ${escapeHtml(x.text)}</li>`).join('');
   return `<p class="rv-warn-head">Within what you sign: ${escapeHtml(findingsCount(list))}. Signing records them with the sign-off.</p><ul class="rv-findings">${items}</ul>`;
 }
 

@@ -68,17 +68,19 @@ function describe<N>(r: TreeReader<N>, n: N): string {
   return 'a node';
 }
 
+const capital = (s: string): string => s.charAt(0).toUpperCase() + s.slice(1);
+
 /** The policy element, when it is the head's first node; else what stands before it. */
 function policyAtTop<N>(r: TreeReader<N>, root: N, tampering: string[]): N | undefined {
   const top = r.children(root).filter((n) => r.type(n) !== DOCTYPE);
   const html = top.find((n) => r.type(n) === ELEMENT && r.name(n) === 'html');
-  for (const n of top) if (n !== html) tampering.push(`${describe(r, n)} stands outside the page's <html> element, before or after it.`);
+  for (const n of top) if (n !== html) tampering.push(`${capital(describe(r, n))} stands outside the page's <html> element, before or after it.`);
   const head = html && elements(r, html).find((n) => r.name(n) === 'head');
   const first = head ? r.children(head)[0] : undefined;
   if (first !== undefined && r.type(first) === ELEMENT && isCsp(r, first)) return first;
   const policy = head && r.children(head).find((n) => r.type(n) === ELEMENT && isCsp(r, n));
   if (!policy) tampering.push('The page has no Content-Security-Policy at the top of its head: nothing stops its code from being changed or requests from being made.');
-  else tampering.push(`${describe(r, r.children(head!)[0])} was placed before the Content-Security-Policy, where the policy does not reach it.`);
+  else tampering.push(`${capital(describe(r, r.children(head!)[0]))} was placed before the Content-Security-Policy, where the policy does not reach it.`);
   return undefined;
 }
 

@@ -4,6 +4,8 @@
 
 import { cellName, type CalcDocument, type Cell } from '../document';
 import { parseFormula, symbolNames } from '../formula/parse';
+import { hasFeetInches } from '../units/feet-inches';
+import { canonicalUnit, typedUnit } from '../units/systems';
 
 /**
  * 64-bit fingerprint as 16 hex digits over UTF-16 code units: the first half is
@@ -97,10 +99,23 @@ export function coverFingerprint(doc: CalcDocument, scope: 'document' | string):
 }
 
 /**
+ * An input's display unit when it only repeats the unit its value is typed in (the
+ * editor pins it when a value is typed in another unit: 10 ft → 10 psf → back to 10 ft
+ * leaves unit "ft" on a sheet that shows and computes exactly what it did) is left out.
+ */
+function asShown(cell: Cell): Cell {
+  if (cell.kind !== 'input' || !cell.unit) return cell;
+  const typed = typedUnit(cell.value);
+  if (!typed || canonicalUnit(typed) !== canonicalUnit(cell.unit) || hasFeetInches(cell.value)) return cell;
+  const { unit: _, ...rest } = cell;
+  return rest;
+}
+
+/**
  * Fingerprint of the sheet itself: title block and every cell, every field (not the
  * review: comments and sign-offs do not change what was issued). Frozen with a
  * revision when it is issued, so any later edit shows (runtime/review/state.ts).
  */
 export function sheetFingerprint(doc: CalcDocument): string {
-  return fingerprint(canonical({ meta: doc.meta, cells: doc.cells }));
+  return fingerprint(canonical({ meta: doc.meta, cells: doc.cells.map(asShown) }));
 }

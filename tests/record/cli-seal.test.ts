@@ -4,37 +4,17 @@
 // altered record written again under a fresh seal. The shell is the stub
 // (LOADTRACE_SHELL), so no build runs here.
 
-import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { parseArgs } from '../../runtime/cli/args';
-import { runCalc } from '../../runtime/cli/main';
-import { STUB_SHELL } from './fixtures';
+import { describe, expect, it } from 'vitest';
+import { calc, scratchWithStubShell } from '../cli/helpers';
 
-let dir: string;
+const scratch = scratchWithStubShell('cli-seal');
 const TEMPLATE = 'docs-templates/spread-footing.lt';
-
-async function calc(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  const out: string[] = [];
-  const err: string[] = [];
-  const code = await runCalc(parseArgs(argv), (s) => out.push(s), (s) => err.push(s));
-  return { code, out: out.join('\n'), err: err.join('\n') };
-}
-
-beforeAll(() => {
-  dir = mkdtempSync(join(tmpdir(), 'loadtrace-cli-seal-'));
-  writeFileSync(join(dir, 'shell.html'), STUB_SHELL);
-  process.env.LOADTRACE_SHELL = join(dir, 'shell.html');
-});
-afterAll(() => {
-  delete process.env.LOADTRACE_SHELL;
-  rmSync(dir, { recursive: true, force: true });
-});
 
 describe('--verify', () => {
   it('a record as written: every part ok, exit 0, with what the seal does not prove', async () => {
-    const file = join(dir, 'ok.html');
+    const file = join(scratch(), 'ok.html');
     expect((await calc(TEMPLATE, '--export', file)).code).toBe(0);
     const r = await calc(file, '--verify');
     expect(r.code).toBe(0);
@@ -46,13 +26,13 @@ describe('--verify', () => {
   });
 
   it('a forged result in the static page: exit 2 naming the static rendering, for --verify and for a plain run', async () => {
-    const file = join(dir, 'ok2.html');
+    const file = join(scratch(), 'ok2.html');
     await calc(TEMPLATE, '--export', file);
     const html = readFileSync(file, 'utf8');
     // The first ratio in the summary of checks, one digit changed (0.8… → 0.3…): what issue 14 item 4 did.
     const at = html.indexOf('<td class="lt-sum-r">0.') + '<td class="lt-sum-r">0.'.length;
     expect(at).toBeGreaterThan(100);
-    const forged = join(dir, 'forged.html');
+    const forged = join(scratch(), 'forged.html');
     writeFileSync(forged, html.slice(0, at) + (html[at] === '3' ? '4' : '3') + html.slice(at + 1));
     const v = await calc(forged, '--verify');
     expect(v.code).toBe(2);
@@ -74,10 +54,10 @@ describe('--verify', () => {
 describe('no record of a broken or altered document', () => {
   it('--export of a document with a block that cannot be read: exit 2 with the errors, no file', async () => {
     const text = readFileSync(TEMPLATE, 'utf8');
-    const broken = join(dir, 'broken.lt');
+    const broken = join(scratch(), 'broken.lt');
     // An input block whose header has no "=": the reader reports it and drops the block.
     writeFileSync(broken, text.replace(/^input (\S+)\s+(\w+) = /m, 'input $1  $2 '));
-    const out = join(dir, 'broken.html');
+    const out = join(scratch(), 'broken.html');
     const r = await calc(broken, '--export', out);
     expect(r.code).toBe(2);
     expect(r.err).toMatch(/broken\.lt:\d+:\d+: /);
@@ -86,12 +66,12 @@ describe('no record of a broken or altered document', () => {
   });
 
   it('--export from an altered record is refused (its new seal would vouch for the change)', async () => {
-    const file = join(dir, 'ok3.html');
+    const file = join(scratch(), 'ok3.html');
     await calc(TEMPLATE, '--export', file);
     const html = readFileSync(file, 'utf8');
-    const altered = join(dir, 'altered.html');
+    const altered = join(scratch(), 'altered.html');
     writeFileSync(altered, html.replace('fc = ', 'fc  = '));
-    const out = join(dir, 'again.html');
+    const out = join(scratch(), 'again.html');
     const r = await calc(altered, '--export', out);
     expect(r.code).toBe(2);
     expect(r.err).toMatch(/not written: .*altered\.html is not as Loadtrace wrote it/);

@@ -6,7 +6,7 @@
 // Loads: ASCE 7-22 §2.3.1 combination 2 (1.2D + 1.6L) on the fixture's invented values.
 
 import { describe, expect, it } from 'vitest';
-import { setCellFields, setInputValue } from '../../runtime/edit/index';
+import { setCellFields, setInputValue, setInputValueKeepUnit } from '../../runtime/edit/index';
 import { parse, serialize } from '../../runtime/format/index';
 import {
   addComment, findingsCount, isStale, issueRevision, recordState, returnToBaseline, signOff, signedStateText,
@@ -43,6 +43,13 @@ describe('record state', () => {
     expect(recordState(setCellFields(doc, 'k1', { label: 'Other words' })).kind).toBe('changed'); // any field
     // Back to the issued values: the revision again.
     expect(recordState(returnToBaseline(edited)).kind).toBe('issued');
+    // Also when the editor pinned the display unit on the way (10 psf typed where 50 psf stood is the same unit;
+    // 0.5 ksf is not: the unit shown before, psf, is pinned).
+    const pinned = returnToBaseline(setInputValueKeepUnit(doc, 'i2', '0.5 ksf'));
+    expect(pinned.cells.find((c) => c.id === 'i2')).toMatchObject({ value: '50 psf', unit: 'psf' });
+    expect(recordState(pinned).kind).toBe('issued');
+    // A display unit that changes what is shown is a change.
+    expect(recordState(setCellFields(doc, 'i2', { unit: 'ksf' })).kind).toBe('changed');
   });
 
   it('the sheet fingerprint travels with the revision through the text format', async () => {
