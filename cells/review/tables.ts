@@ -2,7 +2,7 @@
 // and the one-line marks shown on each changed cell in review mode. HTML strings
 // from escaped text, so they render the same in the page and in tests.
 
-import type { Comparison, InputChange, ResultChange } from '../../runtime/review/index';
+import { changeName, type Comparison, type InputChange, type ResultChange } from '../../runtime/review/index';
 import type { IssuedResult } from '../../runtime/review/types';
 import { deltaText } from '../../runtime/review/diff-text';
 import { escapeHtml } from '../../runtime/present/escape';
@@ -23,8 +23,9 @@ const link = (key: string, text: string): string => {
   return `<a href="#cell-${escapeHtml(id)}" data-goto="${escapeHtml(id)}">${escapeHtml(text)}</a>`;
 };
 
-function nameCell(r: { id: string; name?: string }): string {
-  return link(r.id, r.name ?? `(${r.id})`);
+/** A row's name as calc --diff gives it: an unnamed check by its label. */
+function nameCell(r: { id: string; name?: string; label?: string }): string {
+  return link(r.id, changeName(r));
 }
 
 function verdictClass(r: IssuedResult | undefined): string {

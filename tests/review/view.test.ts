@@ -46,6 +46,16 @@ describe('comparison tables and cell marks', () => {
     expect(comparisonHtml({ inputs: [], results: [], checks: [] }, 'a', 'b', true)).toContain('No input, result or check differs.');
   });
 
+  it('an unnamed check is called by its label in the tables, as calc --diff calls it (changeName)', async () => {
+    // The fixture's check without its name: 1.2 × 120 + 1.6 × 60 = 240 psf against 250 psf (ASCE 7-22 §2.3.1).
+    const unnamed = (d: CalcDocument): CalcDocument => ({ ...d, cells: d.cells.map((c) => (c.id === 'k1' ? { ...c, name: undefined } : c)) });
+    const doc = unnamed(await reviewed());
+    const html = comparisonHtml(compare(doc, await resultsOf(doc))!, 'Issued', 'Now', true);
+    const checks = plain(html.slice(html.indexOf('<caption>Checks')));
+    expect(checks).toContain('Factored load within capacity');
+    expect(checks).not.toContain('(k1)');
+  });
+
   it('a verdict is always a word, never colour alone', () => {
     expect(resultText({ id: 'k', kind: 'check', status: 'fail', text: '1.11', ratio: 1.11, value: 1.11 }, true)).toBe('1.11 NOT OK');
     expect(resultText({ id: 'k', kind: 'check', status: 'error' }, true)).toBe('error');
