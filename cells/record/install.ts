@@ -11,7 +11,8 @@ import { parse, serialize } from '../../runtime/format/index';
 import {
   DOC_ID, RECORD_LINES_CSS, STATIC_CSS, checkEmbedded, exportRecord, pageCss, readDocumentSource, staticHtml, type RecordCheck,
 } from '../../runtime/record/index';
-import { recordState, stateFileTag, type RecordState } from '../../runtime/review/index';
+import { stateFileTag } from '../../runtime/present/record-state';
+import { recordState, type RecordState } from '../../runtime/review/index';
 import type { App } from '../app';
 import { escapeHtml } from '../../runtime/present/escape';
 import { callsOf } from '../../runtime/working/calls';

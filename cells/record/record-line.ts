@@ -5,7 +5,8 @@
 
 import type { RecordCheck } from '../../runtime/record/index';
 import { SEAL_MEANING } from '../../runtime/record/index';
-import { stateSentence, stateTitle, type RecordState } from '../../runtime/review/index';
+import { stateSentence, stateTitle } from '../../runtime/present/record-state';
+import type { RecordState } from '../../runtime/review/index';
 import { escapeHtml } from '../../runtime/present/escape';
 
 export type SealStatus =

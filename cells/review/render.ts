@@ -4,7 +4,8 @@
 
 import type { CalcDocument } from '../../runtime/document';
 import type { Comparison, ResultLookup } from '../../runtime/review/index';
-import { findingsCount, isStale, signedStateText } from '../../runtime/review/index';
+import { isStale } from '../../runtime/review/index';
+import { findingsCount, signedStateText } from '../../runtime/present/record-state';
 import type { Comment, Revision, SignOff } from '../../runtime/review/types';
 import { escapeHtml } from '../../runtime/present/escape';
 import { changeCount, comparisonHtml } from './tables';

@@ -9,9 +9,10 @@
 // not become a revision just so that they can be signed.
 
 import {
-  changedSinceIssue, compare, findingsCount, latestRevision, signOff, signoffFindings, type SignOffException,
+  changedSinceIssue, compare, latestRevision, signOff, signoffFindings, type SignOffException,
 } from '../../runtime/review/index';
 import { escapeHtml } from '../../runtime/present/escape';
+import { findingsCount } from '../../runtime/present/record-state';
 import type { ReviewHost } from './host';
 import { scopeText } from './render';
 import { changeCount } from './tables';

@@ -4,7 +4,7 @@
 // written; 2 naming the first part that differs (or why nothing can be checked).
 
 import { readFileSync } from 'node:fs';
-import { stateTitle } from '../review/state';
+import { stateTitle } from '../present/record-state';
 import { looksLikeRecord, SEAL_MEANING } from '../record/index';
 import { verifyRecordFile } from '../record/node';
 

@@ -8,7 +8,8 @@
 
 import type { CalcDocument } from '../document';
 import type { ResultLookup } from '../review/revision';
-import { recordState, stateSentence, stateTitle, type RecordState } from '../review/state';
+import { stateSentence, stateTitle } from '../present/record-state';
+import { recordState, type RecordState } from '../review/state';
 import { escapeHtml } from './escape';
 import { DIGEST_ID } from './seal-parts';
 

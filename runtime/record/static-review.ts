@@ -5,6 +5,7 @@
 
 import type { CalcDocument } from '../document';
 import { isStale, type ResultLookup, type SignOff } from '../review/index';
+import { findingWord, signedStateText } from '../present/record-state';
 import { escapeHtml } from './escape';
 
 type Obj = Record<string, unknown>;
@@ -58,15 +59,13 @@ function stale(s: Obj, doc: CalcDocument, results?: ResultLookup): boolean | und
 
 /** The state a sign-off names: "Rev 0", "Rev 0 + unissued changes", or a draft never issued. */
 function signedText(s: Obj): string {
-  if (typeof s.revision !== 'string') return 'draft never issued';
-  return `Rev ${text(s.revision)}${s.unissued === true ? ' + unissued changes' : ''}`;
+  return text(signedStateText({ revision: typeof s.revision === 'string' ? s.revision : undefined, unissued: s.unissued === true }));
 }
 
 /** The NOT OK checks, errors and open comments it was given with, as a short list. */
 function exceptionsText(s: Obj): string {
-  const words: Record<string, string> = { 'not-ok': 'NOT OK', error: 'error', 'open-comment': 'open comment' };
   const list = Array.isArray(s.exceptions) ? s.exceptions.filter(isObj) : [];
-  return list.map((x) => `${words[String(x.kind)] ?? text(x.kind)} ${text(x.id)}${x.text ? ` (${text(x.text, 120)})` : ''}`).join('; ') || 'none';
+  return list.map((x) => `${findingWord(String(x.kind)) ?? text(x.kind)} ${text(x.id)}${x.text ? ` (${text(x.text, 120)})` : ''}`).join('; ') || 'none';
 }
 
 function signoffsHtml(signoffs: Obj[], doc: CalcDocument, results?: ResultLookup): string {

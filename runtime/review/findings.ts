@@ -55,18 +55,3 @@ export function seenFingerprint(doc: CalcDocument, results: ResultLookup, scope:
   });
   return fingerprint(canonical(seen));
 }
-
-const KIND_WORDS: Record<SignOffException['kind'], [string, string]> = {
-  'not-ok': ['check NOT OK', 'checks NOT OK'],
-  error: ['cell in error', 'cells in error'],
-  'open-comment': ['open comment', 'open comments'],
-};
-
-/** "1 check NOT OK and 2 open comments", or '' for none. */
-export function findingsCount(list: readonly SignOffException[]): string {
-  const parts = (Object.keys(KIND_WORDS) as SignOffException['kind'][])
-    .map((k) => [list.filter((x) => x.kind === k).length, k] as const)
-    .filter(([n]) => n > 0)
-    .map(([n, k]) => `${n} ${KIND_WORDS[k][n === 1 ? 0 : 1]}`);
-  return parts.length > 1 ? `${parts.slice(0, -1).join(', ')} and ${parts[parts.length - 1]}` : (parts[0] ?? '');
-}

@@ -4,11 +4,11 @@ export * from './types';
 export { snapshot, changedInputs, latestRevision, nextRevisionLabel, issueRevision } from './revision';
 export type { ResultLookup, IssueOptions } from './revision';
 export { addComment, reply, resolve, openComments, type Note } from './comments';
-export { signOff, isStale, withdrawSignOff, signedStateText, type SignOffRequest } from './signoff';
-export { signoffFindings, seenFingerprint, findingsCount, scopeCells } from './findings';
+export { signOff, isStale, withdrawSignOff, type SignOffRequest } from './signoff';
+export { signoffFindings, seenFingerprint, scopeCells } from './findings';
 export { fingerprint, coverFingerprint, sheetFingerprint, sectionCells, upstreamCells } from './fingerprint';
 export {
-  recordState, changedSinceIssue, stateTitle, stateSentence, stateFileTag,
+  recordState, changedSinceIssue,
   type RecordState, type RecordStateKind, type StateOptions,
 } from './state';
 export {

@@ -51,12 +51,6 @@ export function isStale(s: SignOff, doc: CalcDocument, results?: ResultLookup): 
   return results !== undefined && s.seen !== undefined && seenFingerprint(doc, results, s.scope) !== s.seen;
 }
 
-/** What the sign-off names as signed: "Rev 0", "Rev 0 + unissued changes", or "a draft never issued". */
-export function signedStateText(s: SignOff): string {
-  if (s.revision === undefined) return 'a draft never issued';
-  return s.unissued ? `Rev ${s.revision} + unissued changes` : `Rev ${s.revision}`;
-}
-
 /** Withdraws a sign-off (e.g. a stale one before signing again). */
 export function withdrawSignOff(doc: CalcDocument, id: string): CalcDocument {
   const list = doc.review?.signoffs ?? [];

@@ -47,35 +47,3 @@ export function recordState(doc: CalcDocument, options: StateOptions = {}): Reco
   if (!changedSinceIssue(doc, options.results)) return { kind: 'issued', revision };
   return { kind: options.reviewing ? 'review-copy' : 'changed', revision };
 }
-
-const rev = (s: RecordState): string => `Rev ${s.revision!.label}${s.revision!.date ? ` (issued ${s.revision!.date})` : ''}`;
-
-/** The state in a few words, e.g. "Issued: Rev 0, 2026-12-01". */
-export function stateTitle(s: RecordState): string {
-  switch (s.kind) {
-    case 'draft': return 'Draft: never issued';
-    case 'issued': return `Issued: Rev ${s.revision!.label}${s.revision!.date ? `, ${s.revision!.date}` : ''}`;
-    case 'changed': return `Draft: changed since Rev ${s.revision!.label}`;
-    case 'review-copy': return `Working copy from review of Rev ${s.revision!.label}`;
-  }
-}
-
-/** One plain sentence saying what the record is and is not. */
-export function stateSentence(s: RecordState): string {
-  switch (s.kind) {
-    case 'draft': return `This sheet has never been issued${s.typed ? ` (the title block's revision “${s.typed}” was typed, not issued)` : ''}: its values are a draft, not an issued calculation.`;
-    case 'issued': return `This is ${rev(s)} exactly as issued: inputs and results unchanged since.`;
-    case 'changed': return `This sheet was changed after ${rev(s)}; the changes are not issued, so this is a draft, not ${rev(s)}.`;
-    case 'review-copy': return `This is a checker's working copy: ${rev(s)} with changes made in review that are not issued. It is not the issued record.`;
-  }
-}
-
-/** A file-name part for the state: a changed copy never takes the issued file's name. */
-export function stateFileTag(s: RecordState): string {
-  switch (s.kind) {
-    case 'draft': return 'draft';
-    case 'issued': return `rev${s.revision!.label}`;
-    case 'changed': return `draft-after-rev${s.revision!.label}`;
-    case 'review-copy': return `review-copy-of-rev${s.revision!.label}`;
-  }
-}

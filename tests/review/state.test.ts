@@ -8,9 +8,9 @@
 import { describe, expect, it } from 'vitest';
 import { setCellFields, setInputValue, setInputValueKeepUnit } from '../../runtime/edit/index';
 import { parse, serialize } from '../../runtime/format/index';
+import { findingsCount, signedStateText, stateFileTag, stateTitle } from '../../runtime/present/record-state';
 import {
-  addComment, findingsCount, isStale, issueRevision, recordState, returnToBaseline, signOff, signedStateText,
-  signoffFindings, stateFileTag, stateTitle,
+  addComment, isStale, issueRevision, recordState, returnToBaseline, signOff, signoffFindings,
 } from '../../runtime/review/index';
 import { resultsOf, sheet } from './fixture';
 

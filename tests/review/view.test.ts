@@ -48,7 +48,7 @@ describe('comparison tables and cell marks', () => {
 
   it('an unnamed check is called by its label in the tables, as calc --diff calls it (changeName)', async () => {
     // The fixture's check without its name: 1.2 × 120 + 1.6 × 60 = 240 psf against 250 psf (ASCE 7-22 §2.3.1).
-    const unnamed = (d: CalcDocument): CalcDocument => ({ ...d, cells: d.cells.map((c) => (c.id === 'k1' ? { ...c, name: undefined } : c)) });
+    const unnamed = (d: CalcDocument): CalcDocument => ({ ...d, cells: d.cells.map((c) => (c.kind === 'check' && c.id === 'k1' ? { ...c, name: undefined } : c)) });
     const doc = unnamed(await reviewed());
     const html = comparisonHtml(compare(doc, await resultsOf(doc))!, 'Issued', 'Now', true);
     const checks = plain(html.slice(html.indexOf('<caption>Checks')));
