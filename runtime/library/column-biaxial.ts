@@ -14,6 +14,8 @@ import { EDITIONS, edition, finite, nonNegative } from './support-args';
 import { BARS, barArea } from './rebar';
 import { axialLimits, columnSection, type ColumnSection } from './column-section';
 import { axialStrengthAt, momentStrengthAt } from './column-interaction';
+import { PM_REFERENCE, sectionSteps } from './column-working';
+import { quietly, working } from '../working/recorder';
 
 export interface BiaxialSections {
   /** Bending in direction 1: depth c1, width c2. */
@@ -59,19 +61,39 @@ export function biaxialCheck(sec: BiaxialSections, pu: number, mu1: number, mu2:
   const M1 = Math.abs(finite('Mu1', mu1));
   const M2 = Math.abs(finite('Mu2', mu2));
   const { s1, s2 } = sec;
-  const limits = axialLimits(s1);
-  if (P >= 0.1 * s1.fc * s1.ag) {
-    const phiP1 = uncapped(s1, M1 / P);
-    const phiP2 = uncapped(s2, M2 / P);
+  const w = working();
+  const limits = w ? sectionSteps(w, s1) : axialLimits(s1);
+  const vars = { Pu: [P, 'kip'], Mu1: [M1, 'kip*ft'], Mu2: [M2, 'kip*ft'], fc: [s1.fc, 'psi'] } as const;
+  const reciprocalMethod = P >= 0.1 * s1.fc * s1.ag;
+  w?.step('reciprocal', 'Pu >= 0.1 * fc * A_g', reciprocalMethod, '', {
+    vars, note: reciprocalMethod ? "Bresler's reciprocal load method" : 'low axial load: the straight-line contour', clause: 'Bresler (1960), common practice',
+  });
+  if (reciprocalMethod) {
+    const phiP1 = quietly(() => uncapped(s1, M1 / P));
+    const phiP2 = quietly(() => uncapped(s2, M2 / P));
     const phiPo = 0.65 * limits.po;
     const reciprocal = 1 / phiP1 + 1 / phiP2 - 1 / phiPo;
     const phiPni = Math.min(1 / reciprocal, limits.phiPnMax);
+    if (w) {
+      w.lookup('phi_P1', phiP1, 'kip', 'design curve in direction 1 at e1 = Mu1/Pu (not capped)', PM_REFERENCE);
+      w.lookup('phi_P2', phiP2, 'kip', 'design curve in direction 2 at e2 = Mu2/Pu (not capped)', PM_REFERENCE);
+      w.step('phi_P_o', '0.65 * P_o', phiPo, 'kip');
+      w.step('phi_Pni', 'min(1 / (1 / phi_P1 + 1 / phi_P2 - 1 / phi_P_o), phi_Pn_max)', phiPni, 'kip', { clause: 'Bresler (1960)', governs: phiPni === limits.phiPnMax });
+      w.step('ratio', 'Pu / phi_Pni', P / phiPni, '', { vars });
+    }
     return { method: 'reciprocal', phiP1, phiP2, phiPo, phiPni, ratio: P / phiPni };
   }
-  const phiMn1 = momentStrengthAt(s1, P).phiMn;
-  const phiMn2 = momentStrengthAt(s2, P).phiMn;
+  const phiMn1 = quietly(() => momentStrengthAt(s1, P).phiMn);
+  const phiMn2 = quietly(() => momentStrengthAt(s2, P).phiMn);
   const part = (m: number, cap: number) => (m === 0 ? 0 : cap > 0 ? m / cap : Infinity);
-  return { method: 'contour', phiMn1, phiMn2, ratio: part(M1, phiMn1) + part(M2, phiMn2) };
+  const ratio = part(M1, phiMn1) + part(M2, phiMn2);
+  if (w) {
+    w.lookup('phi_Mn1', phiMn1, 'kip*ft', 'design curve in direction 1 at Pu', PM_REFERENCE);
+    w.lookup('phi_Mn2', phiMn2, 'kip*ft', 'design curve in direction 2 at Pu', PM_REFERENCE);
+    const term = (i: 1 | 2, m: number) => (m === 0 ? '0' : `Mu${i} / phi_Mn${i}`);
+    w.step('ratio', `${term(1, M1)} + ${term(2, M2)}`, ratio, '', { vars, clause: 'straight-line load contour (common practice)' });
+  }
+  return { method: 'contour', phiMn1, phiMn2, ratio };
 }
 
 const PARAMS: LibParam[] = [
@@ -110,8 +132,12 @@ export const functions: LibFunction[] = [
     returns: 'text',
     clause: "Bresler (1960) for Pu ≥ 0.1f'cAg (common practice)",
     doc: 'Which biaxial method applies: reciprocal load, or the straight-line contour at low axial load',
-    fn: (...a: Args) => (run(a).method === 'reciprocal'
-      ? "reciprocal load (Bresler 1960), Pu ≥ 0.1f'cAg"
-      : "straight-line contour Mu1/φMn1 + Mu2/φMn2, Pu < 0.1f'cAg"),
+    fn: (...a: Args) => {
+      const text = run(a).method === 'reciprocal'
+        ? "reciprocal load (Bresler 1960), Pu ≥ 0.1f'cAg"
+        : "straight-line contour Mu1/φMn1 + Mu2/φMn2, Pu < 0.1f'cAg";
+      working()?.step('method', undefined, text, '', { clause: 'Bresler (1960), common practice' });
+      return text;
+    },
   }),
 ];

@@ -12,6 +12,9 @@ import {
   axialLimits, balancedPoint, columnSection, designPoint,
   type AxialLimits, type ColumnSection, type DesignPoint,
 } from './column-section';
+import { ES } from './resistance-factors';
+import { pmFigure, PM_REFERENCE, pointSteps, sectionSteps } from './column-working';
+import { quietly, working } from '../working/recorder';
 
 /**
  * Neutral axis depths walked: geometric from 1e-4 h to 60 h (pure compression is reached
@@ -183,6 +186,91 @@ export function sectionOf(fc: number, fy: number, b: number, h: number, nB: numb
 type SectionArgs = [number, number, number, number, number, number, string, number, string?];
 
 const CLAUSE = "ACI 318-19 §22.2 (strain compatibility, εcu = 0.003, Whitney block, β1), Table 21.2.2 (φ from εt), §22.4.2.1 (Pn,max = 0.80Po, tied)";
+/** φMn at Pu with its working: the section, the point where φPn = Pu, the result, the figure. */
+function momentWorking(pu: number, a: SectionArgs, pick: 'phiMn' | 'phi'): number {
+  const w = working();
+  const s = sectionOf(...a);
+  const r = quietly(() => momentStrengthAt(s, pu));
+  const value = pick === 'phiMn' ? r.phiMn : r.point?.point.phi ?? 0.65;
+  if (w) {
+    const limits = sectionSteps(w, s);
+    if (!r.point) {
+      w.step('over', 'Pu > phi_Pn_max', true, '', { vars: { Pu: [pu, 'kip'], phi_Pn_max: [limits.phiPnMax, 'kip'] }, note: 'beyond the flat top of the design curve' });
+    } else {
+      pointSteps(w, r.point.point, 'neutral-axis depth where φPn = Pu');
+    }
+    pmFigure(w, pu, 0, a);
+    if (pick === 'phiMn') w.lookup('phi_Mn', value, 'kip*ft', r.point ? 'on the design curve at Pu (interpolated across the last bracket)' : 'no moment strength above φPn,max', CLAUSE);
+    else w.lookup('phi', value, '', r.point ? 'at the point where φPn = Pu' : 'compression-controlled (tied) above φPn,max', 'ACI 318-19 Table 21.2.2');
+  }
+  return value;
+}
+
+/** φPn at eccentricity e with its working. */
+function axialWorking(e: number, a: SectionArgs): number {
+  const w = working();
+  const s = sectionOf(...a);
+  const r = quietly(() => axialStrengthAt(s, e));
+  if (w) {
+    sectionSteps(w, s);
+    if (e > 0) pointSteps(w, r.point.point, 'neutral-axis depth where the line M = e·P meets the curve');
+    pmFigure(w, r.phiPn, r.phiPn * e, a);
+    w.step('phi_Pn', 'min(phi_Pn_e, phi_Pn_max)', r.phiPn, 'kip', {
+      vars: { phi_Pn_e: [r.point.phiPn, 'kip'] }, clause: 'ACI 318-19 §22.4.2.1', governs: r.capped,
+      note: r.capped ? 'capped at φPn,max' : 'on the design curve at e',
+    });
+  }
+  return r.phiPn;
+}
+
+/** Demand/capacity along the load line with its working. */
+function ratioWorking(pu: number, mu: number, a: SectionArgs): number {
+  const w = working();
+  const s = sectionOf(...a);
+  const ratio = quietly(() => pmRatio(s, pu, mu));
+  if (w) {
+    const limits = sectionSteps(w, s);
+    const P = Math.max(0, pu);
+    const M = Math.abs(mu);
+    const vars = { Pu: [P, 'kip'], Mu: [M, 'kip*ft'] } as const;
+    pmFigure(w, pu, mu, a);
+    if (P === 0 && M === 0) w.step('ratio', '0', 0, '', { note: 'no demand' });
+    else if (M === 0) w.step('ratio', 'Pu / phi_Pn_max', ratio, '', { vars, note: 'concentric: against φPn,max', clause: PM_REFERENCE });
+    else if (P === 0) {
+      const m0 = quietly(() => momentStrengthAt(s, 0).phiMn);
+      w.lookup('phi_Mn', m0, 'kip*ft', 'on the design curve at Pu = 0', CLAUSE);
+      w.step('ratio', 'Mu / phi_Mn', ratio, '', { vars, clause: PM_REFERENCE });
+    } else {
+      const cap = quietly(() => axialStrengthAt(s, M / P));
+      w.step('e', 'Mu / Pu', M / P, 'in', { vars, note: 'the load line through (Pu, Mu)' });
+      pointSteps(w, cap.point.point, 'neutral-axis depth where the load line meets the curve');
+      w.step('phi_Pn', 'min(phi_Pn_e, phi_Pn_max)', cap.phiPn, 'kip', {
+        vars: { phi_Pn_e: [cap.point.phiPn, 'kip'], phi_Pn_max: [limits.phiPnMax, 'kip'] }, governs: cap.capped,
+        note: cap.capped ? 'capped at φPn,max' : undefined,
+      });
+      w.step('ratio', 'Pu / phi_Pn', ratio, '', { vars, clause: 'along the load line (common practice)' });
+    }
+  }
+  return ratio;
+}
+
+/** The balanced point with its working: εty, cb, and Pb or Mb there. */
+function balancedWorking(a: SectionArgs, pick: 'pn' | 'mn'): number {
+  const w = working();
+  const s = sectionOf(...a);
+  const b = quietly(() => balancedPoint(s));
+  if (w) {
+    sectionSteps(w, s);
+    w.step('eps_ty', 'fy / Es', s.fy / ES, '', { vars: { fy: [s.fy, 'psi'], Es: [ES, 'psi'] }, clause: 'ACI 318-19 §21.2.2.1' });
+    w.step('c_b', '0.003 * d_t / (0.003 + eps_ty)', b.c, 'in', { vars: { d_t: [s.dt, 'in'] }, clause: 'ACI 318-19 §22.2.2.1', note: 'εt = εty at the extreme tension row' });
+    w.lookup('a', b.a, 'in', 'β1·c_b', 'ACI 318-19 §22.2.2.4.1');
+    pmFigure(w, b.pn, b.mn, a);
+    if (pick === 'pn') w.lookup('P_b', b.pn, 'kip', 'concrete block and every bar row at c_b', PM_REFERENCE);
+    else w.lookup('M_b', b.mn, 'kip*ft', 'about the plastic centroid, at c_b', PM_REFERENCE);
+  }
+  return pick === 'pn' ? b.pn : b.mn;
+}
+
 const PU: LibParam = { name: 'Pu', type: 'N', doc: 'factored axial load (compression positive)' };
 const MU: LibParam = { name: 'Mu', type: 'N*m', doc: 'factored moment about the same axis' };
 
@@ -194,7 +282,7 @@ export const functions: LibFunction[] = [
     returns: 'N*m',
     clause: CLAUSE,
     doc: 'Design moment strength φMn of a tied rectangular column at the axial load Pu (0 above φPn,max)',
-    fn: (pu: number, ...a: SectionArgs) => momentStrengthAt(sectionOf(...a), pu).phiMn,
+    fn: (pu: number, ...a: SectionArgs) => momentWorking(pu, a, 'phiMn'),
   }),
   defineFunction({
     name: 'col_phi_at',
@@ -203,7 +291,7 @@ export const functions: LibFunction[] = [
     returns: '1',
     clause: 'ACI 318-19 Table 21.2.2: φ from εt, 0.65 (tied) to 0.90',
     doc: 'Strength reduction factor φ at the point of the interaction curve where φPn = Pu',
-    fn: (pu: number, ...a: SectionArgs) => momentStrengthAt(sectionOf(...a), pu).point?.point.phi ?? 0.65,
+    fn: (pu: number, ...a: SectionArgs) => momentWorking(pu, a, 'phi'),
   }),
   defineFunction({
     name: 'col_phi_pn_e',
@@ -212,7 +300,7 @@ export const functions: LibFunction[] = [
     returns: 'N',
     clause: CLAUSE,
     doc: 'Design axial strength φPn of a tied rectangular column at eccentricity e, capped at φPn,max',
-    fn: (e: number, ...a: SectionArgs) => axialStrengthAt(sectionOf(...a), e).phiPn,
+    fn: (e: number, ...a: SectionArgs) => axialWorking(e, a),
   }),
   defineFunction({
     name: 'col_pm_ratio',
@@ -221,7 +309,7 @@ export const functions: LibFunction[] = [
     returns: '1',
     clause: CLAUSE + '; ratio along the load line (common practice)',
     doc: 'Demand/capacity of (Pu, Mu) against the design interaction curve, along the line from the origin',
-    fn: (pu: number, mu: number, ...a: SectionArgs) => pmRatio(sectionOf(...a), pu, mu),
+    fn: (pu: number, mu: number, ...a: SectionArgs) => ratioWorking(pu, mu, a),
   }),
   defineFunction({
     name: 'col_pb',
@@ -230,7 +318,7 @@ export const functions: LibFunction[] = [
     returns: 'N',
     clause: 'ACI 318-19 §21.2.2.1, §22.2: balanced point, εt = εty = fy/Es',
     doc: 'Nominal axial strength Pb at the balanced point',
-    fn: (...a: SectionArgs) => balancedPoint(sectionOf(...a)).pn,
+    fn: (...a: SectionArgs) => balancedWorking(a, 'pn'),
   }),
   defineFunction({
     name: 'col_mb',
@@ -239,6 +327,6 @@ export const functions: LibFunction[] = [
     returns: 'N*m',
     clause: 'ACI 318-19 §21.2.2.1, §22.2: balanced point, εt = εty = fy/Es',
     doc: 'Nominal moment strength Mb at the balanced point',
-    fn: (...a: SectionArgs) => balancedPoint(sectionOf(...a)).mn,
+    fn: (...a: SectionArgs) => balancedWorking(a, 'mn'),
   }),
 ];

@@ -11,17 +11,25 @@ import { POSITIONS, position, type Position } from './punching-perimeter';
 import { ddmMo } from './slab-ddm';
 import { ecConcrete } from './concrete';
 import { inch } from '../units/si';
+import { working } from '../working/recorder';
 
 /** Msc = 0.07[(qDu + 0.5qLu)ℓ2ℓn² − q′Du ℓ′2 (ℓ′n)²] (ACI 318-19 Eq. 8.10.7.2) [from memory]; the shorter span's dead load only. */
 export function mscInterior(qDu: number, qLu: number, l2: number, ln: number, qDu2 = qDu, l2b = l2, ln2 = ln): number {
   const longer = (nonNegative('qDu', qDu) + 0.5 * nonNegative('qLu', qLu)) * positive('l2', l2) * positive('ln', ln) ** 2;
   const shorter = nonNegative("q'Du", qDu2) * positive("l2'", l2b) * positive("ln'", ln2) ** 2;
-  return 0.07 * Math.max(0, longer - shorter);
+  const msc = 0.07 * Math.max(0, longer - shorter);
+  working()?.step('Msc', '0.07 * max(0, (qDu + 0.5 * qLu) * l2 * ln^2 - qDu2 * l2b * ln2^2)', msc, 'kip*ft', {
+    vars: { qDu: [qDu, 'psf'], qLu: [qLu, 'psf'], l2: [l2, 'ft'], ln: [ln, 'ft'], qDu2: [qDu2, 'psf'], l2b: [l2b, 'ft'], ln2: [ln2, 'ft'] },
+    clause: 'ACI 318-19 Eq. 8.10.7.2 [from memory]', note: 'dead load only on the shorter span side',
+  });
+  return msc;
 }
 
 /** Msc = 0.3Mo at an edge support (ACI 318-19 §8.10.7.3; 318-11 §13.6.3.6) [from memory]. */
 export function mscEdge(mo: number): number {
-  return 0.3 * nonNegative('Mo', mo);
+  const msc = 0.3 * nonNegative('Mo', mo);
+  working()?.step('Msc', '0.3 * Mo', msc, 'kip*ft', { vars: { Mo: [mo, 'kip*ft'] }, clause: 'ACI 318-19 §8.10.7.3 [from memory]' });
+  return msc;
 }
 
 /**
@@ -42,14 +50,24 @@ export function mscAtColumn(pos: Position, qDu: number, qLu: number, l1: number,
  */
 export function colMomentShare(lBelow: number, lAbove: number, iBelow = 1, iAbove = 1): number {
   const kb = positive('I_below', iBelow) / positive('l_below', lBelow);
-  if (nonNegative('l_above', lAbove) === 0) return 1;
+  const w = working();
+  if (nonNegative('l_above', lAbove) === 0) {
+    w?.step('share', '1', 1, '', { note: 'no column above: the column below takes it all' });
+    return 1;
+  }
   const ka = positive('I_above', iAbove) / lAbove;
+  w?.step('share', '(I_below / l_below) / (I_below / l_below + I_above / l_above)', kb / (kb + ka), '', {
+    vars: { I_below: [iBelow, 'in^4'], l_below: [lBelow, 'ft'], I_above: [iAbove, 'in^4'], l_above: [lAbove, 'ft'] },
+    clause: 'ACI 318-19 §8.10.7.2; 4EI/ℓ with the same E (common practice)',
+  });
   return kb / (kb + ka);
 }
 
 /** M2,min = Pu(0.6 + 0.03h), h and 0.6 in inches (ACI 318-19 Eq. 6.6.4.5.4). */
 export function m2Min(pu: number, h: number): number {
-  return nonNegative('Pu', pu) * (0.6 * inch + 0.03 * positive('h', h));
+  const m = nonNegative('Pu', pu) * (0.6 * inch + 0.03 * positive('h', h));
+  working()?.step('M2_min', 'Pu * (0.6 + 0.03 * h)', m, 'kip*in', { vars: { Pu: [pu, 'kip'], h: [h, 'in'] }, code: true, clause: 'ACI 318-19 Eq. 6.6.4.5.4' });
+  return m;
 }
 
 /** Cm = 0.6 − 0.4 M1/M2, M1/M2 negative in single curvature (ACI 318-19 Eq. 6.6.4.5.3a); no end moments: 1.0. */
@@ -57,11 +75,15 @@ export function cmFactor(m1: number, m2: number): number {
   const M1 = finite('M1', m1);
   const M2 = finite('M2', m2);
   if (M2 === 0) {
-    if (M1 === 0) return 1;
+    if (M1 === 0) {
+      working()?.step('Cm', '1', 1, '', { note: 'no end moments', clause: 'ACI 318-19 §6.6.4.5.3' });
+      return 1;
+    }
     throw new LibraryError('M2 must be the larger end moment: |M1| ≤ |M2|');
   }
   const r = M1 / M2;
   if (Math.abs(r) > 1 + 1e-12) throw new LibraryError(`M2 must be the larger end moment: |M1/M2| = ${Math.abs(r)} > 1`);
+  working()?.step('Cm', '0.6 - 0.4 * M1 / M2', 0.6 - 0.4 * r, '', { vars: { M1: [M1, 'kip*ft'], M2: [M2, 'kip*ft'] }, clause: 'ACI 318-19 Eq. 6.6.4.5.3a' });
   return 0.6 - 0.4 * r;
 }
 
@@ -79,14 +101,22 @@ export function eiEffective(fc: number, b: number, h: number, betaDns: number): 
   if (beta > 1) throw new LibraryError(`βdns is a ratio of sustained to total factored axial load, at most 1 (got ${beta})`);
   const ec = ecConcrete(fc);
   const ig = (positive('b', b) * positive('h', h) ** 3) / 12;
-  return { ec, ig, betaDns: beta, eiEff: (0.4 * ec * ig) / (1 + beta) };
+  const eiEff = (0.4 * ec * ig) / (1 + beta);
+  const w = working();
+  if (w) {
+    w.step('I_g', 'b * h^3 / 12', ig, 'in^4', { vars: { b: [b, 'in'], h: [h, 'in'] } });
+    w.step('EI_eff', '0.4 * Ec * I_g / (1 + beta_dns)', eiEff, 'kip*in^2', { vars: { beta_dns: beta }, clause: 'ACI 318-19 Eq. 6.6.4.4.4a' });
+  }
+  return { ec, ig, betaDns: beta, eiEff };
 }
 
 /** Pc = π²(EI)eff/(kℓu)² (ACI 318-19 Eq. 6.6.4.4.2). */
 export function pcColumn(eiEff: number, k: number, lu: number): number {
   const K = positive('k', k);
   if (K > 1) throw new LibraryError(`k for a braced (nonsway) column is at most 1.0 (§6.6.4.4.3), got ${K}`);
-  return (Math.PI ** 2 * positive('EI_eff', eiEff)) / (K * positive('lu', lu)) ** 2;
+  const pc = (Math.PI ** 2 * positive('EI_eff', eiEff)) / (K * positive('lu', lu)) ** 2;
+  working()?.step('P_c', 'pi^2 * EI_eff / (k * lu)^2', pc, 'kip', { vars: { EI_eff: [eiEff, 'kip*in^2'], k: K, lu: [lu, 'ft'] }, clause: 'ACI 318-19 Eq. 6.6.4.4.2' });
+  return pc;
 }
 
 /** δ = Cm/(1 − Pu/(0.75Pc)) ≥ 1.0 (ACI 318-19 Eq. 6.6.4.5.2). */
@@ -97,7 +127,11 @@ export function deltaNonsway(pu: number, pc: number, cm: number): number {
   if (P >= 0.75 * Pc) {
     throw new LibraryError('Pu ≥ 0.75Pc: the column would buckle before carrying the moment (Eq. 6.6.4.5.2); enlarge it or shorten ℓu');
   }
-  return Math.max(1, C / (1 - P / (0.75 * Pc)));
+  const delta = Math.max(1, C / (1 - P / (0.75 * Pc)));
+  working()?.step('delta', 'max(1, Cm / (1 - Pu / (0.75 * P_c)))', delta, '', {
+    vars: { Cm: C, Pu: [P, 'kip'], P_c: [Pc, 'kip'] }, clause: 'ACI 318-19 Eq. 6.6.4.5.2', governs: delta === 1, note: delta === 1 ? 'not less than 1.0' : undefined,
+  });
+  return delta;
 }
 
 export interface MagnifiedMoment {
@@ -120,12 +154,18 @@ export function magnifiedMoment(
   pu: number, m1: number, m2: number, fc: number, b: number, h: number, k: number, lu: number, betaDns: number,
 ): MagnifiedMoment {
   const M2 = Math.abs(finite('M2', m2));
+  const w = working()?.open('mc_nonsway', { Pu: [pu, 'kip'], M1: [m1, 'kip*ft'], M2: [m2, 'kip*ft'], fc: [fc, 'psi'], b: [b, 'in'], h: [h, 'in'], k, lu: [lu, 'ft'], beta_dns: betaDns }, 'ACI 318-19 §6.6.4.5');
   const mMin = m2Min(pu, h);
   const m2Used = Math.max(M2, mMin);
-  const cm = M2 >= mMin ? cmFactor(m1, m2) : 1;
+  w?.step('M2_used', 'max(abs(M2), M2_min)', m2Used, 'kip*ft', { vars: { M2: [M2, 'kip*ft'] }, governs: mMin > M2, note: mMin > M2 ? 'the minimum moment governs' : undefined });
+  let cm = 1;
+  if (M2 >= mMin) cm = cmFactor(m1, m2);
+  else w?.step('Cm', '1', 1, '', { note: 'M2,min governs: Cm = 1.0', clause: 'ACI 318-19 §6.6.4.5.4' });
   const stiffness = eiEffective(fc, b, h, betaDns);
   const pc = pcColumn(stiffness.eiEff, k, lu);
   const delta = deltaNonsway(pu, pc, cm);
+  w?.step('M_c', 'delta * M2_used', delta * m2Used, 'kip*ft', { clause: 'ACI 318-19 Eq. 6.6.4.5.1' });
+  w?.end(delta * m2Used, 'kip*ft');
   return { m2: M2, m2Min: mMin, m2Used, cm, stiffness, pc, delta, mc: delta * m2Used };
 }
 

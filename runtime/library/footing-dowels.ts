@@ -10,6 +10,7 @@ import { LibraryError, defineFunction, type LibFunction, type LibParam } from '.
 import { finite, lambdaFactor, optional, positive } from './support-args';
 import { sqrtFcShearPsi } from './shear-size-effect';
 import { inch, psi } from '../units/si';
+import { working } from '../working/recorder';
 
 function psiR(v: number): number {
   if (v !== 1 && v !== 0.75) throw new LibraryError(`psi_r is 1.0, or 0.75 with the confining ties of §25.4.9.3 (got ${v})`);
@@ -30,7 +31,16 @@ export function ldc(db: number, fy: number, fc: number, psi_r = 1, lambda = 1): 
   const root = sqrtFcShearPsi(fc);
   const byConcrete = (0.02 * fyPsi * psi_r) / (lambda * root);
   const bySteel = 0.0003 * fyPsi * psi_r;
-  return Math.max(Math.max(byConcrete, bySteel) * d, 8 * inch);
+  const l = Math.max(Math.max(byConcrete, bySteel) * d, 8 * inch);
+  const w = working();
+  if (w) {
+    const vars = { fy: [fy, 'psi'], psi_r, lambda, db: [d, 'in'] } as const;
+    const clause = 'ACI 318-19 §25.4.9.2 [from memory]';
+    w.step('k_c', '0.02 * fy * psi_r / (lambda * sqrt_fc)', byConcrete, '', { vars, code: true, clause });
+    w.step('k_s', '0.0003 * fy * psi_r', bySteel, '', { vars, code: true, clause });
+    w.step('l_dc', 'max(max(k_c, k_s) * db, 8)', l, 'in', { vars, code: true, clause: 'ACI 318-19 §25.4.9.1 [from memory]', governs: l === 8 * inch, note: l === 8 * inch ? 'the 8 in minimum governs' : undefined });
+  }
+  return l;
 }
 
 /**
@@ -41,22 +51,40 @@ export function lsc(db: number, fy: number, fc: number): number {
   const d = barSize(db);
   const fyPsi = positive('fy', fy) / psi;
   if (fyPsi > 100000 * (1 + 1e-9)) throw new LibraryError('fy above 100 ksi is outside §25.5.5.1');
-  const perDb = fyPsi <= 60000 * (1 + 1e-9) ? 0.0005 * fyPsi : 0.0009 * fyPsi - 24;
+  const low = fyPsi <= 60000 * (1 + 1e-9);
+  const perDb = low ? 0.0005 * fyPsi : 0.0009 * fyPsi - 24;
   const base = Math.max(perDb * d, 12 * inch);
-  return positive('fc', fc) / psi < 3000 ? (base * 4) / 3 : base;
+  const weak = positive('fc', fc) / psi < 3000;
+  const w = working();
+  if (w) {
+    const vars = { fy: [fy, 'psi'], db: [d, 'in'] } as const;
+    const clause = 'ACI 318-19 §25.5.5.1 [from memory]';
+    w.step('k_sc', low ? '0.0005 * fy' : '0.0009 * fy - 24', perDb, '', { vars, code: true, clause, note: low ? 'fy ≤ 60,000 psi' : 'fy above 60,000 psi' });
+    w.step('l_sc', 'max(k_sc * db, 12)', base, 'in', { vars, code: true, clause, governs: base === 12 * inch });
+    if (weak) w.step('l_sc', '4 / 3 * l_sc', (base * 4) / 3, 'in', { code: true, clause, note: "f′c below 3000 psi: one third more" });
+  }
+  return weak ? (base * 4) / 3 : base;
 }
 
 /** The lap of bars of two sizes: the larger of ℓdc of the larger bar and ℓsc of the smaller (ACI 318-19 §25.5.5.4) [from memory]. */
 export function lapDowelColumn(dbDowel: number, dbColumn: number, fy: number, fcColumn: number, psi_r = 1, lambda = 1): number {
   const small = Math.min(barSize(dbDowel), barSize(dbColumn));
   const large = Math.max(dbDowel, dbColumn);
-  return Math.max(ldc(large, fy, fcColumn, psi_r, lambda), lsc(small, fy, fcColumn));
+  const w = working();
+  if (w) w.method('ℓdc of the larger bar and ℓsc of the smaller, the larger governs', 'ACI 318-19 §25.5.5.4 [from memory]');
+  const dc = ldc(large, fy, fcColumn, psi_r, lambda);
+  const sc = lsc(small, fy, fcColumn);
+  w?.step('l_lap', 'max(l_dc, l_sc)', Math.max(dc, sc), 'in', { governs: true, note: dc >= sc ? 'ℓdc of the larger bar governs' : 'ℓsc of the smaller bar governs' });
+  return Math.max(dc, sc);
 }
 
 /** Straight length for the dowels in the footing: h − cover − 2 db(mat) − db(dowel) (common practice). */
 export function ldcAvailFooting(h: number, cover: number, dbMat: number, dbDowel: number): number {
   const avail = positive('h', h) - positive('cover', cover) - 2 * positive('db_mat', dbMat) - positive('db_dowel', dbDowel);
   if (avail <= 0) throw new LibraryError('no depth is left for the dowels: h − cover − 2·db(mat) − db(dowel) ≤ 0');
+  working()?.step('l_avail', 'h - cover - 2 * db_mat - db_dowel', avail, 'in', {
+    vars: { h: [h, 'in'], cover: [cover, 'in'], db_mat: [dbMat, 'in'], db_dowel: [dbDowel, 'in'] }, clause: 'common practice',
+  });
   return avail;
 }
 
