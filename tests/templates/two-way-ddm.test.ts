@@ -170,6 +170,52 @@ describe('two-way-ddm.lt minimum thickness by edition and by panel', () => {
   });
 });
 
+describe('two-way-ddm.lt one-way shear in the slab at d from the interior column', () => {
+  // Wide-beam shear across the panel width ℓ2 at d from the face of the interior support
+  // (ACI 318-19 §8.5.3.1.1 and §8.4.3.2, clause numbers from memory). The end span carries
+  // more than half its load to the interior support: statics of a span with end moments
+  // M_ext and M_int gives V_face = qu ℓ2 ℓn/2 + (M_int − M_ext)/ℓn (common practice), with
+  // the Table 8.10.4.2 moments (0.26 and 0.70 Mo, from memory).
+  /** ρw of the top steel over the interior support: the #5 strips as spaced by the template. */
+  function rhoTop(sCs: number, sMs: number): number {
+    return ((0.31 / sCs) * bcs * 12 + (0.31 / sMs) * bms * 12) / (l2 * 12 * d);
+  }
+  /** φVc = 0.75·8λs(ρw)^(1/3)√f'c·bw·d, λs = 1 for d ≤ 10 in (Table 22.5.5.1(c), §22.5.5.1.3, from memory). */
+  const phiVc = (rho: number) => 0.75 * 8 * Math.cbrt(rho) * Math.sqrt(fc) * l2 * 12 * d;
+
+  it("end span: the end moments' difference adds to the interior support's shear", async () => {
+    const run = await runTemplate(FILE);
+    try {
+      // Vu = 232·18·(18.667/2 − 6.9375/12) + (0.70 − 0.26)·181,889/18.667
+      //    = 4176·8.7552 + 0.44·9744.1 = 36,562 + 4,287 = 40,849 lb.
+      const vu = qu * l2 * (ln / 2 - d / 12) + ((0.7 - 0.26) * Mo) / ln;
+      near(run.num('Vu_beam'), vu / 1000);
+      near(run.num('Vu_beam'), 40.85, 1e-3);
+      // Top steel #5 at 10.5 in (column strip) and 16 in (middle strip) over 9 ft each:
+      // (0.31/10.5 + 0.31/16)·108 = 5.281 in² on 216·6.9375 in²: ρw = 0.003524.
+      const rho = rhoTop(10.5, 16);
+      near(run.num('rho_w_top'), rho);
+      // φVc = 0.75·8·0.15219·63.246·216·6.9375 = 86,540 lb; ratio 0.472.
+      near(run.ratio('beam_shear_ok'), vu / phiVc(rho));
+      expect(run.state('beam_shear_ok').status).toBe('ok');
+    } finally {
+      run.dispose();
+    }
+  });
+
+  it("interior span: equal end moments (0.65 Mo each side, §8.10.4.1), so half the span's load", async () => {
+    const run = await runTemplate(FILE, { span_type: 'interior' });
+    try {
+      const vu = qu * l2 * (ln / 2 - d / 12); // 36,562 lb
+      near(run.num('Vu_beam'), vu / 1000);
+      const r = strip(0.75 * 0.65 * Mo, bcs), m = strip(0.25 * 0.65 * Mo, bms);
+      near(run.ratio('beam_shear_ok'), vu / phiVc(rhoTop(r.s, m.s)));
+    } finally {
+      run.dispose();
+    }
+  });
+});
+
 describe('two-way-ddm.lt as a document', () => {
   it('is well formed, round-trips and runs headless with exit code 0', async () => {
     expectWellFormed(FILE);
