@@ -7,7 +7,7 @@
 // functions on SI numbers with the position as an argument, so a building model can call
 // them per column mark.
 
-import { working } from '../working/recorder';
+import { ended, quietly, working, type Recorder } from '../working/recorder';
 import { LibraryError, defineFunction, type LibFunction, type LibParam } from './types';
 import { finite, nonNegative, optional, positive } from './support-args';
 import { POSITIONS, boPunch, criticalSection, position, type Position } from './punching-perimeter';
@@ -57,7 +57,12 @@ export function tribAreaColumn(l1: number, l2: number, c1: number, c2: number, p
 export function frameWidth(l2: number, c2: number, pos: Position): number {
   positive('l2', l2);
   positive('c2', c2);
-  return pos === 'corner' ? l2 / 2 + c2 / 2 : l2;
+  const width = pos === 'corner' ? l2 / 2 + c2 / 2 : l2;
+  working()?.step('b_frame', pos === 'corner' ? 'l2 / 2 + c2 / 2' : 'l2', width, 'ft', {
+    vars: { l2: [l2, 'ft'], c2: [c2, 'in'] }, clause: 'ACI 318-19 §8.4.1.2; edge frame at a corner common practice',
+    note: pos === 'corner' ? 'edge frame: half the span and half the column to the slab edge' : 'the full transverse span',
+  });
+  return width;
 }
 
 /** Column strip width of the direction-1 frame: 0.25·min(ℓ1, ℓ2) each side (§8.4.1.5); at a corner one side plus c2/2 to the edge. */
@@ -90,7 +95,12 @@ export function csColumnFraction(pos: Position, l2OverL1: number, alphaRatio = 0
 export function bSlabTransfer(c2: number, h: number, pos: Position): number {
   positive('c2', c2);
   positive('h', h);
-  return pos === 'corner' ? c2 + 1.5 * h : c2 + 3 * h;
+  const width = pos === 'corner' ? c2 + 1.5 * h : c2 + 3 * h;
+  working()?.step('b_slab', pos === 'corner' ? 'c2 + 1.5 * h' : 'c2 + 2 * 1.5 * h', width, 'in', {
+    vars: { c2: [c2, 'in'], h: [h, 'in'] }, clause: 'ACI 318-19 §8.4.2.2.3',
+    note: pos === 'corner' ? '1.5h beyond the one face that is not on an edge' : '1.5h beyond each side face',
+  });
+  return width;
 }
 
 export interface AcrossProperties {
@@ -132,13 +142,54 @@ export function vuPunchBiaxial(vu: number, msc1: number, msc2: number, c1: numbe
   const V = nonNegative('Vu', vu);
   const M1 = Math.abs(finite('Msc1', msc1));
   const M2 = Math.abs(finite('Msc2', msc2));
-  const s = criticalSection(c1, c2, d, pos);
+  const w = working()?.open('vu_punch_biaxial', {
+    Vu: [V, 'kip'], Msc1: [msc1, 'kip*ft'], Msc2: [msc2, 'kip*ft'], c1: [c1, 'in'], c2: [c2, 'in'], d: [d, 'in'], position: pos,
+  }, 'ACI 318-19 §8.4.4.2.3, R8.4.4.2.3');
+  const bo = boPunch(c1, c2, d, pos);
   const p1 = sectionProperties(c1, c2, d, pos);
-  const direct = V / (boPunch(c1, c2, d, pos) * d);
+  const s = quietly(() => criticalSection(c1, c2, d, pos));
+  const direct = V / (bo * d);
   const fromM1 = (gammaV(s.b1, s.b2) * M1 * p1.cAB) / p1.jc;
-  const across = acrossProperties(c1, c2, d, pos);
+  const across = quietly(() => acrossProperties(c1, c2, d, pos));
   const fromM2 = (across.gammaV * M2 * across.c) / across.jc;
-  return { direct, fromM1, fromM2, vu: direct + fromM1 + fromM2 };
+  const out = { direct, fromM1, fromM2, vu: direct + fromM1 + fromM2 };
+  if (w) {
+    const vars = { Vu: [V, 'kip'], d: [d, 'in'] } as const;
+    w.step('v_direct', 'Vu / (bo * d)', direct, 'psi', { vars, clause: 'ACI 318-19 R8.4.4.2.3' });
+    w.step('v_M1', 'gamma_v * abs(Msc1) * c_AB / J_c', fromM1, 'psi', { vars: { Msc1: [msc1, 'kip*ft'] }, clause: 'ACI 318-19 R8.4.4.2.3', note: 'the moment from the direction-1 span' });
+    acrossSteps(w, c1, c2, d, pos, across);
+    w.step('v_M2', 'gamma_v2 * abs(Msc2) * c_2 / J_c2', fromM2, 'psi', { vars: { Msc2: [msc2, 'kip*ft'] }, clause: 'ACI 318-19 R8.4.4.2.3', note: 'the moment about the other axis' });
+    w.step('v_u', 'v_direct + v_M1 + v_M2', out.vu, 'psi', { clause: 'common practice', note: 'the three added at the corner of the section where they meet (conservative)' });
+  }
+  ended(w, out.vu, 'psi');
+  return out;
+}
+
+/** The section about the second axis, as the working shows it: c1 and c2 exchanged, or the edge's sum over its three sides. */
+function acrossSteps(w: Recorder, c1: number, c2: number, d: number, pos: Position, a: AcrossProperties): void {
+  const clause = 'ACI 318-19 R8.4.4.2.3';
+  const vars = { c1: [c1, 'in'], c2: [c2, 'in'], d: [d, 'in'] } as const;
+  if (pos === 'edge') {
+    const note = 'the three sides, symmetric about the axis along direction 1';
+    w.step('J_c2', 'd * b2^3 / 12 + b2 * d^3 / 12 + 2 * b1 * d * (b2 / 2)^2', a.jc, 'in^4', { vars, clause, note });
+    w.step('c_2', 'b2 / 2', a.c, 'in', { clause });
+    w.step('gamma_v2', '1 - 1 / (1 + 2 / 3 * sqrt(b2 / b1))', a.gammaV, '', { clause: 'ACI 318-19 Eq. 8.4.2.2.2, 8.4.4.2.2', note: 'b1 and b2 exchanged' });
+    return;
+  }
+  const inside = pos === 'interior';
+  const note = 'the section with c1 and c2 exchanged';
+  const { b1, b2 } = quietly(() => criticalSection(c2, c1, d, pos));
+  w.step('b1_2', inside ? 'c2 + d' : 'c2 + d / 2', b1, 'in', { vars, clause: 'ACI 318-19 §22.6.4.1', note });
+  w.step('b2_2', inside ? 'c1 + d' : 'c1 + d / 2', b2, 'in', { vars, clause: 'ACI 318-19 §22.6.4.1' });
+  if (inside) w.step('c_2', 'b1_2 / 2', a.c, 'in', { clause });
+  else {
+    w.step('A_c2', '(b1_2 + b2_2) * d', (b1 + b2) * d, 'in^2', { vars, clause });
+    w.step('c_2', 'b1_2 * d * (b1_2 / 2) / A_c2', a.c, 'in', { vars, clause });
+  }
+  const n = inside ? 2 : 1;
+  w.step('J_c2', 'n * (d * b1_2^3 / 12 + b1_2 * d^3 / 12 + b1_2 * d * (b1_2 / 2 - c_2)^2) + b2_2 * d * c_2^2 + (n - 1) * b2_2 * d * (b1_2 - c_2)^2',
+    a.jc, 'in^4', { vars: { ...vars, n }, clause });
+  w.step('gamma_v2', '1 - 1 / (1 + 2 / 3 * sqrt(b1_2 / b2_2))', a.gammaV, '', { clause: 'ACI 318-19 Eq. 8.4.2.2.2, 8.4.4.2.2' });
 }
 
 // ---- formula functions ----------------------------------------------------------------

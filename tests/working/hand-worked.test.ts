@@ -177,3 +177,33 @@ describe('other functions, each intermediate by hand', () => {
     close(one(w, 'Mu'), 541.875);
   });
 });
+
+describe('punching with moments about both axes, ACI 318-19 §22.6.4.1, R8.4.4.2.3 and Eq. 8.4.2.2.2 (from memory)', () => {
+  it('corner column 20 × 20 in, d = 8 in, Vu = 40 kip, Msc1 = 30 and Msc2 = 20 kip·ft: vu = 104.2 + 35.9 + 23.9 = 164.0 psi', () => {
+    const w = run('vu_punch_biaxial', 40 * kip, 30 * kipFt, 20 * kipFt, 20 * inch, 20 * inch, 8 * inch, 'corner');
+    close(one(w, 'bo'), 48); // b1 + b2 = (20 + 4) + (20 + 4)
+    close(one(w, 'v_direct'), 104.17); // 40,000/(48 · 8)
+    close(one(w, 'c_AB'), 6); // b1·d·(b1/2)/A_c = 24 · 8 · 12/384
+    close(one(w, 'J_c'), 24064); // 8·24³/12 + 24·8³/12 + 24·8·(12 − 6)² + 24·8·6² = 9216 + 1024 + 6912 + 6912
+    close(one(w, 'gamma_v'), 0.4); // 1 − 1/(1 + (2/3)√(24/24))
+    close(one(w, 'v_M1'), 35.904); // 0.4 · 360,000 lb·in · 6/24,064
+    close(one(w, 'J_c2'), 24064); // square: the same section with c1 and c2 exchanged
+    close(one(w, 'v_M2'), 23.936); // 0.4 · 240,000 · 6/24,064
+    close(one(w, 'v_u'), 164.007); // the three added at the section's inner corner (common practice)
+  });
+
+  it('edge column 20 × 20 in, d = 8 in: about the axis along direction 1 the three sides give Jc2 = 91,093 in⁴, c = 14 in, γv2 = 0.4186', () => {
+    const w = run('vu_punch_biaxial', 40 * kip, 30 * kipFt, 20 * kipFt, 20 * inch, 20 * inch, 8 * inch, 'edge');
+    close(one(w, 'bo'), 76); // 2 · 24 + 28
+    // d·b2³/12 + b2·d³/12 + 2·b1·d·(b2/2)² = 8·28³/12 + 28·8³/12 + 2·24·8·14² = 14,634.7 + 1,194.7 + 75,264
+    close(one(w, 'J_c2'), 91093.33);
+    close(one(w, 'c_2'), 14); // b2/2
+    close(one(w, 'gamma_v2'), 0.41863); // 1 − 1/(1 + (2/3)√(28/24))
+  });
+
+  it('effective slab width and frame width (ACI 318-19 §8.4.2.2.3 and §8.4.1.2; edge frame common practice)', () => {
+    close(one(run('b_slab_transfer', 20 * inch, 10 * inch, 'edge'), 'b_slab'), 50); // 20 + 2 · 1.5 · 10
+    close(one(run('b_slab_transfer', 20 * inch, 10 * inch, 'corner'), 'b_slab'), 35); // 20 + 1.5 · 10
+    close(one(run('frame_width', 22 * ft, 20 * inch, 'corner'), 'b_frame'), 11.8333); // 22/2 + 20/24 ft
+  });
+});
