@@ -29,6 +29,13 @@ export interface AppElements {
   redo: HTMLButtonElement;
 }
 
+/** Text typed in a field and not yet applied: an input's value, or a cell's source. */
+export interface Draft {
+  cellId: string;
+  kind: 'value' | 'source';
+  text: string;
+}
+
 export class App {
   key = '';
   history: History = startHistory({ meta: {} as DocMeta, cells: [] });
@@ -284,6 +291,52 @@ export class App {
     } finally {
       this.fromEditor = false;
     }
+  }
+
+  /** What is typed and not applied in `field` (the focused one by default): a value field, or the open editor's source. */
+  draft(field: EventTarget | null = document.activeElement): Draft | undefined {
+    if (field instanceof HTMLInputElement && field.classList.contains('value-field')) {
+      const cell = this.doc.cells.find((c) => c.id === this.cellIdOf(field));
+      if (cell?.kind === 'input' && field.value.trim() !== cell.value) return { cellId: cell.id, kind: 'value', text: field.value };
+      return undefined;
+    }
+    const cell = this.editor && this.doc.cells.find((c) => c.id === this.editor!.cell.id);
+    if (cell && this.editor!.typed !== cellSource(cell)) return { cellId: cell.id, kind: 'source', text: this.editor!.typed };
+    return undefined;
+  }
+
+  /** The id of the cell an element stands in. */
+  cellIdOf(el: Element): string | undefined {
+    return el.closest<HTMLElement>('article.cell')?.id.replace(/^cell-/, '');
+  }
+
+  /** Whether the sheet already holds a draft's text (it was applied after all). */
+  holds(d: Draft): boolean {
+    const cell = this.doc.cells.find((c) => c.id === d.cellId);
+    return !!cell && (d.kind === 'value' ? cell.kind === 'input' && cell.value === d.text.trim() : cellSource(cell) === d.text);
+  }
+
+  /** Puts a draft back where it was typed; false when its cell is gone. */
+  restoreDraft(d: Draft): boolean {
+    const cell = this.doc.cells.find((c) => c.id === d.cellId);
+    if (!cell) return false;
+    if (d.kind === 'value') {
+      this.view.select(d.cellId); // draws the cell at once: it may not be typeset yet
+      const field = this.view.element(d.cellId)?.querySelector<HTMLInputElement>('input.value-field');
+      if (!field) return false;
+      field.value = d.text;
+      field.focus();
+      return true;
+    }
+    this.openEditor(d.cellId);
+    this.editor?.putBack(d.text);
+    return this.editor !== undefined;
+  }
+
+  /** A cell as a message names it: its name, else its label, else its kind. */
+  cellTitle(id: string): string {
+    const cell = this.doc.cells.find((c) => c.id === id);
+    return (cell && (cellName(cell) ?? cell.label)) ?? 'a cell';
   }
 
   vocabulary(): Vocabulary {

@@ -20,6 +20,8 @@ export class Autosave {
   version = 0;
   private title = '';
   private pending?: History;
+  /** Being written: not safe until the store says so. */
+  private writing?: History;
   private timer?: number;
   private running = Promise.resolve();
   paused = false;
@@ -64,6 +66,7 @@ export class Autosave {
     this.pending = undefined;
     const key = this.key;
     this.running = this.running.then(async () => {
+      this.writing = h;
       try {
         const store = await this.store;
         if (!store) throw new Error('this browser cannot save (IndexedDB unavailable)');
@@ -72,6 +75,7 @@ export class Autosave {
         if (out.ok) {
           this.version = out.version;
           this.guard.announce(key, out.version);
+          this.writing = undefined; // stored: not dirty when the saved hook asks
           if (!this.pending) this.hooks.saved(out.version);
         } else {
           this.paused = true;
@@ -79,7 +83,12 @@ export class Autosave {
           this.hooks.conflict(out.theirs);
         }
       } catch (e) {
+        // Kept as pending: the next change or the next time the page is hidden tries again,
+        // and the journal (keep-work.ts) holds it meanwhile.
+        if (key === this.key && !this.pending) this.pending = h;
         this.hooks.failed(e);
+      } finally {
+        this.writing = undefined;
       }
     });
     return this.running;
@@ -87,6 +96,16 @@ export class Autosave {
 
   /** Whether this tab has changes not yet written. */
   get dirty(): boolean {
-    return this.pending !== undefined;
+    return this.pending !== undefined || this.writing !== undefined;
+  }
+
+  /** The latest history not yet safely in the store (pending, or being written), if any. */
+  get unsaved(): History | undefined {
+    return this.pending ?? this.writing;
+  }
+
+  /** The title the sheet is saved under. */
+  get sheetTitle(): string {
+    return this.title;
   }
 }

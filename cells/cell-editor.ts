@@ -138,6 +138,19 @@ export class CellEditor {
     return this.source?.text ?? this.plain?.value ?? this.titleField?.value ?? '';
   }
 
+  /** The source as typed, applied or not (kept across a reload by cells/keep-work.ts). */
+  get typed(): string {
+    return this.sourceText();
+  }
+
+  /** Puts typed text back (after a reload) and applies it as typing would. */
+  putBack(text: string): void {
+    if (this.source) this.source.setText(text);
+    else if (this.plain) this.plain.value = text;
+    else if (this.titleField) this.titleField.value = text;
+    this.schedule(text);
+  }
+
   private setMarks(marks: SourceMark[]): void {
     this.marks = marks;
     this.source?.setMarks(marks);

@@ -18,6 +18,10 @@ import { texHtml } from '../runtime/present/tex-live';
 import { installRecord } from './record/install';
 import { DOC_ID } from '../runtime/record/index';
 import { installReview } from './review/install';
+import { installKeepWork, journalSheet, restoreJournal, sheetStored } from './keep-work';
+import { showNotice } from './notice';
+import { downloadSheet, isStorageFull } from './storage-full';
+import { reopenWorkingCopy } from './working-copy';
 
 const $ = <T extends HTMLElement>(sel: string) => document.querySelector<T>(sel)!;
 
@@ -47,10 +51,16 @@ async function boot(): Promise<void> {
   const banner = $('#banner');
   const autosave = store || recordPage
     ? new Autosave(store ?? opening, guard, {
-      saving: () => app.setStatus('Saving…'),
+      saving: () => {
+        app.setStatus('Saving…');
+        journalSheet(app, autosave);
+      },
       conflict: (theirs) => showConflict(theirs),
-      saved: () => app.setStatus('Saved'),
-      failed: (e) => app.setStatus(`Not saved: ${String(e)}`),
+      saved: () => {
+        app.setStatus('Saved');
+        if (!autosave?.dirty) sheetStored(app.key);
+      },
+      failed: (e) => notSaved(e),
     })
     : undefined;
   const app = new App({
@@ -59,6 +69,17 @@ async function boot(): Promise<void> {
   }, autosave);
   (window as unknown as { loadtrace: App }).loadtrace = app; // for the end-to-end tests and the benchmark
   const records = installRecord(app); // calc records (issue 5): export, open, a record page's own document
+  installKeepWork(app, autosave); // the journal: unsaved work survives the tab closing (issue 15)
+
+  /** A failed save: said in the status, and when storage is full in a banner offering to export. */
+  function notSaved(e: unknown): void {
+    app.setStatus(`Not saved: ${String(e)}`);
+    if (!isStorageFull(e)) return;
+    showNotice('storage-full', 'The browser\'s storage is full, so your latest changes are not being saved (they are kept in this tab). Export your work now, then free some space.', [
+      { label: 'Export the record', run: () => void records.exportNow() },
+      { label: 'Download the sheet (.lt)', run: () => downloadSheet(app) },
+    ], 'alert');
+  }
   installReview(app); // checker review (issue 7): review mode, comments, sign-off, revisions, compare
 
   async function openKey(key: string): Promise<void> {
@@ -71,6 +92,7 @@ async function boot(): Promise<void> {
     await app.engine!.settled();
     await app.view.whenRendered();
     if (view) window.scrollTo(0, view.scrollY);
+    restoreJournal(app);
   }
 
   function showConflict(theirs: SavedSheet | undefined): void {
@@ -212,6 +234,10 @@ async function boot(): Promise<void> {
   const openedRecord = recordPage && (await records.openEmbedded());
   store ??= await opening;
   if (!store) cannotSave();
+  if (openedRecord) {
+    if (store) await reopenWorkingCopy(app, store);
+    restoreJournal(app);
+  }
   if (!openedRecord) await openKey(keyFromHash() ?? (store ? await store.getSetting<string>('last') : undefined) ?? 'demo');
   document.body.dataset.ready = 'true';
   // The source editor (CodeMirror) and, in a record, KaTeX load while the page is idle, so

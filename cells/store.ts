@@ -121,8 +121,18 @@ export class SheetStore {
       const tx = this.db.transaction([SHEETS, BASES], 'readwrite');
       const store = tx.objectStore(SHEETS);
       let outcome: SaveOutcome;
+      /** A put that throws at once (no room, a value it cannot store) fails the save with its own error. */
+      let thrown: unknown;
       const get = store.get(key);
       get.onsuccess = () => {
+        try {
+          write();
+        } catch (e) {
+          thrown = e;
+          tx.abort();
+        }
+      };
+      const write = () => {
         const current = get.result as SavedSheet | undefined;
         const have = current?.version ?? 0;
         if (have !== expected) {
@@ -139,8 +149,8 @@ export class SheetStore {
         if (outcome?.ok) this.bases.set(key, { doc: base, id: baseId });
         resolve(outcome);
       };
-      tx.onerror = () => reject(tx.error);
-      tx.onabort = () => reject(tx.error);
+      tx.onerror = () => reject(thrown ?? tx.error);
+      tx.onabort = () => reject(thrown ?? tx.error);
     });
   }
 

@@ -23,6 +23,7 @@ import { parseWithDom } from './dom-reader';
 import { lineElement, lineHtml } from './record-line';
 import { checkLoadedPage, shellProblem } from './seal-check';
 import { pageIsShell, recordShell } from './shell';
+import { recordKey } from '../working-copy';
 
 export interface RecordHooks {
   /** On a record page: opens the embedded document and returns true; elsewhere false. */
@@ -179,7 +180,8 @@ export function installRecord(app: App): RecordHooks {
     const sealed = await checkEmbedded(el.textContent ?? '', el.dataset.sha256);
     const { doc, errors } = parse(sealed.docText ?? '');
     const problems = [...sealed.problems, ...errors.slice(0, 8).map((e) => `line ${e.line}: ${e.message}`)];
-    const key = `record-${(sealed.actualDigest ?? '').slice(0, 12)}-${Date.now().toString(36)}`;
+    // One key per record document, so a reload reopens the edits saved under it (cells/working-copy.ts).
+    const key = recordKey(sealed.actualDigest ?? '');
     if (errors.length) dropped.set(key, linesDropped(errors.length, 'this record'));
     opened = { key, text: serialize(doc) };
     openDoc(doc, key, false);
