@@ -10,7 +10,7 @@ import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CalcDocument } from '../../runtime/document';
 import { parse } from '../../runtime/format/index';
-import { exportComputed } from '../../runtime/record/index';
+import { exportComputed } from '../../runtime/record/node';
 import { record } from '../hostile/figures';
 import { artifactsDir, launch, serve, type Browser, type Served } from './harness';
 import { appDist } from './app-session';
