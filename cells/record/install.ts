@@ -20,7 +20,7 @@ import { appHost } from '../review/host';
 import { reviewMode } from '../review/mode';
 import { sheetTitle } from '../templates';
 import { parseWithDom } from './dom-reader';
-import { lineElement, lineHtml } from './record-line';
+import { lineElement, lineHtml, underToolbar } from './record-line';
 import { checkLoadedPage, shellProblem } from './seal-check';
 import { pageIsShell, recordShell } from './shell';
 import { recordKey } from '../working-copy';
@@ -52,19 +52,7 @@ export function recordFileName(doc: CalcDocument, state: RecordState): string {
   return `${base || 'calc-record'}.html`;
 }
 
-function bannerEl(): HTMLElement {
-  let el = document.getElementById('lt-record-banner');
-  if (!el) {
-    el = document.createElement('div');
-    el.id = 'lt-record-banner';
-    el.className = 'banner lt-record-banner';
-    el.setAttribute('role', 'alert');
-    const toolbar = document.querySelector('.toolbar');
-    if (toolbar) toolbar.after(el);
-    else document.body.prepend(el);
-  }
-  return el;
-}
+const bannerEl = (): HTMLElement => underToolbar('lt-record-banner', 'banner lt-record-banner', 'alert');
 
 /** A plain message at the top of the page (empty list: none). */
 function showProblems(title: string, problems: string[]): void {

@@ -42,17 +42,20 @@ export function lineHtml(m: LineModel): string {
   return `${st}${m.seal ? ` ${sealHtml(m.seal, m.changedSinceOpen)}` : ''}`;
 }
 
-/** The line's element, placed under the toolbar once. */
-export function lineElement(): HTMLElement {
-  let el = document.getElementById('lt-record-line');
+/** The element with `id`, placed under the toolbar the first time it is asked for. */
+export function underToolbar(id: string, className: string, role: 'status' | 'alert'): HTMLElement {
+  let el = document.getElementById(id);
   if (!el) {
     el = document.createElement('div');
-    el.id = 'lt-record-line';
-    el.className = 'lt-record-line';
-    el.setAttribute('role', 'status');
+    el.id = id;
+    el.className = className;
+    el.setAttribute('role', role);
     const toolbar = document.querySelector('.toolbar');
     if (toolbar) toolbar.after(el);
     else document.body.prepend(el);
   }
   return el;
 }
+
+/** The line's element. */
+export const lineElement = (): HTMLElement => underToolbar('lt-record-line', 'lt-record-line', 'status');
