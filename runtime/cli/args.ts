@@ -1,5 +1,6 @@
 // Command-line arguments of `npm run calc -- FILE [--set NAME=VALUE]... [--json] ...`.
 
+import { parseCoverSpec, type CoverSetting } from './cover';
 import { parseMetaSpec, type MetaSetting } from './meta';
 
 export type Paper = 'Letter' | 'A4';
@@ -8,6 +9,12 @@ export type BatchOutput = 'record' | 'pdf' | 'both';
 
 export interface CalcArgs {
   file: string;
+  /** Every FILE given: one, or several with --package. */
+  files?: string[];
+  /** A calc package of every FILE: one HTML file (runtime/package). */
+  packageTo?: string;
+  /** The package's cover: its title and the engineer of record. */
+  covers?: CoverSetting[];
   sets: { name: string; value: string }[];
   /** Title-block fields set from the command line, in order (a later one wins). */
   metas?: MetaSetting[];
@@ -32,6 +39,7 @@ export const USAGE = `usage: npm run calc -- FILE [--set NAME=VALUE]... [--meta 
                       [--export OUT.html] [--pdf OUT.pdf [--paper letter|a4]] [--diff OTHER]
        npm run calc -- FILE --batch RUNS.csv --out DIR [--as record|pdf|both] [--paper letter|a4]
        npm run calc -- RECORD.html --verify
+       npm run calc -- FILE... --package OUT.html [--pdf OUT.pdf [--paper letter|a4]] [--meta KEY=VALUE]... [--cover KEY=VALUE]...
   FILE              a template or record (.lt text, or an exported .html record)
   --set NAME=VALUE  override an input, e.g. --set fc="5000 psi"
   --meta KEY=VALUE  set a title-block field of what is written, e.g. --meta job=LT-26-301;
@@ -52,13 +60,17 @@ export const USAGE = `usage: npm run calc -- FILE [--set NAME=VALUE]... [--meta 
                     units, e.g. 18 in); meta:KEY columns set the title block of that row
   --out DIR         where a batch writes one file per row and index.csv
   --as WHAT         a batch writes a record (default), a pdf, or both per row
+  --package OUT.html  one calc package of every FILE, in the order given: cover, contents with
+                    sheet numbers, revision log, codes and references cited, then each calc's
+                    sheets numbered across the package; --pdf prints it (--meta sets every title block)
+  --cover KEY=VALUE the package's cover: title, engineer, license (or licence), firm
 exit code: 0 every check passes, 1 a check fails, 2 the document, an override or a row is broken`;
 
 const PAPERS: Record<string, Paper> = { letter: 'Letter', a4: 'A4' };
 const BATCH_OUTPUTS: readonly BatchOutput[] = ['record', 'pdf', 'both'];
 
 export function parseArgs(argv: string[]): CalcArgs {
-  const out: CalcArgs & Required<Pick<CalcArgs, 'metas'>> = { file: '', sets: [], metas: [], json: false };
+  const out: CalcArgs & Required<Pick<CalcArgs, 'metas' | 'files' | 'covers'>> = { file: '', files: [], sets: [], metas: [], covers: [], json: false };
   let paperGiven = false;
   /** The value after an option, as `--opt VALUE` or `--opt=VALUE`. */
   const value = (a: string, opt: string, i: number, what: string): [string, number] => {
@@ -80,7 +92,11 @@ export function parseArgs(argv: string[]): CalcArgs {
     } else if (is(a, '--meta')) {
       [v, i] = value(a, '--meta', i, 'KEY=VALUE');
       out.metas.push(parseMetaSpec(v, (m) => new UsageError(m)));
-    } else if (is(a, '--export')) [out.exportTo, i] = value(a, '--export', i, 'an output file');
+    } else if (is(a, '--cover')) {
+      [v, i] = value(a, '--cover', i, 'KEY=VALUE');
+      out.covers.push(parseCoverSpec(v, (m) => new UsageError(m)));
+    } else if (is(a, '--package')) [out.packageTo, i] = value(a, '--package', i, 'an output file');
+    else if (is(a, '--export')) [out.exportTo, i] = value(a, '--export', i, 'an output file');
     else if (is(a, '--pdf')) [out.pdfTo, i] = value(a, '--pdf', i, 'an output file');
     else if (is(a, '--paper')) {
       [v, i] = value(a, '--paper', i, 'a size: letter or a4');
@@ -97,10 +113,19 @@ export function parseArgs(argv: string[]): CalcArgs {
       out.batchAs = v as BatchOutput;
     } else if (a === '--help' || a === '-h') throw new UsageError(USAGE);
     else if (a.startsWith('-')) throw new UsageError(`unknown option ${a}\n${USAGE}`);
-    else if (!out.file) out.file = a;
-    else throw new UsageError(`only one FILE may be given (got ${out.file} and ${a})`);
+    else out.files.push(a);
   }
-  if (!out.file) throw new UsageError(USAGE);
+  if (out.files.length === 0) throw new UsageError(USAGE);
+  out.file = out.files[0];
+  if (out.packageTo !== undefined) {
+    for (const [opt, given] of [['--export', out.exportTo], ['--diff', out.diffWith], ['--batch', out.batch], ['--set', out.sets[0]], ['--json', out.json || undefined], ['--verify', out.verify]] as const) {
+      if (given !== undefined) throw new UsageError(`${opt} does not go with --package: a package is written from its files as they are`);
+    }
+    if (paperGiven && out.pdfTo === undefined) throw new UsageError('--paper goes with --pdf');
+    return out;
+  }
+  if (out.files.length > 1) throw new UsageError(`only one FILE may be given (got ${out.files.join(', ')}); several go with --package OUT.html`);
+  if (out.covers.length > 0) throw new UsageError('--cover goes with --package');
   if (out.batch !== undefined) {
     if (out.outDir === undefined) throw new UsageError('--batch needs --out DIR, the folder for the files it writes');
     for (const [opt, given] of [['--export', out.exportTo], ['--pdf', out.pdfTo], ['--diff', out.diffWith]] as const) {

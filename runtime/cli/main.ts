@@ -1,18 +1,18 @@
 // `npm run calc -- FILE [--set NAME=VALUE]... [--json]`: run a template or record
 // headless with the same engine the browser uses.
 
-import { readFileSync, writeFileSync } from 'node:fs';
+import { writeFileSync } from 'node:fs';
 import { cellName, type CalcDocument } from '../document';
 import { nearestName } from '../formula/suggest';
 import { createEngine } from '../engine';
-import { parse } from '../format/index';
 import { setInputValueKeepUnit } from '../edit/index';
 import { parseArgs, UsageError, type CalcArgs } from './args';
 import { printDiff } from './diff';
 import { exitCode, resultRows, table } from './report';
-import { exportRecord, readDocumentSource } from '../record/index';
+import { exportRecord } from '../record/index';
+import { loadDocument } from './load';
 import { parseWithParse5 } from '../record/node';
-import { OLDER_RECORD } from '../record/verify';
+import { writePackage } from './package';
 import { recordShellFile } from './record-shell';
 import { runBatch } from './batch';
 import { withMeta } from './meta';
@@ -21,33 +21,6 @@ import type { Engine } from '../engine-types';
 import { callsOf } from '../working/calls';
 import { verifyReport } from './verify-report';
 
-interface Loaded {
-  doc: CalcDocument;
-  /** Anything wrong: lines that could not be read, a record altered or not whole. */
-  broken: boolean;
-  /** Lines of the document that could not be read (their blocks are not in `doc`). */
-  parseErrors: number;
-}
-
-/** A file's document, its faults reported through `err`; undefined when it cannot be read at all. */
-async function loadDocument(file: string, err: (s: string) => void): Promise<Loaded | undefined> {
-  let text: string;
-  try {
-    text = readFileSync(file, 'utf8');
-  } catch (e) {
-    err(`cannot read ${file}: ${(e as Error).message}`);
-    return undefined;
-  }
-  // An exported .html record: its embedded document checked against its seal, and the
-  // whole file against the record's seal (read with a real HTML parser).
-  const source = await readDocumentSource(text, parseWithParse5);
-  for (const p of source.problems) err(`${file}: ${p}`);
-  // A record written before whole-file seals is said to be so, and still runs as before.
-  const altered = source.problems.some((p) => p !== OLDER_RECORD);
-  const { doc, errors } = parse(source.docText);
-  for (const e of errors) err(`${file}:${e.line}:${e.column}: ${e.message}`);
-  return { doc, broken: errors.length > 0 || altered || (source.record && source.docText === ''), parseErrors: errors.length };
-}
 
 /**
  * What the CLI says when Loadtrace itself fails (a fault of ours, not of the document):
@@ -81,6 +54,7 @@ function notAnInput(doc: CalcDocument, name: string): string {
 
 async function calc(args: CalcArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
   if (args.verify) return verifyReport(args.file, out, err);
+  if (args.packageTo !== undefined) return writePackage(args, out, err);
   const loaded = await loadDocument(args.file, err);
   if (!loaded) return 2;
   const writes = args.exportTo !== undefined ? `--export ${args.exportTo}` : args.batch !== undefined ? `--batch ${args.batch}` : undefined;

@@ -18,11 +18,14 @@ function field(key: keyof DocMeta, meta: DocMeta): string {
   return `${cssString(`${TITLE_LABELS[key].short.toUpperCase()}  `)} ${cssString(v || '—')}`;
 }
 
-/** The @page rules for a document's title block (screen rules do not depend on the document). */
-export function pageCss(meta: DocMeta): string {
+/**
+ * The @page rules for a document's title block (screen rules do not depend on the
+ * document); `name` makes them a named page's, for one sheet of a package.
+ */
+export function pageCss(meta: DocMeta, name?: string): string {
   const box = 'font: 8pt/1.5 system-ui, "DejaVu Sans", sans-serif; white-space: pre-wrap; vertical-align: bottom; border-bottom: 1.4pt solid #000; padding: 0 1mm 1.6mm; color: #000;';
   // Only the left and right boxes: a centre box is always centred on the page and would overlap a long left one.
-  return `@page {
+  return `@page${name ? ` ${name}` : ''} {
   margin: 27mm 13mm 15mm 13mm;
   @top-left { ${box} width: 60%; text-align: left; content: ${field('project', meta)} "\\A " ${field('subject', meta)}; }
   @top-right { ${box} width: 40%; text-align: right; content: ${field('job', meta)} "   " ${field('revision', meta)} "   " ${field('date', meta)} "\\A " ${field('preparedBy', meta)} "   " ${field('checkedBy', meta)} "\\A SHEET " counter(page) " OF " counter(pages); }
@@ -51,7 +54,9 @@ export const STATIC_CSS = `
 .lt-summary table, .lt-review table { width: 100%; border-collapse: collapse; font: 13px system-ui, sans-serif; }
 .lt-summary th, .lt-summary td, .lt-review th, .lt-review td { text-align: left; padding: .15rem .4rem; border-bottom: 1px solid var(--lt-rule); vertical-align: top; overflow-wrap: anywhere; }
 .lt-summary th, .lt-review th { font-weight: 600; color: var(--lt-soft); border-bottom: 1.5px solid var(--lt-ink); }
+/* Outcome, ratio and number never break inside a word (a narrow column cut "Outcome" into "Outcom|e"). */
 .lt-sum-v { white-space: nowrap; font-weight: 600; }
+.lt-summary th, .lt-sum-r, .lt-sum-no { white-space: nowrap; overflow-wrap: normal; }
 .lt-sum-r { font-variant-numeric: tabular-nums; }
 .lt-st-fail .lt-sum-v, .lt-verdict.lt-fail { color: var(--lt-fail); }
 .lt-st-ok .lt-sum-v, .lt-verdict.lt-pass { color: var(--lt-ok); }

@@ -32,6 +32,8 @@ export interface StaticOptions {
   calls?: (id: string) => LibraryCall[];
   /** What the record is and what is known of its file (runtime/record/record-lines.ts). */
   record?: RecordLines;
+  /** The element's id (a package holds several sheets); lt-static when absent. */
+  id?: string;
 }
 
 /** The working of each library call, open or folded by the sheet's setting (runtime/working). */
@@ -77,7 +79,7 @@ export function staticHtml(
     options.exportedAt && `on ${escapeHtml(options.exportedAt)}`,
     options.digest && `· document SHA-256 <code>${escapeHtml(options.digest)}</code>`,
   ].filter(Boolean).join(' ');
-  return `<div id="lt-static" class="lt-static" lang="en">${warning}${titleBlockHtml(doc.meta)}
+  return `<div id="${escapeHtml(options.id ?? 'lt-static')}" class="lt-static" lang="en">${warning}${titleBlockHtml(doc.meta)}
 <p class="lt-caution" role="note">△ ${CAUTION}</p>
 ${staticRecordLines(doc, state, options.record)}
 ${calcHtml(doc, state, options.calls)}
