@@ -113,10 +113,11 @@ export class SourceEditor {
       // Above minimalSetup's keys, so Enter in a formula finishes rather than breaks the line.
       Prec.high(keymap.of([
         { key: 'Mod-Enter', run: () => (opts.onDone(), true) },
-        // A formula is one line: Enter (when no completion is open) finishes it.
-        // While completions are showing, Enter belongs to them.
+        // A formula is one line: Enter finishes it. While completions are showing, Enter
+        // belongs to them; while a query is only pending (none shown yet: fast typing or a
+        // busy machine), the reader sees no list, so Enter still finishes.
         ...(opts.mode === 'formula'
-          ? [{ key: 'Enter', run: (v: EditorView) => (completionStatus(v.state) === null && opts.onDone(), true) }]
+          ? [{ key: 'Enter', run: (v: EditorView) => (completionStatus(v.state) !== 'active' && opts.onDone(), true) }]
           : []),
         { key: 'Escape', run: () => (opts.onCancel(), true) },
       ])),

@@ -334,6 +334,19 @@ describe('the calc sheet in Chromium', () => {
     });
     expect(kept).toEqual({ head: true, tail: false, attached: true });
   });
+
+  it('Enter finishes a formula typed quickly, before any completion has shown', async () => {
+    // Typing starts a completion query that is answered a moment later; an Enter pressed in
+    // that moment (a fast typist, or a busy machine) must finish the formula, not vanish.
+    await page.locator('#cell-f1 .cell-no').click();
+    await page.keyboard.press('Enter');
+    await page.waitForFunction(() => document.activeElement?.closest('#cell-f1 .cm-editor') !== null);
+    await page.keyboard.press('End');
+    await page.keyboard.type(' + 0');
+    await page.keyboard.press('Enter');
+    await page.locator('#cell-f1 .cm-editor').waitFor({ state: 'detached', timeout: 5000 });
+    expect(await page.evaluate(() => (window as any).loadtrace.doc.cells.find((c: { id: string }) => c.id === 'f1').expr as string)).toMatch(/\+ 0$/);
+  });
 });
 
 describe('the source editor, loaded on first use', () => {
