@@ -22,6 +22,7 @@ import { installKeepWork, journalSheet, restoreJournal, sheetStored } from './ke
 import { showNotice } from './notice';
 import { downloadSheet, isStorageFull } from './storage-full';
 import { reopenWorkingCopy } from './working-copy';
+import { restoreScroll } from './scroll-restore';
 
 const $ = <T extends HTMLElement>(sel: string) => document.querySelector<T>(sel)!;
 
@@ -82,7 +83,16 @@ async function boot(): Promise<void> {
   }
   installReview(app); // checker review (issue 7): review mode, comments, sign-off, revisions, compare
 
+  // The app restores the view itself (after the sheet is typeset); the browser's own restore
+  // on reload runs while the page is still short, lands short and would be saved as the view.
+  history.scrollRestoration = 'manual';
+  // Until the saved view is restored, scrolling is the page loading, not the reader.
+  let restoringView = true;
+  let openings = 0; // which openKey the restore belongs to, when sheets are opened in quick turn
+
   async function openKey(key: string): Promise<void> {
+    const mine = ++openings;
+    restoringView = true;
     const saved = store ? await store.load(key) : undefined;
     const h = saved ? unpackHistory(saved) : fromTemplate(key);
     app.open(key, h, saved?.version ?? 0);
@@ -91,8 +101,9 @@ async function boot(): Promise<void> {
     const view = store ? await store.loadView(key) : undefined;
     await app.engine!.settled();
     await app.view.whenRendered();
-    if (view) window.scrollTo(0, view.scrollY);
+    const restored = view ? restoreScroll(view.scrollY) : Promise.resolve();
     restoreJournal(app);
+    void restored.then(() => { if (mine === openings) restoringView = false; });
   }
 
   function showConflict(theirs: SavedSheet | undefined): void {
@@ -219,6 +230,7 @@ async function boot(): Promise<void> {
   let scrollTimer: ReturnType<typeof setTimeout> | undefined;
   window.addEventListener('scroll', () => {
     clearTimeout(scrollTimer);
+    if (restoringView) return;
     scrollTimer = setTimeout(() => void store?.saveView(app.key, { scrollY: window.scrollY }), 200);
   }, { passive: true });
   window.addEventListener('pagehide', () => void autosave?.flushNow());

@@ -279,7 +279,27 @@ describe('the calc sheet in Chromium', () => {
       return window.scrollY;
     });
     expect(y).toBeGreaterThan(100);
-    await page.waitForTimeout(500); // the view is saved 200 ms after scrolling stops
+    // The view is saved 200 ms after scrolling stops; wait until it is in the browser's store
+    // (on a busy machine the write can take longer than any fixed pause).
+    const saved = await page.evaluate(async (want) => {
+      const key = decodeURIComponent(location.hash.replace(/^#sheet=/, ''));
+      const read = () => new Promise<{ scrollY: number } | undefined>((ok, no) => {
+        const open = indexedDB.open('loadtrace');
+        open.onerror = () => no(open.error);
+        open.onsuccess = () => {
+          const r = open.result.transaction('views').objectStore('views').get(key);
+          r.onsuccess = () => { open.result.close(); ok(r.result); };
+          r.onerror = () => no(r.error);
+        };
+      });
+      for (let t = 0; t < 100; t++) {
+        const view = await read();
+        if (view !== undefined && Math.abs(view.scrollY - want) < 5) return view.scrollY;
+        await new Promise((r) => setTimeout(r, 100));
+      }
+      return (await read())?.scrollY;
+    }, y);
+    expect(saved).toBeCloseTo(y, -1);
     await page.reload();
     await ready(page);
     await page.waitForFunction((want) => Math.abs(window.scrollY - want) < 5, y, { timeout: 5000 });
