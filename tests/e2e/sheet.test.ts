@@ -4,6 +4,7 @@
 // test-artifacts/ (git-ignored) for a person to look at.
 
 import { readFileSync } from 'node:fs';
+import { savedView } from './saved-view';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -281,24 +282,7 @@ describe('the calc sheet in Chromium', () => {
     expect(y).toBeGreaterThan(100);
     // The view is saved 200 ms after scrolling stops; wait until it is in the browser's store
     // (on a busy machine the write can take longer than any fixed pause).
-    const saved = await page.evaluate(async (want) => {
-      const key = decodeURIComponent(location.hash.replace(/^#sheet=/, ''));
-      const read = () => new Promise<{ scrollY: number } | undefined>((ok, no) => {
-        const open = indexedDB.open('loadtrace');
-        open.onerror = () => no(open.error);
-        open.onsuccess = () => {
-          const r = open.result.transaction('views').objectStore('views').get(key);
-          r.onsuccess = () => { open.result.close(); ok(r.result); };
-          r.onerror = () => no(r.error);
-        };
-      });
-      for (let t = 0; t < 100; t++) {
-        const view = await read();
-        if (view !== undefined && Math.abs(view.scrollY - want) < 5) return view.scrollY;
-        await new Promise((r) => setTimeout(r, 100));
-      }
-      return (await read())?.scrollY;
-    }, y);
+    const saved = await savedView(page, y);
     expect(saved).toBeCloseTo(y, -1);
     await page.reload();
     await ready(page);
